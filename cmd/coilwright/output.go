@@ -1,0 +1,13 @@
+package main
+
+import (
+	"encoding/json"
+	"io"
+)
+
+// writeJSON writes v as indented JSON with a final newline.
+func writeJSON(w io.Writer, v any) error {
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(v)
+}

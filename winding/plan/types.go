@@ -1,0 +1,188 @@
+package plan
+
+import (
+	"time"
+
+	"coilwright/winding"
+)
+
+// Plan is everything a person needs to wind, connect and prove one stator. It
+// is plain data built by Build from a job; screens and printouts only read it.
+// JSON names follow the contract in DESIGN.md.
+type Plan struct {
+	Name     string    `json:"name"`
+	Revision string    `json:"revision,omitempty"`
+	Date     time.Time `json:"date"` // from the job; fixes printed dates
+
+	Layout     *winding.Layout    `json:"layout"` // the layout contract object
+	Connection winding.Connection `json:"connection"`
+	Rotor      Rotor              `json:"rotor"` // inner or outer
+
+	TurnsPerCoil int  `json:"turns_per_coil"`
+	TurnsSolved  bool `json:"turns_solved"` // true when solved from an EMF or DC-bus target
+	EMF          *EMF `json:"emf,omitempty"`
+
+	Wire             Wire    `json:"wire"`
+	MeanTurnLengthMM float64 `json:"mean_turn_length_mm"` // of one coil
+	Slot             Slot    `json:"slot"`
+	SlotFill         float64 `json:"slot_fill"` // copper area in a slot / usable slot area (liner removed)
+
+	Coils []CoilPlan `json:"coils_plan"` // one per wound tooth, in winding order (phase, path, position)
+	Paths []PathPlan `json:"paths"`
+
+	PhaseResistance20C     float64 `json:"phase_resistance_20c_ohm"`
+	PhaseResistanceAmbient float64 `json:"phase_resistance_ambient_ohm"`
+	AmbientC               float64 `json:"ambient_c"`
+	RatedCurrentA          float64 `json:"rated_current_a"`
+	CurrentDensityAmm2     float64 `json:"current_density_a_per_mm2"`
+	CopperLossW            float64 `json:"copper_loss_w"` // all phases at rated current, at ambient
+
+	CopperLengthM float64 `json:"copper_length_m"` // all coils, jumpers and leads, one strand counted per strand
+	CopperMassKg  float64 `json:"copper_mass_kg"`
+	BuyLengthM    float64 `json:"buy_length_m"` // with the spool margin
+	BuyMassKg     float64 `json:"buy_mass_kg"`
+
+	Materials []Material `json:"materials"`
+	Steps     []Step     `json:"steps"`
+	Tests     []Test     `json:"tests"`
+	Warnings  []string   `json:"warnings"`
+	Cautions  []string   `json:"cautions"`
+}
+
+// Rotor says where the rotor is, which decides from where the air gap is seen.
+type Rotor string
+
+const (
+	InnerRotor Rotor = "inner"
+	OuterRotor Rotor = "outer"
+)
+
+// EMF reports the voltage the chosen turns give.
+type EMF struct {
+	FluxPerPoleWb    float64 `json:"flux_per_pole_wb"`
+	RatedSpeedRPM    float64 `json:"rated_speed_rpm"`
+	PhaseRMSAtRated  float64 `json:"phase_rms_at_rated_v"`
+	LineRMSAtRated   float64 `json:"line_rms_at_rated_v"`
+	CutInSpeedRPM    float64 `json:"cut_in_speed_rpm,omitempty"`
+	LineRMSAtCutIn   float64 `json:"line_rms_at_cut_in_v,omitempty"`
+	DCBusAtCutIn     float64 `json:"dc_bus_at_cut_in_v,omitempty"` // ideal six-pulse diode bridge
+	VoltsPerRPMPhase float64 `json:"phase_rms_v_per_rpm"`          // for back-EMF checks at any speed
+	Target           string  `json:"target,omitempty"`             // what the turns were solved for, in words
+}
+
+// Wire is the conductor as wound: one or more strands in hand.
+type Wire struct {
+	BareDiameterMM    float64 `json:"bare_diameter_mm"`
+	OverallDiameterMM float64 `json:"overall_diameter_mm"`
+	StrandsInHand     int     `json:"strands_in_hand"`
+	CopperAreaMM2     float64 `json:"copper_area_mm2"` // all strands
+	AWG               int     `json:"awg,omitempty"`   // when given as AWG
+	Grade             int     `json:"grade,omitempty"` // IEC 60317 enamel grade 1 or 2; 0 when measured
+	// DiameterTolMM is the IEC 60317 tolerance on the bare diameter (for the
+	// resistance band of check).
+	DiameterTolMM float64 `json:"diameter_tolerance_mm"`
+}
+
+// Slot is the slot cross-section.
+type Slot struct {
+	AreaMM2       float64 `json:"area_mm2"`
+	UsableAreaMM2 float64 `json:"usable_area_mm2"` // liner (and separator where shared) removed
+	OpeningMM     float64 `json:"opening_mm,omitempty"`
+	MaxTurns      int     `json:"max_turns_at_practical_fill"`
+	PracticalFill float64 `json:"practical_fill"`
+}
+
+// CoilPlan is one coil as it is wound.
+type CoilPlan struct {
+	Tooth       int               `json:"tooth"`
+	Phase       string            `json:"phase"`
+	Direction   winding.Direction `json:"direction"`
+	Path        int               `json:"path"`
+	Position    int               `json:"position"`
+	Turns       int               `json:"turns"`
+	WireLengthM float64           `json:"wire_length_m"` // turns x mean turn, one strand
+	Order       int               `json:"order"`         // 1..M in winding order: the N of "coil N of M"
+}
+
+// PathPlan is one parallel path of a phase: one continuous wire.
+type PathPlan struct {
+	Phase       string  `json:"phase"`
+	Path        int     `json:"path"`
+	Coils       int     `json:"coils"`
+	WireLengthM float64 `json:"wire_length_m"` // coils and jumpers between its terminals, one strand
+	CutLengthM  float64 `json:"cut_length_m"`  // with both leads and allowances: what to cut from the spool, one strand
+	Ohm20C      float64 `json:"ohm_20c"`
+}
+
+// Material is a line of the cut list besides copper: liners, separators,
+// sleeving, terminal marks.
+type Material struct {
+	Item     string  `json:"item"`
+	Count    int     `json:"count"`
+	SizeText string  `json:"size"`
+	Note     string  `json:"note,omitempty"`
+	LengthMM float64 `json:"length_mm,omitempty"`
+}
+
+// StepKind says what a bench step is.
+type StepKind string
+
+const (
+	StepPrepare   StepKind = "prepare"   // deburr, clean, liners: confirm
+	StepCoil      StepKind = "coil"      // wind one coil: count turns
+	StepJumper    StepKind = "jumper"    // carry the wire to the next coil: confirm
+	StepSeparator StepKind = "separator" // phase separator in a slot shared by two phases: confirm
+	StepTerminal  StepKind = "terminal"  // strip, sleeve and mark a lead: confirm
+	StepJoin      StepKind = "join"      // star point or delta corner, parallel-path joints: confirm
+	StepTest      StepKind = "test"      // a measurement: take readings
+)
+
+// Step is one step at the bench, in the order the work is done.
+type Step struct {
+	Index  int      `json:"index"` // 1-based position in Steps
+	Kind   StepKind `json:"kind"`
+	Title  string   `json:"title"`
+	Detail string   `json:"detail,omitempty"`
+
+	// Coil steps.
+	Coil *CoilStep `json:"coil,omitempty"`
+	// Jumper steps.
+	Jumper *winding.Jumper `json:"jumper,omitempty"`
+	// Separator steps: the slot.
+	Slot int `json:"slot,omitempty"`
+	// Test steps: the name of the Test in Plan.Tests.
+	Test string `json:"test,omitempty"`
+	// Reminders shown with the step (insulation, safety).
+	Reminders []string `json:"reminders,omitempty"`
+}
+
+// CoilStep is what the bench guide shows for a coil.
+type CoilStep struct {
+	Order       int     `json:"order"` // N of "coil N of M"
+	Of          int     `json:"of"`    // M
+	Tooth       int     `json:"tooth"`
+	Phase       string  `json:"phase"`
+	Path        int     `json:"path"`
+	Position    int     `json:"position"`
+	Direction   string  `json:"direction"` // "cw" or "ccw"
+	HowToWind   string  `json:"how_to_wind"`
+	Turns       int     `json:"turns"`
+	WireLengthM float64 `json:"wire_length_m"`
+	From        string  `json:"from"` // "start lead U1 (300 mm)" or "jumper from tooth 4"
+	To          string  `json:"to"`   // "jumper to tooth 7" or "finish lead U2 (300 mm)"
+	SlotBefore  int     `json:"slot_before"`
+	SlotAfter   int     `json:"slot_after"`
+}
+
+// Test is one line of the test plan.
+type Test struct {
+	Name    string  `json:"name"`
+	What    string  `json:"what"`
+	Limit   float64 `json:"limit"`
+	Unit    string  `json:"unit"`
+	Compare string  `json:"compare"` // "max", "min" or "band" (limit is then ± percent)
+	Voltage float64 `json:"test_voltage_v,omitempty"`
+	Source  string  `json:"source"`
+	Caution string  `json:"caution,omitempty"`
+	Note    string  `json:"note,omitempty"`
+}
