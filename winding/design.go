@@ -12,17 +12,21 @@ func Design(s Spec) (*Layout, error) {
 	return design(s.Normalize(), true)
 }
 
-// design does the work; full=false skips the harmonic spectrum and the
-// warnings that need it, for sweeps over many pairs.
+// design does the work; full=false is for sweeps over many pairs: it skips the
+// nearest-pair suggestions of a refusal, the harmonic spectrum, the warnings
+// and the winding order of the paths.
 func design(s Spec, full bool) (*Layout, error) {
 	if err := s.checkRange(); err != nil {
-		if se, ok := err.(*SpecError); ok && se.kind == ErrInfeasible {
+		if se, ok := err.(*SpecError); ok && se.kind == ErrInfeasible && full {
 			se.Nearest = nearestFeasible(s)
 		}
 		return nil, err
 	}
 	st := newStar(s)
 	if !st.assign() {
+		if !full {
+			return nil, ErrInfeasible
+		}
 		e := infeasible("poles", s.Poles, "no balanced %s winding exists for %d slots and %d poles (%s)",
 			layerWord(s.Layers), s.Slots, s.Poles, st.whyUnbalanced())
 		e.Nearest = nearestFeasible(s)
@@ -36,9 +40,9 @@ func design(s Spec, full bool) (*Layout, error) {
 		return nil, infeasible("paths", s.Paths,
 			"the coils of each phase cannot be split into %d paths with equal EMF phasors; feasible: %v", s.Paths, l.ParallelPaths)
 	}
-	l.assignPaths()
 	if full {
-		l.Harmonics = harmonicSpectrum(l, 3*max(s.Slots, s.PolePairs()))
+		l.assignPaths()
+		l.Harmonics = harmonicSpectrum(l, 3*max(s.Slots, s.PolePairs()), st.trig)
 		l.Warnings = warningsFor(l)
 	}
 	return l, nil
@@ -254,32 +258,52 @@ func phaseSpread(l *Layout, phase, nu int, tt trigTable) float64 {
 // of the two, over m times the coils per phase, times the pitch factor. Orders
 // where the phases cancel (the triplens of a three-phase winding, mostly) have
 // an MMF winding factor of 0 though the phase has one.
-func harmonicSpectrum(l *Layout, n int) []Harmonic {
+//
+// The coil phasor at order nu turns by -2*nu*(k-1) steps of 180/Q degrees, so
+// the spectrum repeats with period Q in nu: only the first Q orders are summed.
+func harmonicSpectrum(l *Layout, n int, tt trigTable) []Harmonic {
 	q := l.Spec.Slots
 	m := l.Spec.Phases
 	q2 := 2 * q
-	tt := newTrigTable(q)
 	rot := make([][2]float64, m) // exp(j*2*pi*k/m)
 	for k := range rot {
 		rot[k][1], rot[k][0] = math.Sincos(2 * math.Pi * float64(k) / float64(m))
+	}
+	// Per phase, per coil: step is the turn per order, ang the angle at the
+	// current order (both in steps of 180/Q degrees).
+	step := make([][]int, m)
+	ang := make([][]int, m)
+	for _, c := range l.Coils {
+		a := 0
+		if c.Direction == CCW {
+			a = q
+		}
+		step[c.Phase] = append(step[c.Phase], (q2-2*(c.Tooth-1)%q2)%q2)
+		ang[c.Phase] = append(ang[c.Phase], a)
 	}
 	re := make([]float64, m)
 	im := make([]float64, m)
 	nc := float64(l.CoilsPerPhase)
 	out := make([]Harmonic, n)
 	for nu := 1; nu <= n; nu++ {
-		for k := range re {
-			re[k], im[k] = 0, 0
+		if nu > q {
+			h := out[nu-q-1]
+			out[nu-1] = Harmonic{Order: nu, WindingFactor: h.WindingFactor, MMFWindingFactor: h.MMFWindingFactor}
+			continue
 		}
-		nr := nu % q2
-		for _, c := range l.Coils {
-			a := (-2 * nr * (c.Tooth - 1)) % q2
-			if c.Direction == CCW {
-				a += q
+		for k := 0; k < m; k++ {
+			var sr, si float64
+			st, an := step[k], ang[k]
+			for i := range an {
+				a := an[i] + st[i]
+				if a >= q2 {
+					a -= q2
+				}
+				an[i] = a
+				sr += tt.cos[a]
+				si += tt.sin[a]
 			}
-			a = ((a % q2) + q2) % q2
-			re[c.Phase] += tt.cos[a]
-			im[c.Phase] += tt.sin[a]
+			re[k], im[k] = sr, si
 		}
 		var fr, fi, br, bi float64
 		for k := 0; k < m; k++ {
@@ -289,7 +313,7 @@ func harmonicSpectrum(l *Layout, n int) []Harmonic {
 			br += re[k]*c + im[k]*s
 			bi += -re[k]*s + im[k]*c
 		}
-		kp := math.Abs(tt.sin[nr])
+		kp := math.Abs(tt.sin[nu%q2])
 		mmf := math.Max(math.Hypot(fr, fi), math.Hypot(br, bi)) / (float64(m) * nc)
 		out[nu-1] = Harmonic{Order: nu,
 			WindingFactor:    snap(kp * math.Hypot(re[0], im[0]) / nc),

@@ -1,6 +1,5 @@
 package winding
 
-import "sort"
 
 // feasiblePaths lists every number of parallel paths a for which the coils of
 // each phase split into a groups of identical make-up: the same count of coils
@@ -12,13 +11,10 @@ import "sort"
 func feasiblePaths(l *Layout) []int {
 	m := l.Spec.Phases
 	n := l.CoilsPerPhase
-	// counts[phase][angle] = number of coils
-	counts := make([]map[int]int, m)
-	for i := range counts {
-		counts[i] = map[int]int{}
-	}
+	q2 := 2 * l.Spec.Slots
+	counts := make([]int, m*q2) // coils by phase*2Q + signed angle
 	for _, c := range l.Coils {
-		counts[c.Phase][c.angle]++
+		counts[c.Phase*q2+c.angle]++
 	}
 	var out []int
 	for a := 1; a <= n; a++ {
@@ -26,14 +22,9 @@ func feasiblePaths(l *Layout) []int {
 			continue
 		}
 		ok := true
-		for _, byAngle := range counts {
-			for _, k := range byAngle {
-				if k%a != 0 {
-					ok = false
-					break
-				}
-			}
-			if !ok {
+		for _, k := range counts {
+			if k%a != 0 {
+				ok = false
 				break
 			}
 		}
@@ -52,24 +43,21 @@ func feasiblePaths(l *Layout) []int {
 func (l *Layout) assignPaths() {
 	a := l.Spec.Paths
 	m := l.Spec.Phases
-	type key struct{ phase, angle int }
-	total := map[key]int{}
+	q2 := 2 * l.Spec.Slots
+	total := make([]int, m*q2) // by phase*2Q + angle
 	for _, c := range l.Coils {
-		total[key{c.Phase, c.angle}]++
+		total[c.Phase*q2+c.angle]++
 	}
-	seen := map[key]int{}
+	seen := make([]int, m*q2)
+	pos := make([]int, m*a) // by phase*a + path-1
 	for i := range l.Coils {
 		c := &l.Coils[i]
-		k := key{c.Phase, c.angle}
+		k := c.Phase*q2 + c.angle
 		c.Path = seen[k]*a/total[k] + 1
 		seen[k]++
-	}
-	pos := make(map[[2]int]int, m*a)
-	for i := range l.Coils {
-		c := &l.Coils[i]
-		k := [2]int{c.Phase, c.Path}
-		pos[k]++
-		c.Position = pos[k]
+		pk := c.Phase*a + c.Path - 1
+		pos[pk]++
+		c.Position = pos[pk]
 	}
 	l.Chains = buildChains(l)
 }
@@ -96,33 +84,33 @@ type Jumper struct {
 	ReversesSense      bool // the next coil is wound the other way round
 }
 
+// buildChains groups the coils by phase and path. Coils are in tooth order and
+// positions rise with the tooth, so each chain is already in winding order.
 func buildChains(l *Layout) []Chain {
 	q := l.Spec.Slots
-	var chains []Chain
+	a := l.Spec.Paths
+	chains := make([]Chain, l.Spec.Phases*a)
 	for ph := 0; ph < l.Spec.Phases; ph++ {
-		for path := 1; path <= l.Spec.Paths; path++ {
-			var cs []Coil
-			for _, c := range l.Coils {
-				if c.Phase == ph && c.Path == path {
-					cs = append(cs, c)
-				}
-			}
-			sort.Slice(cs, func(i, j int) bool { return cs[i].Position < cs[j].Position })
-			ch := Chain{Phase: ph, Path: path,
-				Start: l.PhaseNames[ph] + "1", Finish: l.PhaseNames[ph] + "2"}
-			for i, c := range cs {
-				ch.Teeth = append(ch.Teeth, c.Tooth)
-				if i > 0 {
-					prev := cs[i-1]
-					ch.Jumpers = append(ch.Jumpers, Jumper{
-						FromTooth: prev.Tooth, ToTooth: c.Tooth,
-						Span:          ((c.Tooth-prev.Tooth)%q + q) % q,
-						ReversesSense: prev.Direction != c.Direction,
-					})
-				}
-			}
-			chains = append(chains, ch)
+		for path := 1; path <= a; path++ {
+			n := l.CoilsPerPhase / a
+			chains[ph*a+path-1] = Chain{Phase: ph, Path: path,
+				Start: l.PhaseNames[ph] + "1", Finish: l.PhaseNames[ph] + "2",
+				Teeth: make([]int, 0, n), Jumpers: make([]Jumper, 0, max(n-1, 0))}
 		}
+	}
+	last := make([]Coil, len(chains))
+	for _, c := range l.Coils {
+		ch := &chains[c.Phase*a+c.Path-1]
+		if len(ch.Teeth) > 0 {
+			prev := last[c.Phase*a+c.Path-1]
+			ch.Jumpers = append(ch.Jumpers, Jumper{
+				FromTooth: prev.Tooth, ToTooth: c.Tooth,
+				Span:          ((c.Tooth-prev.Tooth)%q + q) % q,
+				ReversesSense: prev.Direction != c.Direction,
+			})
+		}
+		ch.Teeth = append(ch.Teeth, c.Tooth)
+		last[c.Phase*a+c.Path-1] = c
 	}
 	return chains
 }
