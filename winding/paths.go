@@ -1,6 +1,5 @@
 package winding
 
-
 // feasiblePaths lists every number of parallel paths a for which the coils of
 // each phase split into a groups of identical make-up: the same count of coils
 // at each signed phasor angle. Such paths have the same EMF phasor at the
