@@ -48,8 +48,8 @@ func warningsFor(l *Layout) []Warning {
 	}
 	if l.WindingFactor > 0 && worst > SubHarmonicLimit*l.WindingFactor {
 		w = append(w, Warning{"sub-harmonic", fmt.Sprintf(
-			"sub-harmonic of order %d has winding factor %.3f (%.0f%% of the working one): extra rotor losses and noise",
-			worstOrder, worst, 100*worst/l.WindingFactor)})
+			"MMF sub-harmonic of order %d (below the working order %d) has winding factor %.3f, %.0f%% of the working one: extra rotor and magnet losses, noise",
+			worstOrder, p, worst, 100*worst/l.WindingFactor)})
 	}
 	if !l.RadialForceBalanced {
 		w = append(w, Warning{"unbalanced-pull", "no rotation maps the machine onto itself: the magnetic forces on the rotor do not cancel (unbalanced radial pull, vibration, bearing load)"})
