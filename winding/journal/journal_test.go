@@ -32,12 +32,12 @@ func TestDecodeSeeds(t *testing.T) {
 		errLine  int // 0: no error
 		lastStep int
 	}{
-		{"bench-session.progress", 7, false, 0, 40},
-		{"torn-tail.progress", 2, true, 0, 2},
-		{"garbled-last.progress", 1, true, 0, 1},
-		{"garbled-middle.progress", 1, false, 2, 1},
-		{"empty.progress", 0, false, 0, 0},
-		{"no-final-newline.progress", 1, false, 0, 1},
+		{"bench-session.jsonl", 7, false, 0, 40},
+		{"torn-tail.jsonl", 2, true, 0, 2},
+		{"garbled-last.jsonl", 1, true, 0, 1},
+		{"garbled-middle.jsonl", 1, false, 2, 1},
+		{"empty.jsonl", 0, false, 0, 0},
+		{"no-final-newline.jsonl", 1, false, 0, 1},
 	}
 	for _, c := range cases {
 		t.Run(c.file, func(t *testing.T) {
@@ -305,7 +305,7 @@ func TestFreshRecordCreatedOnFirstAppend(t *testing.T) {
 
 func TestNoFinalNewlineRepaired(t *testing.T) {
 	path := filepath.Join(t.TempDir(), "job.toml.progress")
-	os.WriteFile(path, readSeed(t, "no-final-newline.progress"), 0o644)
+	os.WriteFile(path, readSeed(t, "no-final-newline.jsonl"), 0o644)
 	s, ev, _, err := journal.Open(path, "test")
 	if err != nil || len(ev) != 1 {
 		t.Fatalf("Open = %d events, %v", len(ev), err)
