@@ -63,7 +63,7 @@ func TestDecodeSeeds(t *testing.T) {
 }
 
 func TestReplay(t *testing.T) {
-	ev, _, err := journal.Decode(readSeed(t, "bench-session.progress"))
+	ev, _, err := journal.Decode(readSeed(t, "bench-session.jsonl"))
 	if err != nil {
 		t.Fatal(err)
 	}
