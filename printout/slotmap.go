@@ -1,0 +1,359 @@
+package printout
+
+import (
+	"fmt"
+	"math"
+
+	"coilwright/winding"
+	"coilwright/winding/plan"
+)
+
+// toothAngle is the page angle (degrees, counter-clockwise) of tooth k of q:
+// tooth 1 at the top, numbers rising counter-clockwise as seen from the
+// connection end (DESIGN.md).
+func toothAngle(k, q int) float64 { return 90 + float64(k-1)*360/float64(q) }
+
+// ringGeometry is the set of radii the slot map uses, in mm.
+type ringGeometry struct {
+	centre              Point
+	rTag                float64 // first ring of lead tags
+	rNum, rArrow, rMark float64 // tooth number, sense arrow, phase mark
+	cell                float64 // size of one label cell
+	stagger             bool    // tooth numbers on two radii, odd teeth outer
+	rOut, rIn           float64 // iron band
+	yoke                float64 // yoke thickness
+}
+
+func ringFor(q int, centre Point, rMax float64) ringGeometry {
+	g := ringGeometry{centre: centre}
+	g.rTag = rMax - 9
+	g.rNum = rMax - 17.5
+	pitch := 2 * math.Pi * g.rNum / float64(q)
+	g.cell = math.Max(2.6, math.Min(7.5, pitch*0.86))
+	g.stagger = pitch < 6
+	if g.stagger {
+		// numbers alternate between two radii so three-digit numbers fit
+		g.rNum -= g.cell * 0.5
+	}
+	g.rArrow = g.rNum - g.cell*1.05
+	if g.stagger {
+		g.rArrow -= g.cell * 0.5
+	}
+	g.rMark = g.rArrow - g.cell*1.1
+	g.rOut = g.rMark - g.cell*0.5 - 0.8
+	g.rIn = g.rOut * 0.56
+	g.yoke = (g.rOut - g.rIn) * 0.26
+	return g
+}
+
+// slotMap draws the stator ring seen from the connection end with every
+// tooth numbered, its coil's phase mark and winding sense, and the leads,
+// then the legend and the title block.
+func (b *builder) slotMap() {
+	c := b.newPage(SlotMapPage, "Slot map")
+	l := b.p.Layout
+	q := l.Spec.Slots
+	titleH := 50.0
+	legendH := 14 + 5.0*float64((len(l.PhaseNames)+2)/3)
+	avail := b.bottom() - b.top() - titleH - legendH - 4
+	rMax := math.Min(avail, b.width()) / 2
+	centre := Point{b.paper.W / 2, b.top() + 2 + rMax}
+	g := ringFor(q, centre, rMax)
+
+	c.text(marginMM, b.top()+3, sizeSmall, Regular, Ink, left, "Seen from the connection (lead) end. Teeth numbered counter-clockwise.")
+	b.drawIron(c, g)
+	b.drawToothLabels(c, g)
+	b.drawLeads(c, g)
+	b.ringCentre(c, g)
+
+	y := centre.Y + rMax + 2
+	y = b.slotMapLegend(c, y)
+	b.titleBlock(c, math.Max(y+2, b.bottom()-titleH), titleH)
+}
+
+// drawIron draws yoke, coils and teeth.
+func (b *builder) drawIron(c *canvas, g ringGeometry) {
+	l := b.p.Layout
+	q := l.Spec.Slots
+	o := g.centre
+	iron := Colour{222, 222, 222}
+	outline := Pen{Width: 0.2, Colour: Colour{90, 90, 90}}
+	var yIn, yOut, tRoot, tTip float64
+	if b.p.Rotor == plan.OuterRotor {
+		yIn, yOut = g.rIn, g.rIn+g.yoke
+		tRoot, tTip = yOut, g.rOut
+	} else {
+		yIn, yOut = g.rOut-g.yoke, g.rOut
+		tRoot, tTip = yIn, g.rIn
+	}
+	c.circle(o.X, o.Y, yOut, outline, &Fill{iron})
+	c.circle(o.X, o.Y, yIn, outline, &Fill{White})
+	pitch := 360 / float64(q)
+	sector := func(r0, r1, a0, a1 float64) []Point {
+		return []Point{polar(o, r0, a0), polar(o, r1, a0), polar(o, r1, a1), polar(o, r0, a1)}
+	}
+	// coils under the teeth, so each shows as two sides in its slots
+	coilIn, coilOut := math.Min(tRoot, tTip), math.Max(tRoot, tTip)
+	span := coilOut - coilIn
+	coilIn += span * 0.16
+	coilOut -= span * 0.05
+	half := 0.45
+	if l.Spec.Layers == 1 {
+		half = 0.8
+	}
+	for _, cl := range l.Coils {
+		a := toothAngle(cl.Tooth, q)
+		st := b.phaseStyle(cl.Phase)
+		pen := Pen{Width: math.Min(0.6, 0.05*g.cell+0.2), Colour: st.Colour, Dash: scaleDash(st.Dash, g.cell/6), Round: true}
+		c.poly(sector(coilIn, coilOut, a-half*pitch, a+half*pitch), true, pen, &Fill{st.Tint})
+	}
+	// teeth with tip shoes
+	for k := 1; k <= q; k++ {
+		a := toothAngle(k, q)
+		shoe := (tTip - tRoot) * 0.12
+		body := sector(tRoot, tTip-shoe, a-0.17*pitch, a+0.17*pitch)
+		tip := sector(tTip-shoe, tTip, a-0.41*pitch, a+0.41*pitch)
+		pts := []Point{body[0], body[1], tip[0], tip[1], tip[2], tip[3], body[2], body[3]}
+		c.poly(pts, true, outline, &Fill{iron})
+	}
+	// rotor outline beyond the air gap
+	gap := math.Max(0.8, (g.rOut-g.rIn)*0.04)
+	rotorPen := Pen{Width: 0.25, Colour: Faint, Dash: Dash{1.5, 1}}
+	if b.p.Rotor == plan.OuterRotor {
+		c.circle(o.X, o.Y, g.rOut+gap, rotorPen, nil)
+	} else {
+		c.circle(o.X, o.Y, g.rIn-gap, rotorPen, nil)
+	}
+}
+
+// scaleDash shrinks a dash pattern for small drawings.
+func scaleDash(d Dash, k float64) Dash {
+	if d == nil {
+		return nil
+	}
+	k = math.Max(0.35, math.Min(1, k))
+	out := make(Dash, len(d))
+	for i, v := range d {
+		out[i] = v * k
+	}
+	return out
+}
+
+// drawToothLabels draws, for every tooth, its number and, where it is wound,
+// the phase mark (letter in a tinted disc outlined in the phase pattern) and
+// the winding sense arrow.
+func (b *builder) drawToothLabels(c *canvas, g ringGeometry) {
+	l := b.p.Layout
+	q := l.Spec.Slots
+	numSize := math.Max(4.2, math.Min(9, g.cell/ptMM*0.68))
+	if g.stagger {
+		numSize = math.Max(4.2, math.Min(9, g.cell/ptMM*0.75))
+	}
+	for k := 1; k <= q; k++ {
+		a := toothAngle(k, q)
+		rn := g.rNum
+		if g.stagger && k%2 == 1 {
+			rn += g.cell * 0.85
+		}
+		pn := polar(g.centre, rn, a)
+		c.label(pn.X, pn.Y, numSize, Bold, Ink, fmt.Sprint(k))
+		cl, ok := l.CoilOn(k)
+		if !ok {
+			pm := polar(g.centre, g.rMark, a)
+			c.label(pm.X, pm.Y, numSize, Regular, Faint, "–")
+			continue
+		}
+		b.phaseMark(c, polar(g.centre, g.rMark, a), g.cell*0.46, cl.Phase)
+		pa := polar(g.centre, g.rArrow, a)
+		c.senseArrow(pa.X, pa.Y, g.cell*0.3, cl.Direction == winding.CW, Ink, math.Max(0.18, g.cell*0.05))
+	}
+}
+
+// phaseMark is the phase letter in a disc tinted with the phase colour and
+// ringed in its pattern.
+func (b *builder) phaseMark(c *canvas, p Point, r float64, phase int) {
+	st := b.phaseStyle(phase)
+	c.circle(p.X, p.Y, r, Pen{Width: math.Max(0.25, r*0.14), Colour: st.Colour, Dash: scaleDash(st.Dash, r/3), Round: true}, &Fill{st.Tint})
+	size := math.Max(4, math.Min(11, r*1.25/ptMM))
+	col := st.Colour
+	if col == (Colour{128, 128, 128}) {
+		col = Colour{90, 90, 90} // darker grey letter reads better on its tint
+	}
+	c.label(p.X, p.Y, size, Bold, col, st.Name)
+}
+
+// leadTag is one terminal lead drawn on the slot map.
+type leadTag struct {
+	tooth int
+	mark  string
+	phase int
+}
+
+// leads lists the start and finish leads of every path.
+func (b *builder) leads() []leadTag {
+	l := b.p.Layout
+	var out []leadTag
+	for _, ch := range l.Chains {
+		if len(ch.Teeth) == 0 {
+			continue
+		}
+		s, f := ch.Start, ch.Finish
+		if l.Spec.Paths > 1 {
+			s = fmt.Sprintf("%s (%d)", ch.Start, ch.Path)
+			f = fmt.Sprintf("%s (%d)", ch.Finish, ch.Path)
+		}
+		out = append(out, leadTag{ch.Teeth[0], s, ch.Phase}, leadTag{ch.Teeth[len(ch.Teeth)-1], f, ch.Phase})
+	}
+	return out
+}
+
+// drawLeads draws each lead leaving its tooth radially with a terminal tag,
+// stepping a tag outward where it would cover another.
+func (b *builder) drawLeads(c *canvas, g ringGeometry) {
+	q := b.p.Layout.Spec.Slots
+	type rect struct{ x0, y0, x1, y1 float64 }
+	var placed []rect
+	size := sizeSmall + 0.5
+	for _, ld := range b.leads() {
+		a := toothAngle(ld.tooth, q)
+		w := textWidth(Bold, size, ld.mark) + 2.4
+		h := 4.2
+		var r rect
+		var at Point
+		for lvl := 0; lvl < 6; lvl++ {
+			// two radii, then the same radii stepped sideways either way
+			at = polar(g.centre, g.rTag+float64(lvl%2)*5, a)
+			if lvl >= 2 {
+				side := (w + 1.5) * float64(1-2*((lvl/2)%2))
+				at = polar(at, side, a+90)
+			}
+			r = rect{at.X - w/2, at.Y - h/2, at.X + w/2, at.Y + h/2}
+			clash := false
+			for _, p := range placed {
+				if r.x0 < p.x1+0.6 && p.x0 < r.x1+0.6 && r.y0 < p.y1+0.6 && p.y0 < r.y1+0.6 {
+					clash = true
+					break
+				}
+			}
+			if !clash {
+				break
+			}
+		}
+		placed = append(placed, r)
+		st := b.phaseStyle(ld.phase)
+		from := polar(g.centre, g.rNum+g.cell*0.45, a)
+		if g.stagger {
+			from = polar(g.centre, g.rNum+g.cell*1.45, a)
+		}
+		// lead line to the tag edge
+		c.line(from.X, from.Y, at.X, at.Y, Pen{Width: 0.45, Colour: st.Colour, Dash: st.Dash, Round: true})
+		c.box(r.x0, r.y0, w, h, Pen{Width: 0.35, Colour: Ink}, &Fill{White})
+		c.label(at.X, at.Y, size, Bold, Ink, ld.mark)
+	}
+}
+
+// ringCentre writes what the drawing shows inside the bore (or the yoke).
+func (b *builder) ringCentre(c *canvas, g ringGeometry) {
+	l := b.p.Layout
+	o := g.centre
+	r := g.rIn * 0.8
+	if b.p.Rotor == plan.OuterRotor {
+		r = g.rIn * 0.85
+	}
+	size := math.Max(5.5, math.Min(sizeHead, r/6/ptMM))
+	lh := size * ptMM * 1.35
+	lines := []string{
+		fmt.Sprintf("%d teeth, %d poles", l.Spec.Slots, l.Spec.Poles),
+		fmt.Sprintf("%s rotor", rotorWord(b.p.Rotor)),
+		fmt.Sprintf("%d turns per coil", b.p.TurnsPerCoil),
+		fmt.Sprintf("%s, %d path(s)", b.p.Connection, l.Spec.Paths),
+	}
+	y := o.Y - lh*float64(len(lines)-1)/2
+	for i, s := range lines {
+		f := Regular
+		if i == 0 {
+			f = Bold
+		}
+		c.label(o.X, y, size, f, Ink, s)
+		y += lh
+	}
+}
+
+func rotorWord(r plan.Rotor) string {
+	if r == plan.OuterRotor {
+		return "outer"
+	}
+	return "inner"
+}
+
+// slotMapLegend explains the marks and returns the y below it.
+func (b *builder) slotMapLegend(c *canvas, y float64) float64 {
+	l := b.p.Layout
+	x0 := float64(marginMM)
+	w := b.width()
+	h := 12 + 5.0*float64((len(l.PhaseNames)+2)/3)
+	c.box(x0, y, w, h, Pen{Width: 0.25, Colour: Faint}, &Fill{Panel})
+	c.text(x0+2, y+4, sizeSmall, Bold, Ink, left, "Legend")
+	colW := (w - 4) / 3
+	for i := range l.PhaseNames {
+		st := b.phaseStyle(i)
+		cx := x0 + 2 + float64(i%3)*colW
+		cy := y + 8 + float64(i/3)*5
+		c.line(cx, cy, cx+10, cy, Pen{Width: 0.7, Colour: st.Colour, Dash: st.Dash, Round: true})
+		b.phaseMark(c, Point{cx + 14, cy}, 2, i)
+		c.text(cx+17.5, cy+1, sizeSmall, Regular, Ink, left, fmt.Sprintf("phase %s: %s, %s line", st.Name, colourName(i), st.Pattern))
+	}
+	ly := y + 8 + 5*float64((len(l.PhaseNames)+2)/3)
+	c.senseArrow(x0+4, ly-0.6, 1.5, true, Ink, 0.3)
+	c.senseArrow(x0+9, ly-0.6, 1.5, false, Ink, 0.3)
+	c.text(x0+13, ly+0.5, sizeSmall, Regular, Ink, left,
+		"clockwise / counter-clockwise: the way round the tooth, seen from the air gap facing the tooth, going from the start terminal")
+	return y + h
+}
+
+// titleBlock draws the drawing's title block at y with height h.
+func (b *builder) titleBlock(c *canvas, y, h float64) {
+	l := b.p.Layout
+	x0 := float64(marginMM)
+	w := b.width()
+	heavy := Pen{Width: 0.5, Colour: Ink}
+	c.box(x0, y, w, h, heavy, nil)
+	rev := b.p.Revision
+	if rev == "" {
+		rev = "-"
+	}
+	type cell struct {
+		caption, value string
+		span           int
+	}
+	wf := fmt.Sprintf("%.3f", l.WindingFactor)
+	rows := [][]cell{
+		{{"job", b.jobName(), 4}, {"revision", rev, 1}, {"date", b.dateText(), 1}},
+		{{"slots / poles (Q / 2p)", fmt.Sprintf("%d / %d", l.Spec.Slots, l.Spec.Poles), 1}, {"layers", fmt.Sprintf("%d (%s)", l.Spec.Layers, layerText(l.Spec.Layers)), 2}, {"parallel paths", fmt.Sprint(l.Spec.Paths), 1}, {"connection", b.p.Connection.String(), 1}, {"winding factor", wf, 1}},
+		{{"turns per coil", fmt.Sprint(b.p.TurnsPerCoil), 1}, {"wire", b.wireText(), 2}, {"coils", fmt.Sprint(len(l.Coils)), 1}, {"rotor", rotorWord(b.p.Rotor), 1}, {"phases", fmt.Sprint(l.Spec.Phases), 1}},
+		{{"drawn by", "", 2}, {"checked by", "", 2}, {"signature", "", 2}},
+	}
+	rh := h / float64(len(rows))
+	unit := w / 6
+	for i, row := range rows {
+		ry := y + float64(i)*rh
+		if i > 0 {
+			c.line(x0, ry, x0+w, ry, thin)
+		}
+		cx := x0
+		for j, cl := range row {
+			cw := unit * float64(cl.span)
+			if j > 0 {
+				c.line(cx, ry, cx, ry+rh, thin)
+			}
+			c.text(cx+1.5, ry+3, sizeTiny, Regular, Colour{90, 90, 90}, left, cl.caption)
+			size := sizeBody + 1
+			f := Regular
+			if i == 0 && j == 0 {
+				size, f = sizeHead+1.5, Bold
+			}
+			c.text(cx+1.5, ry+rh-2.2, size, f, Ink, left, fit(cl.value, cw-3, size, f))
+			cx += cw
+		}
+	}
+}
