@@ -1,0 +1,101 @@
+package tui
+
+import (
+	"time"
+
+	"coilwright/winding/plan"
+)
+
+// Minimum terminal size for the guide; below it the guide asks for a larger
+// terminal (the work and the record are untouched).
+const (
+	minWidth  = 60
+	minHeight = 18
+)
+
+// shared is the context every screen reads: size, styles, keys, plan and
+// progress. Screens change progress only through record.
+type shared struct {
+	width, height int
+	sized         bool // a window size has arrived
+
+	st    *styles
+	keys  *keyMaps
+	plan  *plan.Plan
+	teeth []toothInfo
+	tests map[string]plan.Test
+	coils int // M of "coil N of M"
+
+	prog  *progress
+	out   *writer
+	where string
+	judge Judge
+	now   func() time.Time
+
+	rings map[ringKey]*ringGeometry // nil entry: no ring fits that box
+}
+
+// record applies a change in memory at once and queues it for the record.
+func (c *shared) record(e Entry) {
+	e.At = c.now()
+	if c.prog.apply(e) {
+		c.out.push(e)
+	}
+}
+
+// steps returns the plan's steps (nil-safe).
+func (c *shared) steps() []plan.Step {
+	if c.plan == nil {
+		return nil
+	}
+	return c.plan.Steps
+}
+
+// step returns step i (0-based) and whether it exists.
+func (c *shared) step(i int) (plan.Step, bool) {
+	s := c.steps()
+	if i < 0 || i >= len(s) {
+		return plan.Step{}, false
+	}
+	return s[i], true
+}
+
+// tooSmall reports whether the terminal is below the minimum or unknown.
+func (c *shared) tooSmall() bool {
+	return !c.sized || c.width < minWidth || c.height < minHeight
+}
+
+// ring returns the cached ring geometry for a box, or nil when none fits.
+func (c *shared) ring(w, h int) *ringGeometry {
+	q := len(c.teeth)
+	k := ringKey{q, w, h}
+	if g, ok := c.rings[k]; ok {
+		return g
+	}
+	var gp *ringGeometry
+	if g, ok := fitRing(q, w, h); ok {
+		gp = &g
+	}
+	if len(c.rings) > 64 {
+		c.rings = map[ringKey]*ringGeometry{}
+	}
+	c.rings[k] = gp
+	return gp
+}
+
+// currentTooth is the tooth the current step is about, 0 for none.
+func (c *shared) currentTooth() int {
+	s, ok := c.step(c.prog.current())
+	if !ok {
+		return 0
+	}
+	switch {
+	case s.Coil != nil:
+		return s.Coil.Tooth
+	case s.Jumper != nil:
+		return s.Jumper.ToTooth
+	case s.Kind == plan.StepSeparator && s.Slot > 0:
+		return s.Slot
+	}
+	return 0
+}

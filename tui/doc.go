@@ -1,0 +1,26 @@
+// Package tui is the bench guide: a terminal screen that leads a person through
+// winding, connecting and testing a tooth-coil stator one step at a time.
+//
+// Model. One root Model holds a screen (guide, overview, help) and a shared
+// context — the terminal size, the styles, the key maps, the plan and the
+// progress — handed by pointer to a small child model per screen. The guide
+// shows a drawing of the stator (teeth in a ring, or a developed strip when
+// the ring does not fit), the current step with everything needed to do it,
+// and a turn counter. Every change of progress (a turn counted, a step done,
+// an undo, a note, a reading) is applied in memory at once and queued for the
+// progress record; the queue is written by a tea.Cmd, one batch at a time, so
+// events reach the record in order and a write error keeps them in memory and
+// retries.
+//
+// Conventions. Teeth are numbered counter-clockwise seen from the lead end;
+// the ring is drawn as seen from the lead end with tooth 1 at the top. A
+// tooth's phase letter is upper case when its coil is wound clockwise and
+// lower case when counter-clockwise (seen from the air gap), doubled by a mark:
+// '>' clockwise, '<' counter-clockwise. A wound coil carries '#', the tooth of
+// the current step '@'; colour only repeats what the letters say.
+//
+// The package does no file I/O of its own: the progress record is a Recorder
+// given by the caller, and every call to it runs inside a tea.Cmd. It reads
+// plans and never changes them. It computes no verdicts of its own beyond a
+// plain limit comparison used when no Judge is given.
+package tui

@@ -1,0 +1,400 @@
+package tui
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+
+	"github.com/charmbracelet/bubbles/cursor"
+	"github.com/charmbracelet/bubbles/key"
+	"github.com/charmbracelet/bubbles/textinput"
+	tea "github.com/charmbracelet/bubbletea"
+
+	"coilwright/winding/plan"
+)
+
+// guideMode is what the guide screen is waiting for.
+type guideMode int
+
+const (
+	modeWork         guideMode = iota // counting turns or waiting for enter
+	modeConfirmTurns                  // the count differs from the plan
+	modeConfirmUndo                   // take back the last step?
+	modeNote                          // typing a note
+	modeReadings                      // typing readings of a test step
+	modeVerdict                       // the verdict of the readings is shown
+)
+
+func (m guideMode) String() string {
+	switch m {
+	case modeWork:
+		return "work"
+	case modeConfirmTurns:
+		return "confirm-turns"
+	case modeConfirmUndo:
+		return "confirm-undo"
+	case modeNote:
+		return "note"
+	case modeReadings:
+		return "readings"
+	case modeVerdict:
+		return "verdict"
+	}
+	return "unknown"
+}
+
+// maxTurns caps a typed count.
+const maxTurns = 99999
+
+// guideModel is the guide screen: the stator drawing and the current step.
+type guideModel struct {
+	c *shared
+
+	mode    guideMode
+	typed   bool // digits are being typed into the count
+	flash   string
+	note    textinput.Model
+	fields  []textinput.Model
+	focus   int
+	labels  []field
+	inErr   string
+	verdict *Verdict
+	values  []float64
+}
+
+func newTextInput(prompt string, limit int) textinput.Model {
+	ti := textinput.New()
+	ti.Prompt = prompt
+	ti.CharLimit = limit
+	ti.Cursor.SetMode(cursor.CursorStatic) // no blink: nothing runs while idle
+	return ti
+}
+
+func newGuide(c *shared) guideModel {
+	return guideModel{c: c, note: newTextInput("note: ", 200)}
+}
+
+// typing reports whether keys go to a text field, so global keys must not
+// take them.
+func (g guideModel) typing() bool { return g.mode == modeNote || g.mode == modeReadings }
+
+// resize sets the widths of the text fields.
+func (g guideModel) resize() guideModel {
+	w := max(10, g.c.width-16)
+	g.note.Width = w
+	for i := range g.fields {
+		g.fields[i].Width = 12
+	}
+	return g
+}
+
+// update handles a key on the guide screen.
+func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
+	k := g.c.keys
+	cur := g.c.prog.current()
+	s, ok := g.c.step(cur)
+	switch g.mode {
+	case modeNote:
+		switch {
+		case key.Matches(msg, k.typing.Accept):
+			if ok {
+				g.c.record(Entry{Kind: EntryNote, Step: s.Index, Note: strings.TrimSpace(g.note.Value())})
+				g.flash = "note saved on step " + strconv.Itoa(s.Index)
+			}
+			g.note.Blur()
+			g.mode = modeWork
+			return g, nil
+		case key.Matches(msg, k.typing.Cancel):
+			g.note.Blur()
+			g.mode = modeWork
+			return g, nil
+		}
+		var cmd tea.Cmd
+		g.note, cmd = g.note.Update(msg)
+		return g, cmd
+	case modeReadings:
+		return g.updateReadings(msg, s, ok)
+	case modeVerdict:
+		switch {
+		case key.Matches(msg, k.confirm.Yes):
+			if ok && g.verdict != nil {
+				g.c.record(Entry{Kind: EntryReading, Step: s.Index, Values: g.values, Verdict: g.verdict.Level})
+				g.c.record(Entry{Kind: EntryDone, Step: s.Index})
+				g.flash = fmt.Sprintf("step %d recorded: %s", s.Index, strings.ToUpper(g.verdict.Level))
+			}
+			g.mode, g.verdict = modeWork, nil
+		case key.Matches(msg, k.confirm.No):
+			g.mode, g.verdict = modeReadings, nil
+			return g, g.focusField(g.focus)
+		}
+		return g, nil
+	case modeConfirmTurns:
+		switch {
+		case key.Matches(msg, k.confirm.Yes):
+			if ok && s.Coil != nil {
+				g.complete(s)
+			}
+			g.mode = modeWork
+		case key.Matches(msg, k.confirm.No):
+			g.mode = modeWork
+		}
+		return g, nil
+	case modeConfirmUndo:
+		switch {
+		case key.Matches(msg, k.confirm.Yes):
+			if last := g.c.prog.lastDone(); last >= 0 {
+				ls, _ := g.c.step(last)
+				g.c.record(Entry{Kind: EntryUndo, Step: ls.Index})
+				g.flash = "undone: step " + strconv.Itoa(ls.Index) + " " + ls.Title
+			}
+			g.mode = modeWork
+		case key.Matches(msg, k.confirm.No):
+			g.mode = modeWork
+		}
+		return g, nil
+	}
+
+	// modeWork.
+	wasTyping := g.typed
+	g.typed = false
+	switch {
+	case key.Matches(msg, k.guide.Undo):
+		if g.c.prog.lastDone() >= 0 {
+			g.mode = modeConfirmUndo
+		} else {
+			g.flash = "nothing to undo"
+		}
+		return g, nil
+	case !ok:
+		return g, nil
+	case key.Matches(msg, k.guide.Note):
+		g.note.SetValue(g.c.prog.notes[cur])
+		g.note.CursorEnd()
+		g.mode = modeNote
+		return g, g.note.Focus()
+	}
+	if s.Kind == plan.StepCoil && s.Coil != nil {
+		n := g.c.prog.turns[cur]
+		switch {
+		case key.Matches(msg, k.guide.Count):
+			g.setTurns(s, n+1)
+		case key.Matches(msg, k.guide.Uncount):
+			g.setTurns(s, n-1)
+		case key.Matches(msg, k.guide.Digits):
+			d := int(msg.String()[0] - '0')
+			if wasTyping {
+				d = min(maxTurns, n*10+d)
+			}
+			g.setTurns(s, d)
+			g.typed = true
+		case key.Matches(msg, k.guide.Done):
+			if n == s.Coil.Turns {
+				g.complete(s)
+			} else {
+				g.mode = modeConfirmTurns
+			}
+		}
+		return g, nil
+	}
+	if s.Kind == plan.StepTest {
+		if key.Matches(msg, k.guide.Readings) {
+			return g.startReadings(s)
+		}
+		return g, nil
+	}
+	if key.Matches(msg, k.guide.Done) {
+		g.complete(s)
+	}
+	return g, nil
+}
+
+// setTurns changes the count of the coil in progress and records it.
+func (g *guideModel) setTurns(s plan.Step, n int) {
+	n = min(max(0, n), maxTurns)
+	if n == g.c.prog.turns[s.Index-1] {
+		return
+	}
+	g.c.record(Entry{Kind: EntryTurns, Step: s.Index, Turns: n})
+	g.flash = ""
+}
+
+// complete records the current step as done.
+func (g *guideModel) complete(s plan.Step) {
+	e := Entry{Kind: EntryDone, Step: s.Index}
+	if s.Coil != nil {
+		e.Turns = g.c.prog.turns[s.Index-1]
+		g.flash = fmt.Sprintf("coil %d of %d done: %d turns on tooth %d", s.Coil.Order, s.Coil.Of, e.Turns, s.Coil.Tooth)
+		if e.Turns != s.Coil.Turns {
+			g.flash += fmt.Sprintf(" (plan %d)", s.Coil.Turns)
+		}
+	} else {
+		g.flash = "done: " + s.Title
+	}
+	g.c.record(e)
+}
+
+// startReadings opens the reading fields of a test step.
+func (g guideModel) startReadings(s plan.Step) (guideModel, tea.Cmd) {
+	t := g.c.tests[s.Test]
+	g.labels = fieldsFor(g.c.plan, t)
+	g.fields = make([]textinput.Model, len(g.labels))
+	for i, f := range g.labels {
+		g.fields[i] = newTextInput(fmt.Sprintf("%-8s ", f.label), 16)
+		g.fields[i].Width = 12
+		g.fields[i].Placeholder = f.unit
+	}
+	if r := g.c.prog.readings[s.Index-1]; r != nil {
+		for i, v := range r.values {
+			if i < len(g.fields) {
+				g.fields[i].SetValue(strconv.FormatFloat(v, 'g', -1, 64))
+			}
+		}
+	}
+	g.mode, g.inErr = modeReadings, ""
+	return g, g.focusField(0)
+}
+
+func (g *guideModel) focusField(i int) tea.Cmd {
+	if len(g.fields) == 0 {
+		return nil
+	}
+	g.focus = (i%len(g.fields) + len(g.fields)) % len(g.fields)
+	for k := range g.fields {
+		g.fields[k].Blur()
+	}
+	return g.fields[g.focus].Focus()
+}
+
+// updateReadings handles keys while readings are typed.
+func (g guideModel) updateReadings(msg tea.KeyMsg, s plan.Step, ok bool) (guideModel, tea.Cmd) {
+	k := g.c.keys
+	switch {
+	case key.Matches(msg, k.typing.Cancel):
+		g.mode = modeWork
+		return g, nil
+	case msg.String() == "shift+tab" || msg.String() == "up":
+		return g, g.focusField(g.focus - 1)
+	case key.Matches(msg, k.typing.Next):
+		return g, g.focusField(g.focus + 1)
+	case key.Matches(msg, k.typing.Accept):
+		if g.focus < len(g.fields)-1 {
+			return g, g.focusField(g.focus + 1)
+		}
+		vals, err := parseReadings(g.fields, g.labels)
+		if err != "" {
+			g.inErr = err
+			return g, nil
+		}
+		if !ok {
+			g.mode = modeWork
+			return g, nil
+		}
+		t := g.c.tests[s.Test]
+		v := g.c.judge(g.c.plan, t, vals)
+		g.verdict, g.values, g.inErr = &v, vals, ""
+		g.mode = modeVerdict
+		for i := range g.fields {
+			g.fields[i].Blur()
+		}
+		return g, nil
+	}
+	if len(g.fields) == 0 {
+		return g, nil
+	}
+	var cmd tea.Cmd
+	g.fields[g.focus], cmd = g.fields[g.focus].Update(msg)
+	return g, cmd
+}
+
+// parseReadings reads every field as a number that is not negative.
+func parseReadings(fs []textinput.Model, labels []field) ([]float64, string) {
+	out := make([]float64, 0, len(fs))
+	for i, f := range fs {
+		txt := strings.TrimSpace(strings.ReplaceAll(f.Value(), ",", "."))
+		v, err := strconv.ParseFloat(txt, 64)
+		name := "reading"
+		if i < len(labels) {
+			name = labels[i].label
+		}
+		switch {
+		case txt == "":
+			return nil, name + ": type a number"
+		case err != nil || v != v || v > 1e15 || v < -1e15:
+			return nil, fmt.Sprintf("%s: %q is not a number (use digits and a point, e.g. 1.25)", name, txt)
+		case v < 0:
+			return nil, fmt.Sprintf("%s: %s is negative; readings here are magnitudes", name, txt)
+		}
+		out = append(out, v)
+	}
+	return out, ""
+}
+
+// shortHelp lists the keys that matter now, for the help line.
+func (g guideModel) shortHelp() []key.Binding {
+	k := g.c.keys
+	switch g.mode {
+	case modeNote:
+		return []key.Binding{k.typing.Accept, k.typing.Cancel}
+	case modeReadings:
+		return []key.Binding{k.typing.Accept, k.typing.Next, k.typing.Cancel}
+	case modeVerdict:
+		return []key.Binding{withHelp(k.confirm.Yes, "record and go on"), withHelp(k.confirm.No, "type again")}
+	case modeConfirmTurns:
+		return []key.Binding{withHelp(k.confirm.Yes, "record this count"), withHelp(k.confirm.No, "back to counting")}
+	case modeConfirmUndo:
+		return []key.Binding{withHelp(k.confirm.Yes, "undo it"), withHelp(k.confirm.No, "keep it")}
+	}
+	s, ok := g.c.step(g.c.prog.current())
+	var out []key.Binding
+	switch {
+	case !ok:
+	case s.Kind == plan.StepCoil:
+		out = append(out, k.guide.Count, k.guide.Uncount, k.guide.Digits, withHelp(k.guide.Done, "coil done"))
+	case s.Kind == plan.StepTest:
+		out = append(out, k.guide.Readings)
+	default:
+		out = append(out, withHelp(k.guide.Done, "confirm done"))
+	}
+	if ok {
+		out = append(out, k.guide.Note)
+	}
+	return append(out, k.guide.Undo, k.global.Overview, k.global.Help, k.global.Quit)
+}
+
+func withHelp(b key.Binding, desc string) key.Binding {
+	b.SetHelp(b.Help().Key, desc)
+	return b
+}
+
+// view renders the guide body in w x h cells.
+func (g guideModel) view(w, h int) string {
+	c := g.c
+	teeth := c.teeth
+	wound := c.prog.toothWound(c.steps(), len(teeth))
+	cur := c.currentTooth()
+
+	// The ring beside the step panel when both fit; else the strip above it.
+	const panelMin = 46
+	if rg := c.ring(max(0, w-panelMin-3), max(0, h-3)); rg != nil && len(teeth) > 0 {
+		d := renderRing(c.st, *rg, teeth, wound, cur, c.ringCaption())
+		left := c.st.drawing.Render(strings.Join(d.lines, "\n"))
+		lw := d.width + 2
+		if leg := legend(lw); leg != "" {
+			left += "\n" + c.st.dim.Render(leg)
+		}
+		pw := max(0, w-lw-1)
+		return joinColumns(left, strings.Join(g.panel(pw, h), "\n"), 1)
+	}
+	var top []string
+	if len(teeth) > 0 {
+		d := renderStrip(c.st, teeth, wound, cur, w)
+		top = append(top, d.lines...)
+		if leg := legend(w); leg != "" {
+			top = append(top, c.st.dim.Render(leg))
+		}
+	}
+	if len(top) > h/2 {
+		top = nil // the step matters more than the drawing
+	}
+	return strings.Join(append(top, g.panel(w, max(0, h-len(top)))...), "\n")
+}

@@ -1,0 +1,164 @@
+package tui
+
+import (
+	"errors"
+	"flag"
+	"os"
+	"path/filepath"
+	"strings"
+	"sync"
+	"testing"
+	"time"
+
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
+	"github.com/charmbracelet/x/ansi"
+	"github.com/muesli/termenv"
+)
+
+var update = flag.Bool("update", false, "rewrite the golden screens under testdata/golden/tui")
+
+func TestMain(m *testing.M) {
+	lipgloss.SetColorProfile(termenv.Ascii)
+	lipgloss.SetHasDarkBackground(true)
+	os.Exit(m.Run())
+}
+
+// memRecorder keeps entries in memory; fail makes Append refuse.
+type memRecorder struct {
+	mu      sync.Mutex
+	entries []Entry
+	fail    error
+}
+
+func (r *memRecorder) Append(e Entry) error {
+	r.mu.Lock()
+	defer r.mu.Unlock()
+	if r.fail != nil {
+		return r.fail
+	}
+	r.entries = append(r.entries, e)
+	return nil
+}
+
+func (r *memRecorder) all() []Entry {
+	r.mu.Lock()
+	defer r.mu.Unlock()
+	return append([]Entry(nil), r.entries...)
+}
+
+var errDiskFull = errors.New("write progress: no space left on device")
+
+var fixedNow = func() time.Time { return time.Date(2025, 3, 1, 9, 0, 0, 0, time.UTC) }
+
+// press builds the key message for a key name as bubbletea names it.
+func press(k string) tea.KeyMsg {
+	switch k {
+	case "enter":
+		return tea.KeyMsg{Type: tea.KeyEnter}
+	case "space", " ":
+		return tea.KeyMsg{Type: tea.KeySpace, Runes: []rune{' '}}
+	case "backspace":
+		return tea.KeyMsg{Type: tea.KeyBackspace}
+	case "esc":
+		return tea.KeyMsg{Type: tea.KeyEsc}
+	case "tab":
+		return tea.KeyMsg{Type: tea.KeyTab}
+	case "ctrl+c":
+		return tea.KeyMsg{Type: tea.KeyCtrlC}
+	}
+	return tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune(k)}
+}
+
+// drive sends messages to the model and runs the commands they return,
+// synchronously, the way the program loop would (timers are skipped).
+func drive(tb testing.TB, m *Model, msgs ...tea.Msg) {
+	tb.Helper()
+	for _, msg := range msgs {
+		run(m, msg, 0)
+	}
+}
+
+func run(m *Model, msg tea.Msg, depth int) {
+	if depth > 50 {
+		return
+	}
+	_, cmd := m.Update(msg)
+	runCmd(m, cmd, depth)
+}
+
+func runCmd(m *Model, cmd tea.Cmd, depth int) {
+	if cmd == nil {
+		return
+	}
+	done := make(chan tea.Msg, 1)
+	go func() { done <- cmd() }()
+	var out tea.Msg
+	select {
+	case out = <-done:
+	case <-time.After(50 * time.Millisecond):
+		return // a timer: the tests fire retries themselves
+	}
+	switch out := out.(type) {
+	case nil:
+	case tea.BatchMsg:
+		for _, c := range out {
+			runCmd(m, c, depth+1)
+		}
+	case tea.QuitMsg:
+	default:
+		run(m, out, depth+1)
+	}
+}
+
+// keys sends each key in turn.
+func keys(tb testing.TB, m *Model, ks ...string) {
+	tb.Helper()
+	for _, k := range ks {
+		drive(tb, m, press(k))
+	}
+}
+
+// repeat returns k n times.
+func repeat(k string, n int) []string {
+	out := make([]string, n)
+	for i := range out {
+		out[i] = k
+	}
+	return out
+}
+
+// plain is the View with escape codes removed.
+func plain(m *Model) string { return ansi.Strip(m.View()) }
+
+// golden compares a screen with testdata/golden/tui/name, or rewrites it.
+func golden(t *testing.T, name, got string) {
+	t.Helper()
+	path := filepath.Join("..", "testdata", "golden", "tui", name)
+	if *update {
+		if err := os.MkdirAll(filepath.Dir(path), 0o755); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		return
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("golden %s: %v (run go test ./tui -update)", name, err)
+	}
+	if string(want) != got {
+		t.Errorf("screen %s differs from the golden file:\n--- got\n%s\n--- want\n%s", name, got, want)
+	}
+}
+
+// lineWith returns the first line of s containing sub, or "".
+func lineWith(s, sub string) string {
+	for _, l := range strings.Split(s, "\n") {
+		if strings.Contains(l, sub) {
+			return l
+		}
+	}
+	return ""
+}

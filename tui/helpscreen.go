@@ -1,0 +1,69 @@
+package tui
+
+import (
+	"strings"
+
+	"github.com/charmbracelet/bubbles/help"
+	"github.com/charmbracelet/bubbles/key"
+	"github.com/charmbracelet/bubbles/viewport"
+	tea "github.com/charmbracelet/bubbletea"
+)
+
+// helpModel explains the keys, the marks of the drawing and where progress
+// is kept.
+type helpModel struct {
+	c  *shared
+	h  help.Model
+	vp viewport.Model
+}
+
+func newHelp(c *shared) helpModel {
+	return helpModel{c: c, h: newHelpView(), vp: viewport.New(0, 0)}
+}
+
+func (m helpModel) open(w, h int) helpModel {
+	m.h.Width = w
+	m.vp.Width, m.vp.Height = max(0, w), max(0, h)
+	m.vp.SetContent(m.content())
+	return m
+}
+
+func (m helpModel) update(msg tea.KeyMsg) (helpModel, tea.Cmd) {
+	k := m.c.keys.scroll
+	switch {
+	case key.Matches(msg, k.Up):
+		m.vp.ScrollUp(1)
+	case key.Matches(msg, k.Down):
+		m.vp.ScrollDown(1)
+	case key.Matches(msg, k.PageUp):
+		m.vp.PageUp()
+	case key.Matches(msg, k.PageDown):
+		m.vp.PageDown()
+	}
+	return m, nil
+}
+
+func (m helpModel) view() string { return m.vp.View() }
+
+func (m helpModel) content() string {
+	c := m.c
+	st := c.st
+	w := max(10, m.vp.Width)
+	b := &lines{st: st, w: w}
+	b.raw(st.title.Render("keys"))
+	b.raw(strings.Split(m.h.FullHelpView(c.keys.fullHelp()), "\n")...)
+	b.raw("")
+	b.text("While a note or a reading is typed, every key goes into the field: q, ? and o only work again after enter or esc.", st.dim.Render)
+	b.raw("", st.title.Render("the drawing"))
+	b.text("Each tooth shows its number, its phase letter and a mark. Upper case and '>' mean the coil is wound clockwise, lower case and '<' counter-clockwise, always seen from the air gap looking at the tooth face while following the wire from its start lead. '#' marks a coil already wound, '@' the tooth of the step in hand, '-' a tooth that carries no coil. The ring is seen from the lead end with tooth 1 at the top and the numbers rising counter-clockwise; on a small terminal the teeth are laid out flat in a strip.", st.value.Render)
+	b.raw("", st.title.Render("progress"))
+	where := c.where
+	if where == "" {
+		where = "(not kept: no record was given)"
+	}
+	b.text("Every turn counted and every step done is written to the record at once, so the guide resumes where it stopped even after a crash or a power cut: "+where, st.value.Render)
+	b.text("If the disk refuses a write, the guide says so, keeps everything in memory and tries again every few seconds.", st.value.Render)
+	b.raw("", st.title.Render("safety"))
+	b.text("Insulation and high-voltage tests can kill. They belong to a trained person with a suitable tester; follow local codes and licensed practice. Strong magnets pinch and a spinning rotor cuts: keep the rotor out until the winding is tested, and fingers clear.", st.caution.Render)
+	return strings.Join(b.l, "\n")
+}

@@ -1,0 +1,296 @@
+package tui
+
+import (
+	"fmt"
+	"strings"
+	"time"
+
+	"github.com/charmbracelet/bubbles/help"
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/x/ansi"
+
+	"coilwright/winding/plan"
+)
+
+// screen is the screen shown.
+type screen int
+
+const (
+	screenGuide screen = iota
+	screenOverview
+	screenHelp
+)
+
+func (s screen) String() string {
+	switch s {
+	case screenGuide:
+		return "guide"
+	case screenOverview:
+		return "overview"
+	case screenHelp:
+		return "help"
+	}
+	return "unknown"
+}
+
+// Options configure a guide.
+type Options struct {
+	Plan     *plan.Plan
+	Recorder Recorder // where progress goes; nil keeps it in memory only
+	History  []Entry  // the record so far, replayed to resume
+	Notice   string   // shown on the status line at start (e.g. a torn last line)
+	Where    string   // where progress is kept, in words, for the help screen
+	Judge    Judge    // verdicts of test readings; nil compares with the limits
+	Now      func() time.Time
+}
+
+// Model is the bench guide, a tea.Model.
+type Model struct {
+	c        *shared
+	screen   screen
+	guide    guideModel
+	overview overviewModel
+	help     helpModel
+	keyHelp  help.Model
+	notice   string
+	quitting bool
+	ignored  int // history entries that did not fit the plan
+}
+
+// New builds the guide and replays the history so it resumes where the work
+// stopped.
+func New(o Options) *Model {
+	c := &shared{
+		st:    newStyles(),
+		keys:  newKeyMaps(),
+		plan:  o.Plan,
+		where: o.Where,
+		judge: o.Judge,
+		now:   o.Now,
+		out:   &writer{rec: o.Recorder},
+		rings: map[ringKey]*ringGeometry{},
+		tests: map[string]plan.Test{},
+	}
+	if c.judge == nil {
+		c.judge = limitJudge
+	}
+	if c.now == nil {
+		c.now = time.Now
+	}
+	if o.Plan != nil {
+		c.teeth = teethOf(o.Plan.Layout)
+		for _, t := range o.Plan.Tests {
+			c.tests[t.Name] = t
+		}
+		for _, s := range o.Plan.Steps {
+			if s.Kind == plan.StepCoil {
+				c.coils++
+			}
+		}
+	}
+	c.prog = newProgress(len(c.steps()))
+	m := &Model{c: c, notice: o.Notice, keyHelp: newHelpView()}
+	for _, e := range o.History {
+		if !c.prog.apply(e) {
+			m.ignored++
+		}
+	}
+	if m.ignored > 0 {
+		m.notice = strings.TrimSpace(m.notice + fmt.Sprintf(" %d entries of the record do not match this plan and were left out.", m.ignored))
+	}
+	m.guide = newGuide(c)
+	m.overview = newOverview(c)
+	m.help = newHelp(c)
+	return m
+}
+
+// Init starts nothing: the guide waits for keys and the window size.
+func (m *Model) Init() tea.Cmd { return nil }
+
+// Update handles a message; all writing happens in the commands it returns.
+func (m *Model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	var cmd tea.Cmd
+	switch msg := msg.(type) {
+	case tea.WindowSizeMsg:
+		m.c.width, m.c.height, m.c.sized = max(0, msg.Width), max(0, msg.Height), true
+		m.keyHelp.Width = m.c.width
+		m.guide = m.guide.resize()
+		bw, bh := m.bodySize()
+		m.overview = m.overview.open(bw, bh)
+		m.help = m.help.open(bw, bh)
+	case savedMsg:
+		cmd = m.c.out.saved(msg)
+		if m.quitting && m.c.out.pending() == 0 {
+			return m, tea.Quit
+		}
+	case retryMsg:
+		cmd = m.c.out.retry()
+	case tea.KeyMsg:
+		cmd = m.key(msg)
+		if m.quitting {
+			if m.c.out.pending() == 0 && !m.c.out.inflight {
+				return m, tea.Quit
+			}
+		}
+	}
+	return m, tea.Batch(cmd, m.c.out.kick())
+}
+
+// key routes a key: global keys first unless text is being typed, then the
+// screen in front.
+func (m *Model) key(msg tea.KeyMsg) tea.Cmd {
+	k := m.c.keys.global
+	if key.Matches(msg, k.ForceQuit) {
+		m.quitting = true
+		return tea.Quit
+	}
+	m.notice = ""
+	if m.screen == screenGuide && m.guide.typing() {
+		var cmd tea.Cmd
+		m.guide, cmd = m.guide.update(msg)
+		return cmd
+	}
+	bw, bh := m.bodySize()
+	switch {
+	case key.Matches(msg, k.Quit):
+		m.quitting = true
+		return nil
+	case m.screen != screenHelp && key.Matches(msg, k.Help):
+		m.help = m.help.open(bw, bh)
+		m.screen = screenHelp
+		return nil
+	case m.screen == screenGuide && key.Matches(msg, k.Overview):
+		m.overview = m.overview.open(bw, bh)
+		m.screen = screenOverview
+		return nil
+	case m.screen != screenGuide && key.Matches(msg, m.c.keys.scroll.Back):
+		m.screen = screenGuide
+		return nil
+	}
+	var cmd tea.Cmd
+	switch m.screen {
+	case screenGuide:
+		m.guide, cmd = m.guide.update(msg)
+	case screenOverview:
+		m.overview, cmd = m.overview.update(msg)
+	case screenHelp:
+		m.help, cmd = m.help.update(msg)
+	}
+	return cmd
+}
+
+// bodySize is the space between the header and the status and help lines.
+func (m *Model) bodySize() (int, int) {
+	return m.c.width, max(0, m.c.height-3)
+}
+
+// View renders the screen in front.
+func (m *Model) View() string {
+	c := m.c
+	if c.tooSmall() {
+		return m.smallView()
+	}
+	bw, bh := m.bodySize()
+	var body string
+	switch m.screen {
+	case screenOverview:
+		body = m.overview.view()
+	case screenHelp:
+		body = m.help.view()
+	default:
+		body = m.guide.view(bw, bh)
+	}
+	body = fit(body, bw, bh)
+	if n := strings.Count(body, "\n") + 1; n < bh {
+		body += strings.Repeat("\n", bh-n)
+	}
+	return fit(m.header()+"\n"+body+"\n"+m.status()+"\n"+m.helpLine(), c.width, c.height)
+}
+
+// header is the top line: program, job, winding, and where the work stands.
+func (m *Model) header() string {
+	c := m.c
+	right := fmt.Sprintf("coils %d/%d  steps %d/%d", c.prog.coilsDone(c.steps()), c.coils, c.prog.count(), len(c.steps()))
+	if m.screen != screenGuide {
+		right = m.screen.String() + "  " + right
+	}
+	title := "coilwright bench"
+	rest := " | " + c.planName() + " | " + c.specText()
+	room := max(0, c.width-len(right)-1-len(title))
+	if lipglossWidth(rest) > room {
+		rest = " | " + c.planName()
+	}
+	if lipglossWidth(rest) > room {
+		rest = ansi.Truncate(rest, room, "")
+	}
+	left := c.st.title.Render(title) + c.st.dim.Render(rest)
+	gap := c.width - lipglossWidth(left) - len(right)
+	if gap < 1 {
+		return fit(left, c.width, 1)
+	}
+	return left + strings.Repeat(" ", gap) + c.st.strong.Render(right)
+}
+
+// status is the line above the key help: a write error first, then a
+// notice, then the last action.
+func (m *Model) status() string {
+	c := m.c
+	w := c.out
+	switch {
+	case w.err != nil:
+		s := fmt.Sprintf("NOT SAVED (%d changes kept in memory, retrying): %v", w.pending(), w.err)
+		if m.quitting {
+			s += " | ctrl+c quits and loses them"
+		}
+		return c.st.errorBar.Render(fit(s, c.width, 1))
+	case m.quitting:
+		return c.st.notice.Render("saving before quitting...")
+	case m.notice != "":
+		return c.st.notice.Render(fit(m.notice, c.width, 1))
+	case m.screen == screenGuide && m.guide.flash != "":
+		return c.st.ok.Render(fit(m.guide.flash, c.width, 1))
+	}
+	return ""
+}
+
+// helpLine is the short key help of the screen in front.
+func (m *Model) helpLine() string {
+	k := m.c.keys
+	var b []key.Binding
+	switch m.screen {
+	case screenGuide:
+		b = m.guide.shortHelp()
+	default:
+		b = []key.Binding{k.scroll.Up, k.scroll.Down, k.scroll.PageDown, k.scroll.Back, k.global.Quit}
+	}
+	return m.keyHelp.ShortHelpView(b)
+}
+
+// smallView asks for a larger terminal; it fits any size, even 0x0.
+func (m *Model) smallView() string {
+	c := m.c
+	if !c.sized {
+		return "coilwright bench: waiting for the terminal size..."
+	}
+	msg := fmt.Sprintf("Terminal too small: %dx%d.\nEnlarge it to at least %dx%d.\nYour progress is safe.", c.width, c.height, minWidth, minHeight)
+	if c.out.err != nil {
+		msg += "\nNOT SAVED: retrying."
+	}
+	lines := strings.Split(msg, "\n")
+	out := make([]string, 0, len(lines))
+	for _, l := range lines {
+		out = append(out, wrapPlain(l, c.width)...)
+	}
+	return fit(strings.Join(out, "\n"), c.width, c.height)
+}
+
+// newHelpView is a bubbles/help model with plain ASCII separators (the
+// default bullet and ellipsis are of ambiguous width on some terminals).
+func newHelpView() help.Model {
+	h := help.New()
+	h.ShortSeparator = " | "
+	h.FullSeparator = "   "
+	h.Ellipsis = "..."
+	return h
+}

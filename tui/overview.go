@@ -1,0 +1,145 @@
+package tui
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+
+	"github.com/charmbracelet/bubbles/key"
+	"github.com/charmbracelet/bubbles/viewport"
+	tea "github.com/charmbracelet/bubbletea"
+
+	"coilwright/winding"
+	"coilwright/winding/plan"
+)
+
+// overviewModel lists every step with its status, then the connection order.
+type overviewModel struct {
+	c  *shared
+	vp viewport.Model
+}
+
+func newOverview(c *shared) overviewModel {
+	return overviewModel{c: c, vp: viewport.New(0, 0)}
+}
+
+// open refreshes the content and scrolls to the current step.
+func (o overviewModel) open(w, h int) overviewModel {
+	o.vp.Width, o.vp.Height = max(0, w), max(0, h)
+	o.vp.SetContent(o.content())
+	o.vp.SetYOffset(max(0, o.c.prog.current()-h/3))
+	return o
+}
+
+func (o overviewModel) update(msg tea.KeyMsg) (overviewModel, tea.Cmd) {
+	k := o.c.keys.scroll
+	switch {
+	case key.Matches(msg, k.Up):
+		o.vp.ScrollUp(1)
+	case key.Matches(msg, k.Down):
+		o.vp.ScrollDown(1)
+	case key.Matches(msg, k.PageUp):
+		o.vp.PageUp()
+	case key.Matches(msg, k.PageDown):
+		o.vp.PageDown()
+	}
+	return o, nil
+}
+
+func (o overviewModel) view() string { return o.vp.View() }
+
+// statusMark is the status column of the overview: [x] done, [>] now, [ ] to do.
+func statusMark(done, now bool) string {
+	switch {
+	case done:
+		return "[x]"
+	case now:
+		return "[>]"
+	}
+	return "[ ]"
+}
+
+// content is the full overview text.
+func (o overviewModel) content() string {
+	c := o.c
+	st := c.st
+	var b strings.Builder
+	cur := c.prog.current()
+	steps := c.steps()
+	fmt.Fprintf(&b, "%s  %d of %d steps done, %d of %d coils\n", st.title.Render("all steps"), c.prog.count(), len(steps), c.prog.coilsDone(steps), c.coils)
+	digits := len(strconv.Itoa(len(steps)))
+	for i, s := range steps {
+		done := c.prog.done[i]
+		line := fmt.Sprintf("%s %*d  %s", statusMark(done, i == cur), digits, s.Index, stepLine(c, s, i))
+		switch {
+		case i == cur:
+			line = st.statusNow.Render(line)
+		case done:
+			line = st.statusDone.Render(line)
+		}
+		b.WriteString(line)
+		b.WriteByte('\n')
+	}
+	b.WriteByte('\n')
+	b.WriteString(st.title.Render("connection order"))
+	b.WriteByte('\n')
+	for _, l := range connectionOrder(c.plan) {
+		b.WriteString(l)
+		b.WriteByte('\n')
+	}
+	return strings.TrimRight(b.String(), "\n")
+}
+
+// stepLine is one step in a line, with what was recorded.
+func stepLine(c *shared, s plan.Step, i int) string {
+	var t string
+	switch {
+	case s.Coil != nil:
+		cs := s.Coil
+		t = fmt.Sprintf("coil %d of %d  tooth %d %s %s  %d turns", cs.Order, cs.Of, cs.Tooth, cs.Phase, cs.Direction, cs.Turns)
+		if c.prog.done[i] && c.prog.turns[i] != cs.Turns {
+			t += fmt.Sprintf(" (wound %d)", c.prog.turns[i])
+		} else if !c.prog.done[i] && c.prog.turns[i] > 0 {
+			t += fmt.Sprintf(" (%d so far)", c.prog.turns[i])
+		}
+	default:
+		t = string(s.Kind) + ": " + s.Title
+	}
+	if r := c.prog.readings[i]; r != nil {
+		t += " -> " + strings.ToUpper(r.verdict)
+	}
+	if c.prog.notes[i] != "" {
+		t += "  note: " + c.prog.notes[i]
+	}
+	return t
+}
+
+// connectionOrder says, path by path, the terminals and teeth in winding
+// order, then the joints of the connection.
+func connectionOrder(p *plan.Plan) []string {
+	if p == nil || p.Layout == nil {
+		return nil
+	}
+	l := p.Layout
+	var out []string
+	for _, ch := range l.Chains {
+		name := "?"
+		if ch.Phase >= 0 && ch.Phase < len(l.PhaseNames) {
+			name = l.PhaseNames[ch.Phase]
+		}
+		parts := []string{ch.Start}
+		for _, t := range ch.Teeth {
+			d := "?"
+			if co, ok := l.CoilOn(t); ok {
+				d = co.Direction.String()
+			}
+			parts = append(parts, fmt.Sprintf("%d %s", t, d))
+		}
+		parts = append(parts, ch.Finish)
+		out = append(out, fmt.Sprintf("phase %s path %d: %s", name, ch.Path, strings.Join(parts, " > ")))
+	}
+	for _, j := range winding.Joints(p.Connection, l.PhaseNames) {
+		out = append(out, fmt.Sprintf("join %s: %s", strings.Join(j.Marks, "+"), j.What))
+	}
+	return out
+}

@@ -1,0 +1,326 @@
+package tui
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+
+	"github.com/charmbracelet/x/ansi"
+
+	"coilwright/winding/plan"
+)
+
+// labelWidth is the width of the labels in the step panel.
+const labelWidth = 7
+
+// hvCaution is shown with every high-voltage test, whatever the plan says.
+const hvCaution = "CAUTION high voltage: only a trained person with a current-limited tester; " +
+	"keep everyone clear of the winding and the leads; discharge the winding to the core " +
+	"after the test; follow local codes and licensed practice."
+
+// lines collects wrapped panel lines of one width.
+type lines struct {
+	st *styles
+	w  int
+	l  []string
+}
+
+// text adds s wrapped to the width, each line styled by render.
+func (b *lines) text(s string, render func(...string) string) {
+	if b.w <= 0 || s == "" {
+		return
+	}
+	for _, ln := range strings.Split(ansi.Wrap(s, b.w, " -"), "\n") {
+		b.l = append(b.l, render(ln))
+	}
+}
+
+// kv adds a labelled value; continuation lines are indented under the value.
+func (b *lines) kv(label, value string) {
+	if value == "" {
+		return
+	}
+	vw := b.w - labelWidth
+	if vw < 8 {
+		b.text(label+" "+value, b.st.value.Render)
+		return
+	}
+	pad := strings.Repeat(" ", labelWidth)
+	for i, ln := range strings.Split(ansi.Wrap(value, vw, " -"), "\n") {
+		lab := pad
+		if i == 0 {
+			lab = b.st.dim.Render(fmt.Sprintf("%-*s", labelWidth, label))
+		}
+		b.l = append(b.l, lab+b.st.value.Render(ln))
+	}
+}
+
+// kvStrong is kv with the value in bold: the words that must not be missed.
+func (b *lines) kvStrong(label, value string) {
+	vw := b.w - labelWidth
+	if value == "" {
+		return
+	}
+	if vw < 8 {
+		b.text(label+" "+value, b.st.strong.Render)
+		return
+	}
+	pad := strings.Repeat(" ", labelWidth)
+	for i, ln := range strings.Split(ansi.Wrap(value, vw, " -"), "\n") {
+		lab := pad
+		if i == 0 {
+			lab = b.st.dim.Render(fmt.Sprintf("%-*s", labelWidth, label))
+		}
+		b.l = append(b.l, lab+b.st.strong.Render(ln))
+	}
+}
+
+// raw adds lines as they are, cut to the width.
+func (b *lines) raw(ss ...string) {
+	for _, s := range ss {
+		b.l = append(b.l, ansi.Truncate(s, max(0, b.w), ""))
+	}
+}
+
+// titled adds a title on the left and a note on the right of one line.
+func (b *lines) titled(title, right string) {
+	gap := b.w - ansi.StringWidth(title) - ansi.StringWidth(right)
+	if gap < 2 {
+		b.raw(b.st.coilTitle.Render(title))
+		return
+	}
+	b.raw(b.st.coilTitle.Render(title) + strings.Repeat(" ", gap) + b.st.dim.Render(right))
+}
+
+// panel renders the current step in a box of w x h cells.
+func (g guideModel) panel(w, h int) []string {
+	c := g.c
+	boxed := w >= 24 && h >= 5
+	cw := w
+	if boxed {
+		cw = max(0, w-4)
+	}
+	b := &lines{st: c.st, w: cw}
+	cur := c.prog.current()
+	s, ok := c.step(cur)
+	switch {
+	case !ok:
+		g.doneView(b)
+	case s.Kind == plan.StepCoil && s.Coil != nil:
+		g.coilView(b, s)
+	case s.Kind == plan.StepTest:
+		g.testView(b, s)
+	default:
+		g.checkView(b, s)
+	}
+	if ok && g.mode == modeNote {
+		b.raw("", g.note.View())
+	} else if ok && c.prog.notes[cur] != "" {
+		b.kv("note", c.prog.notes[cur])
+	}
+	if g.mode == modeConfirmUndo {
+		if last := c.prog.lastDone(); last >= 0 {
+			ls, _ := c.step(last)
+			b.raw("")
+			b.text(fmt.Sprintf("Undo step %d (%s)? enter/y undoes it, esc keeps it.", ls.Index, ls.Title), c.st.warn.Render)
+		}
+	}
+	inner := h
+	if boxed {
+		inner = max(0, h-2)
+	}
+	out := b.l
+	if len(out) > inner {
+		out = out[:inner]
+	}
+	if !boxed {
+		return out
+	}
+	return strings.Split(c.st.panel.Width(max(0, w-2)).Render(strings.Join(out, "\n")), "\n")
+}
+
+// stepOf is the "step i of n" note.
+func (g guideModel) stepOf(s plan.Step) string {
+	return fmt.Sprintf("step %d of %d", s.Index, len(g.c.steps()))
+}
+
+// coilView is the panel of a coil step.
+func (g guideModel) coilView(b *lines, s plan.Step) {
+	c := g.c
+	cs := s.Coil
+	b.titled(fmt.Sprintf("coil %d of %d", cs.Order, cs.Of), g.stepOf(s))
+	b.raw(fmt.Sprintf("tooth %s  phase %s  path %d, coil %d on the path",
+		c.st.strong.Render(strconv.Itoa(cs.Tooth)), c.st.phaseStyle(c.phaseIndex(cs.Phase)).Render(cs.Phase), cs.Path, cs.Position))
+	b.kvStrong("wind", cs.HowToWind)
+	n := c.prog.turns[s.Index-1]
+	b.raw("")
+	g.counter(b, n, cs.Turns)
+	if g.mode == modeConfirmTurns {
+		b.text(fmt.Sprintf("%d turns counted, the plan says %d. enter/y records %d; esc goes back to counting.", n, cs.Turns, n), c.st.warn.Render)
+	}
+	b.kv("wire", c.wireText(cs))
+	b.kv("from", cs.From)
+	b.kv("next", cs.To)
+	if cs.SlotBefore > 0 || cs.SlotAfter > 0 {
+		b.kv("slots", fmt.Sprintf("%d and %d (either side of tooth %d)", cs.SlotBefore, cs.SlotAfter, cs.Tooth))
+	}
+	for _, r := range s.Reminders {
+		b.kv("mind", r)
+	}
+	if s.Detail != "" {
+		b.kv("", s.Detail)
+	}
+}
+
+// counter shows the turn count in large figures with a bar against the plan.
+func (g guideModel) counter(b *lines, n, want int) {
+	st := g.c.st
+	style := st.counter
+	if n == want {
+		style = st.counterDone
+	}
+	big := bigNumber(n)
+	of := fmt.Sprintf("of %d turns", want)
+	switch {
+	case n == want:
+		of += "  = plan, enter"
+	case n > want:
+		of += fmt.Sprintf("  %d over", n-want)
+	default:
+		of += fmt.Sprintf("  %d to go", want-n)
+	}
+	bigW := ansi.StringWidth(big[0])
+	if bigW+2+len(of) <= b.w {
+		b.raw(style.Render(big[0]), style.Render(big[1])+"  "+of, style.Render(big[2]))
+	} else {
+		b.raw(style.Render(strconv.Itoa(n)) + " " + of)
+	}
+	bw := min(40, b.w-2)
+	if bw >= 10 && want > 0 {
+		fill := min(bw, n*bw/want)
+		b.raw("[" + strings.Repeat("#", fill) + strings.Repeat(".", bw-fill) + "]")
+	}
+}
+
+// checkView is the panel of a step that needs a confirmation.
+func (g guideModel) checkView(b *lines, s plan.Step) {
+	c := g.c
+	b.titled(string(s.Kind), g.stepOf(s))
+	b.text(s.Title, c.st.strong.Render)
+	b.text(s.Detail, c.st.value.Render)
+	if s.Kind == plan.StepSeparator && s.Slot > 0 {
+		q := len(c.teeth)
+		next := s.Slot%max(1, q) + 1
+		b.kv("slot", fmt.Sprintf("%d, between tooth %d and tooth %d", s.Slot, s.Slot, next))
+	}
+	if j := s.Jumper; j != nil {
+		t := fmt.Sprintf("from tooth %d to tooth %d, %d tooth pitches round the lead end", j.FromTooth, j.ToTooth, j.Span)
+		if j.ReversesSense {
+			t += "; the next coil goes round the other way"
+		}
+		b.kv("wire", t)
+	}
+	for _, r := range s.Reminders {
+		b.kv("mind", r)
+	}
+	b.raw("")
+	b.text("Press enter when this is done.", c.st.statusNow.Render)
+}
+
+// testView is the panel of a test step.
+func (g guideModel) testView(b *lines, s plan.Step) {
+	c := g.c
+	t, known := c.tests[s.Test]
+	b.titled("test", g.stepOf(s))
+	b.text(s.Title, c.st.strong.Render)
+	if known {
+		b.text(t.What, c.st.value.Render)
+		b.kv("limit", limitText(t))
+		b.kv("source", t.Source)
+		if t.Voltage > 0 {
+			b.kv("volts", fmt.Sprintf("%s V", fmtNum(t.Voltage)))
+			b.text(hvCaution, c.st.caution.Render)
+		}
+		if t.Caution != "" {
+			b.text("CAUTION "+t.Caution, c.st.caution.Render)
+		}
+		b.kv("", t.Note)
+	}
+	b.text(s.Detail, c.st.value.Render)
+	for _, r := range s.Reminders {
+		b.kv("mind", r)
+	}
+	switch g.mode {
+	case modeReadings:
+		b.raw("")
+		for _, f := range g.fields {
+			b.raw(f.View())
+		}
+		if g.inErr != "" {
+			b.text(g.inErr, c.st.fail.Render)
+		}
+	case modeVerdict:
+		b.raw("")
+		for i, f := range g.fields {
+			u := ""
+			if i < len(g.labels) {
+				u = " " + g.labels[i].unit
+			}
+			b.raw(f.Value() + u)
+		}
+		g.verdictView(b, g.verdict)
+		b.text("enter/y records it and goes on; esc types the readings again.", c.st.statusNow.Render)
+	default:
+		if r := c.prog.readings[s.Index-1]; r != nil {
+			b.kv("last", fmt.Sprintf("%v -> %s", r.values, strings.ToUpper(r.verdict)))
+		}
+		b.raw("")
+		b.text("Press enter to type the readings.", c.st.statusNow.Render)
+	}
+}
+
+// verdictView shows a verdict with its word and colour.
+func (g guideModel) verdictView(b *lines, v *Verdict) {
+	if v == nil {
+		return
+	}
+	st := g.c.st
+	render := st.warn.Render
+	switch v.Level {
+	case "pass":
+		render = st.ok.Render
+	case "fail":
+		render = st.fail.Render
+	}
+	b.raw(render("verdict: " + strings.ToUpper(v.Level)))
+	for _, l := range v.Lines {
+		b.text(l, st.value.Render)
+	}
+	if v.Level == "fail" {
+		b.text("Find the fault before going on: a failed test is recorded as failed.", st.fail.Render)
+	}
+}
+
+// limitText says a test's limit in words.
+func limitText(t plan.Test) string {
+	switch t.Compare {
+	case "max":
+		return fmt.Sprintf("at most %s %s", fmtNum(t.Limit), t.Unit)
+	case "min":
+		return fmt.Sprintf("at least %s %s", fmtNum(t.Limit), t.Unit)
+	case "band":
+		return fmt.Sprintf("within %s %% of each other", fmtNum(t.Limit))
+	}
+	if t.Limit != 0 {
+		return fmt.Sprintf("%s %s", fmtNum(t.Limit), t.Unit)
+	}
+	return ""
+}
+
+// doneView is the panel once every step is done.
+func (g guideModel) doneView(b *lines) {
+	c := g.c
+	b.titled("all steps done", fmt.Sprintf("%d of %d", c.prog.count(), len(c.steps())))
+	b.text(fmt.Sprintf("Every step of %s is recorded: %d coils wound.", c.planName(), c.prog.coilsDone(c.steps())), c.st.value.Render)
+	b.text("o shows every step with its record; u takes back the last one; q quits.", c.st.dim.Render)
+}

@@ -1,0 +1,314 @@
+package tui
+
+import (
+	"math"
+	"strconv"
+	"strings"
+
+	"coilwright/winding"
+)
+
+// The stator drawing. Each wound tooth is a token of four parts: a state mark
+// ('#' wound, '@' the current step, ' ' to do), the tooth number, the phase
+// letter (upper case clockwise, lower case counter-clockwise, seen from the
+// air gap) and a direction mark ('>' clockwise, '<' counter-clockwise). An
+// unwound tooth shows its number and '-'. The ring is drawn seen from the lead
+// end, tooth 1 at the top, numbers rising counter-clockwise; when it does not
+// fit, a developed strip shows a window of teeth round the current one.
+
+const (
+	markWound   = "#"
+	markCurrent = "@"
+	markTodo    = " "
+	markCW      = ">"
+	markCCW     = "<"
+	markUnwound = "-"
+)
+
+// toothInfo is what the drawing needs of one tooth.
+type toothInfo struct {
+	wound  bool // carries a coil
+	phase  int
+	letter string // phase letter, lower case for CCW
+	dir    string // markCW or markCCW
+}
+
+// teethOf lists the teeth of a layout, index 0 = tooth 1.
+func teethOf(l *winding.Layout) []toothInfo {
+	if l == nil {
+		return nil
+	}
+	q := l.Spec.Slots
+	out := make([]toothInfo, q)
+	for t := 1; t <= q; t++ {
+		c, ok := l.CoilOn(t)
+		if !ok || c.Phase < 0 || c.Phase >= len(l.PhaseNames) {
+			continue
+		}
+		ti := toothInfo{wound: true, phase: c.Phase, letter: l.PhaseNames[c.Phase], dir: markCW}
+		if c.Direction == winding.CCW {
+			ti.letter = strings.ToLower(ti.letter)
+			ti.dir = markCCW
+		}
+		out[t-1] = ti
+	}
+	return out
+}
+
+// tokenText is the plain text of a tooth token (without the state mark).
+func tokenText(t int, ti toothInfo) string {
+	if !ti.wound {
+		return strconv.Itoa(t) + markUnwound + " "
+	}
+	return strconv.Itoa(t) + ti.letter + ti.dir
+}
+
+// ringGeometry is where each token goes in a ring that fits a box.
+type ringGeometry struct {
+	w, h   int   // box
+	x, y   []int // left column and row of each token (index 0 = tooth 1)
+	tw     int   // token width (state mark included)
+	cx, cy int
+	rx, ry float64
+}
+
+// innerWidth is the width free for a caption on row y inside the ring.
+func (g ringGeometry) innerWidth(y int) int {
+	if g.ry <= 0 {
+		return 0
+	}
+	f := float64(y-g.cy) / g.ry
+	if f <= -1 || f >= 1 {
+		return 0
+	}
+	hw := g.rx * math.Sqrt(1-f*f)
+	return max(0, int(2*(hw-float64(g.tw)/2-1)))
+}
+
+// ringKey caches ring geometry per stator and box.
+type ringKey struct{ q, w, h int }
+
+// fitRing finds the smallest ring of q teeth whose tokens do not touch, inside
+// a box of w x h cells; ok is false when none fits.
+func fitRing(q, w, h int) (ringGeometry, bool) {
+	if q < 3 || w < 10 || h < 5 {
+		return ringGeometry{}, false
+	}
+	tw := 1 + len(strconv.Itoa(q)) + 2
+	minRx := math.Max(6, float64(q*(tw+1))/(2*math.Pi))
+	for rx := minRx; ; rx += 0.5 {
+		ry := math.Max(rx*0.46, float64(q)/(2*math.Pi)*1.1)
+		gw := int(math.Ceil(2*rx)) + tw + 1
+		gh := int(math.Ceil(2*ry)) + 1
+		if gw > w || gh > h {
+			return ringGeometry{}, false
+		}
+		g := ringGeometry{w: gw, h: gh, tw: tw, x: make([]int, q), y: make([]int, q)}
+		g.cx, g.cy, g.rx, g.ry = gw/2, gh/2, rx, ry
+		for i := 0; i < q; i++ {
+			th := math.Pi/2 + 2*math.Pi*float64(i)/float64(q) // counter-clockwise from the top
+			g.x[i] = min(max(0, int(math.Round(float64(g.cx)+rx*math.Cos(th)))-tw/2), gw-tw)
+			g.y[i] = min(max(0, int(math.Round(float64(g.cy)-ry*math.Sin(th)))), gh-1)
+		}
+		if !g.overlaps() {
+			return g, true
+		}
+	}
+}
+
+// overlaps reports whether two tokens on one row are closer than one space.
+func (g ringGeometry) overlaps() bool {
+	for i := range g.x {
+		for j := i + 1; j < len(g.x); j++ {
+			if g.y[i] != g.y[j] {
+				continue
+			}
+			if g.x[i] < g.x[j]+g.tw+1 && g.x[j] < g.x[i]+g.tw+1 {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// drawing is a rendered stator: lines of equal display width.
+type drawing struct {
+	lines []string
+	width int
+}
+
+// stateMark is the first character of a token.
+func stateMark(wound, current bool) string {
+	switch {
+	case current:
+		return markCurrent
+	case wound:
+		return markWound
+	}
+	return markTodo
+}
+
+// styledToken renders one tooth token padded to width tw.
+func styledToken(st *styles, t int, ti toothInfo, wound, current bool, tw int) string {
+	text := tokenText(t, ti)
+	mark := stateMark(wound, current)
+	pad := strings.Repeat(" ", max(0, tw-1-len(text)))
+	switch {
+	case current:
+		return st.current.Render(mark+text) + pad
+	case !ti.wound:
+		return st.dim.Render(mark+text) + pad
+	case wound:
+		return st.done.Render(mark+text) + pad
+	}
+	return mark + st.phaseStyle(ti.phase).Render(text) + pad
+}
+
+// renderRing draws the ring with a caption in the middle.
+func renderRing(st *styles, g ringGeometry, teeth []toothInfo, wound []bool, current int, caption []string) drawing {
+	type seg struct {
+		x    int
+		w    int
+		text string
+	}
+	rows := make([][]seg, g.h)
+	for i, ti := range teeth {
+		if i >= len(g.x) {
+			break
+		}
+		w := i < len(wound) && wound[i]
+		rows[g.y[i]] = append(rows[g.y[i]], seg{g.x[i], g.tw, styledToken(st, i+1, ti, w, i+1 == current, g.tw)})
+	}
+	// Caption lines centred in the ring.
+	top := g.cy - len(caption)/2
+	for k, c := range caption {
+		y := top + k
+		cw := len(c)
+		if y < 1 || y >= g.h-1 || cw == 0 || cw > g.innerWidth(y) {
+			continue
+		}
+		x := g.cx - cw/2
+		free := true
+		for _, t := range rows[y] {
+			if x < t.x+t.w+1 && t.x < x+cw+1 {
+				free = false
+			}
+		}
+		if free {
+			rows[y] = append(rows[y], seg{x, cw, st.dim.Render(c)})
+		}
+	}
+	d := drawing{width: g.w, lines: make([]string, g.h)}
+	var b strings.Builder
+	for y, segs := range rows {
+		b.Reset()
+		sortSegs(segs, func(a, c seg) bool { return a.x < c.x })
+		col := 0
+		for _, s := range segs {
+			if s.x < col {
+				continue
+			}
+			b.WriteString(strings.Repeat(" ", s.x-col))
+			b.WriteString(s.text)
+			col = s.x + s.w
+		}
+		b.WriteString(strings.Repeat(" ", max(0, g.w-col)))
+		d.lines[y] = b.String()
+	}
+	return d
+}
+
+// sortSegs is an insertion sort: rows hold a handful of segments.
+func sortSegs[T any](xs []T, less func(a, b T) bool) {
+	for i := 1; i < len(xs); i++ {
+		for j := i; j > 0 && less(xs[j], xs[j-1]); j-- {
+			xs[j], xs[j-1] = xs[j-1], xs[j]
+		}
+	}
+}
+
+// stripLabels are the row names of the developed strip.
+var stripLabels = [4]string{"tooth ", "phase ", "wind  ", "done  "}
+
+// renderStrip draws a developed strip of the teeth round the current one in
+// width w: tooth numbers, phase letters, direction marks and state marks in
+// columns.
+func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, w int) drawing {
+	q := len(teeth)
+	if q == 0 {
+		return drawing{}
+	}
+	cw := len(strconv.Itoa(q)) + 1
+	lw := len(stripLabels[0])
+	n := min(q, max(1, (w-lw)/cw))
+	first := 0
+	if current >= 1 {
+		first = current - 1 - n/2
+	}
+	first = min(max(0, first), q-n)
+	var rows [4]strings.Builder
+	for r := range rows {
+		rows[r].WriteString(st.dim.Render(stripLabels[r]))
+	}
+	for i := first; i < first+n; i++ {
+		ti := teeth[i]
+		isCur := i+1 == current
+		isWound := i < len(wound) && wound[i]
+		cells := [4]string{strconv.Itoa(i + 1), markUnwound, " ", " "}
+		if ti.wound {
+			cells[1], cells[2] = ti.letter, ti.dir
+			cells[3] = "."
+			if isWound {
+				cells[3] = markWound
+			}
+		}
+		if isCur {
+			cells[3] = markCurrent
+		}
+		for r, c := range cells {
+			cell := strings.Repeat(" ", max(0, cw-len(c))) + c
+			switch {
+			case isCur:
+				rows[r].WriteString(st.current.Render(cell))
+			case r == 1 && ti.wound && !isWound:
+				rows[r].WriteString(st.phaseStyle(ti.phase).Render(cell))
+			case isWound || !ti.wound:
+				rows[r].WriteString(st.dim.Render(cell))
+			default:
+				rows[r].WriteString(cell)
+			}
+		}
+	}
+	width := lw + n*cw
+	d := drawing{width: width}
+	for r := range rows {
+		d.lines = append(d.lines, rows[r].String())
+	}
+	d.lines = append(d.lines, st.dim.Render(stripCaption(first+1, first+n, q, w)))
+	return d
+}
+
+// stripCaption says which teeth the strip shows.
+func stripCaption(a, b, q, w int) string {
+	s := "teeth " + strconv.Itoa(a) + "-" + strconv.Itoa(b) + " of " + strconv.Itoa(q) + ", laid out flat"
+	if len(s) > w {
+		s = "teeth " + strconv.Itoa(a) + "-" + strconv.Itoa(b) + " of " + strconv.Itoa(q)
+	}
+	if len(s) > w {
+		return ""
+	}
+	return s
+}
+
+// legend explains the marks in one line, shortened to fit w.
+func legend(w int) string {
+	long := "# wound  @ now  U> clockwise  u< counter-clockwise (seen from the air gap)"
+	short := "# wound  @ now  U> cw  u< ccw"
+	switch {
+	case len(long) <= w:
+		return long
+	case len(short) <= w:
+		return short
+	}
+	return ""
+}
