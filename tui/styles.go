@@ -33,13 +33,13 @@ var asciiBorder = lipgloss.Border{
 // styles holds every style the screens use, built once.
 type styles struct {
 	title, subtitle, dim, label, value, strong lipgloss.Style
-	coilTitle                                   lipgloss.Style
-	panel, drawing                              lipgloss.Style
-	current, done                               lipgloss.Style
-	phase                                       []lipgloss.Style
-	ok, warn, fail, caution, errorBar, notice   lipgloss.Style
-	counter, counterDone                        lipgloss.Style
-	statusDone, statusNow, statusTodo           lipgloss.Style
+	coilTitle                                  lipgloss.Style
+	panel, drawing                             lipgloss.Style
+	current, done                              lipgloss.Style
+	phase                                      []lipgloss.Style
+	ok, warn, fail, caution, errorBar, notice  lipgloss.Style
+	counter, counterDone                       lipgloss.Style
+	statusDone, statusNow, statusTodo          lipgloss.Style
 }
 
 func newStyles() *styles {
