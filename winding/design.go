@@ -9,20 +9,26 @@ import (
 // It refuses a Spec with a *SpecError that wraps ErrInvalid (values out of
 // range) or ErrInfeasible (no balanced winding, or paths that cannot be equal).
 func Design(s Spec) (*Layout, error) {
-	return design(s.Normalize(), true)
+	return design(s.Normalize(), true, trigTable{})
 }
 
 // design does the work; full=false is for sweeps over many pairs: it skips the
 // nearest-pair suggestions of a refusal, the harmonic spectrum, the warnings
 // and the winding order of the paths.
-func design(s Spec, full bool) (*Layout, error) {
+//
+// tt may hold the trig table of s.Slots (sweeps reuse one per slot count);
+// an empty one is built here.
+func design(s Spec, full bool, tt trigTable) (*Layout, error) {
 	if err := s.checkRange(); err != nil {
 		if se, ok := err.(*SpecError); ok && se.kind == ErrInfeasible && full {
 			se.Nearest = nearestFeasible(s)
 		}
 		return nil, err
 	}
-	st := newStar(s)
+	if len(tt.cos) != 2*s.Slots {
+		tt = newTrigTable(s.Slots)
+	}
+	st := newStar(s, tt)
 	if !st.assign() {
 		if !full {
 			return nil, ErrInfeasible
@@ -67,8 +73,8 @@ type star struct {
 	counts []int
 }
 
-func newStar(s Spec) *star {
-	st := &star{s: s, step: 3 - s.Layers, trig: newTrigTable(s.Slots)}
+func newStar(s Spec, tt trigTable) *star {
+	st := &star{s: s, step: 3 - s.Layers, trig: tt}
 	st.phase = make([]int, s.Slots)
 	st.sign = make([]int, s.Slots)
 	return st
@@ -126,11 +132,23 @@ func (st *star) balanced() bool {
 	st.sumsRe = make([]float64, m)
 	st.sumsIm = make([]float64, m)
 	st.counts = make([]int, m)
-	for i, ph := range st.phase {
-		if ph < 0 {
-			continue
+	q := st.s.Slots
+	q2 := 2 * q
+	turn := (2 * (st.s.PolePairs() % q) * st.step) % q2 // phasor turn per wound tooth, clockwise
+	base := 0                                          // angle of tooth i before its sign
+	for i := 0; i < q; i += st.step {
+		ph := st.phase[i]
+		a := base
+		if st.sign[i] < 0 {
+			a += q
+			if a >= q2 {
+				a -= q2
+			}
 		}
-		a := fundamentalAngle(i, st.sign[i], st.s)
+		base -= turn
+		if base < 0 {
+			base += q2
+		}
 		st.sumsRe[ph] += st.trig.cos[a]
 		st.sumsIm[ph] += st.trig.sin[a]
 		st.counts[ph]++

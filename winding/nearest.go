@@ -60,7 +60,7 @@ func Feasible(s Spec) bool {
 	if s.checkRange() != nil {
 		return false
 	}
-	return newStar(s).assign()
+	return newStar(s, newTrigTable(s.Slots)).assign()
 }
 
 func abs(x int) int {

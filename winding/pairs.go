@@ -52,8 +52,14 @@ func Pairs(sw Sweep) ([]Summary, error) {
 	var out []Summary
 	for _, ly := range sw.Layers {
 		for q := sw.Phases; q <= sw.MaxSlots; q++ {
+			// The coil count must be a multiple of the phase count
+			// (checkRange says so with a message; skip it unformatted).
+			if (ly == 1 && q%2 != 0) || (q/(3-ly))%sw.Phases != 0 {
+				continue
+			}
+			tt := newTrigTable(q)
 			for poles := 2; poles <= sw.MaxPoles; poles += 2 {
-				l, err := design(Spec{Slots: q, Poles: poles, Phases: sw.Phases, Layers: ly, Paths: 1}, false)
+				l, err := design(Spec{Slots: q, Poles: poles, Phases: sw.Phases, Layers: ly, Paths: 1}, false, tt)
 				if err != nil {
 					continue
 				}

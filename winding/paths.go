@@ -15,19 +15,16 @@ func feasiblePaths(l *Layout) []int {
 	for _, c := range l.Coils {
 		counts[c.Phase*q2+c.angle]++
 	}
+	// a is feasible when it divides every count: the divisors of their gcd.
+	g := 0
+	for _, k := range counts {
+		if k != 0 && g != 1 {
+			g = gcd(g, k)
+		}
+	}
 	var out []int
-	for a := 1; a <= n; a++ {
-		if n%a != 0 {
-			continue
-		}
-		ok := true
-		for _, k := range counts {
-			if k%a != 0 {
-				ok = false
-				break
-			}
-		}
-		if ok {
+	for a := 1; a <= g; a++ {
+		if g%a == 0 && n%a == 0 {
 			out = append(out, a)
 		}
 	}

@@ -30,12 +30,21 @@ type Plan struct {
 	Coils []CoilPlan `json:"coils_plan"` // one per wound tooth, in winding order (phase, path, position)
 	Paths []PathPlan `json:"paths"`
 
-	PhaseResistance20C     float64 `json:"phase_resistance_20c_ohm"`
+	PhaseResistance20C     float64 `json:"phase_resistance_20c_ohm"` // mean of the phases
 	PhaseResistanceAmbient float64 `json:"phase_resistance_ambient_ohm"`
 	AmbientC               float64 `json:"ambient_c"`
 	RatedCurrentA          float64 `json:"rated_current_a"`
 	CurrentDensityAmm2     float64 `json:"current_density_a_per_mm2"`
 	CopperLossW            float64 `json:"copper_loss_w"` // all phases at rated current, at ambient
+
+	// Added by the plan builder (the fields above are the shared contract).
+	PhaseOhms           []PhaseOhm `json:"phase_ohms"`      // each phase between its terminals, from its own path lengths
+	PhaseCurrentA       float64    `json:"phase_current_a"` // in one phase at rated line current
+	RatedVoltageV       float64    `json:"rated_voltage_v"` // line rms, for the high-voltage test
+	RatedVoltageFromEMF bool       `json:"rated_voltage_from_emf"`
+	RatedPowerW         float64    `json:"rated_power_w"`
+	RatedPowerEstimated bool       `json:"rated_power_estimated"`
+	JumperPitchMM       float64    `json:"jumper_pitch_mm"` // jumper length per tooth pitch round the lead end
 
 	CopperLengthM float64 `json:"copper_length_m"` // all coils, jumpers and leads, one strand counted per strand
 	CopperMassKg  float64 `json:"copper_mass_kg"`
@@ -68,6 +77,10 @@ type EMF struct {
 	DCBusAtCutIn     float64 `json:"dc_bus_at_cut_in_v,omitempty"` // ideal six-pulse diode bridge
 	VoltsPerRPMPhase float64 `json:"phase_rms_v_per_rpm"`          // for back-EMF checks at any speed
 	Target           string  `json:"target,omitempty"`             // what the turns were solved for, in words
+
+	TargetV        float64 `json:"target_v,omitempty"`         // the target as written
+	TargetSpeedRPM float64 `json:"target_speed_rpm,omitempty"` // the speed it is to be reached at
+	AtTargetV      float64 `json:"at_target_v,omitempty"`      // what the whole turns give there (DC bus: net of the diode drop)
 }
 
 // Wire is the conductor as wound: one or more strands in hand.
@@ -90,6 +103,22 @@ type Slot struct {
 	OpeningMM     float64 `json:"opening_mm,omitempty"`
 	MaxTurns      int     `json:"max_turns_at_practical_fill"`
 	PracticalFill float64 `json:"practical_fill"`
+
+	DepthMM          float64 `json:"depth_mm"`
+	DepthEstimated   bool    `json:"depth_estimated,omitempty"` // area given without depth: taken as square
+	MeanWidthMM      float64 `json:"mean_width_mm"`
+	LinedPerimeterMM float64 `json:"lined_perimeter_mm"` // walls, bottom, tooth-tip undersides
+	LinerAreaMM2     float64 `json:"liner_area_mm2"`
+	SeparatorAreaMM2 float64 `json:"separator_area_mm2"` // 0 where no slot holds two phases
+	CeilingFill      float64 `json:"ceiling_fill"`       // orthocyclic packing over the enamel: the most round wire can fill
+	CoilBuildMM      float64 `json:"coil_build_mm"`      // thickness of one coil side across the slot
+}
+
+// PhaseOhm is the expected resistance of one phase between its terminals.
+type PhaseOhm struct {
+	Phase      string  `json:"phase"`
+	Ohm20C     float64 `json:"ohm_20c"`
+	OhmAmbient float64 `json:"ohm_ambient"`
 }
 
 // CoilPlan is one coil as it is wound.
@@ -111,7 +140,9 @@ type PathPlan struct {
 	Coils       int     `json:"coils"`
 	WireLengthM float64 `json:"wire_length_m"` // coils and jumpers between its terminals, one strand
 	CutLengthM  float64 `json:"cut_length_m"`  // with both leads and allowances: what to cut from the spool, one strand
-	Ohm20C      float64 `json:"ohm_20c"`
+	// JumperLengthM is the part of WireLengthM in jumpers (with their slack).
+	JumperLengthM float64 `json:"jumper_length_m"`
+	Ohm20C        float64 `json:"ohm_20c"`
 }
 
 // Material is a line of the cut list besides copper: liners, separators,
