@@ -135,7 +135,7 @@ func (st *star) balanced() bool {
 	q := st.s.Slots
 	q2 := 2 * q
 	turn := (2 * (st.s.PolePairs() % q) * st.step) % q2 // phasor turn per wound tooth, clockwise
-	base := 0                                          // angle of tooth i before its sign
+	base := 0                                           // angle of tooth i before its sign
 	for i := 0; i < q; i += st.step {
 		ph := st.phase[i]
 		a := base
