@@ -1,0 +1,233 @@
+package printout
+
+import (
+	"fmt"
+	"math"
+
+	"coilwright/winding"
+	"coilwright/winding/plan"
+)
+
+// Checklist row heights, mm.
+const (
+	ckCoilH = 7.2
+	ckBoxS  = 4.2
+)
+
+// checklist writes one row per bench step in the plan's order: a coil row
+// with boxes for turns counted, sense checked and initials; other steps
+// (preparation, insulation, jumpers, leads, joints, tests) with a done box.
+func (b *builder) checklist() {
+	f := b.startFlow(ChecklistPage, "Winding checklist")
+	w := b.width()
+	f.y = f.c.para(marginMM, f.y, w, sizeSmall, Regular, Ink,
+		"Work down the list in order. Tick each box as it is done and initial the row; count turns aloud or with a counter. "+
+			"Sense: seen from the air gap facing the tooth, following the wire from the path's start terminal.")
+	f.y += 1
+	steps := b.p.Steps
+	if len(steps) == 0 {
+		steps = coilSteps(b.p)
+	}
+	b.checkHeader(f)
+	for _, st := range steps {
+		if st.Kind == plan.StepCoil && st.Coil != nil {
+			if f.need(ckCoilH) {
+				b.checkHeader(f)
+			}
+			b.coilRow(f, st)
+			continue
+		}
+		h := b.stepRowHeight(st)
+		if f.need(h) {
+			b.checkHeader(f)
+		}
+		b.stepRow(f, st, h)
+	}
+	// closing sign-off
+	f.need(22)
+	f.y += 4
+	b.signOff(f, "Winding finished")
+}
+
+// coilSteps stands in for a plan without steps: one coil step per coil.
+func coilSteps(p *plan.Plan) []plan.Step {
+	out := make([]plan.Step, 0, len(p.Coils))
+	for i, c := range p.Coils {
+		out = append(out, plan.Step{Index: i + 1, Kind: plan.StepCoil, Coil: &plan.CoilStep{
+			Order: c.Order, Of: len(p.Coils), Tooth: c.Tooth, Phase: c.Phase, Path: c.Path, Position: c.Position,
+			Direction: c.Direction.String(), Turns: c.Turns, WireLengthM: c.WireLengthM}})
+	}
+	return out
+}
+
+// checklist columns (x offsets from the margin, mm).
+var ckCols = []struct {
+	head string
+	x    float64
+}{
+	{"step", 0}, {"coil", 10}, {"tooth", 27}, {"phase", 40}, {"path·pos", 51}, {"sense", 66}, {"turns", 84},
+	{"from / to", 97}, {"turns counted", 150}, {"sense checked", 162}, {"initials", 174},
+}
+
+func (b *builder) checkHeader(f *flow) {
+	w := b.width()
+	f.c.box(marginMM, f.y, w, 5.5, Pen{}, &Fill{Colour{215, 215, 215}})
+	for _, col := range ckCols {
+		x := marginMM + col.x*w/186
+		if col.x >= 150 {
+			f.c.text(x+5, f.y+2.4, sizeTiny, Bold, Ink, centre, firstWord(col.head))
+			f.c.text(x+5, f.y+4.8, sizeTiny, Bold, Ink, centre, restWords(col.head))
+			continue
+		}
+		f.c.text(x+1, f.y+3.8, sizeTiny+0.5, Bold, Ink, left, col.head)
+	}
+	f.y += 5.5
+}
+
+func firstWord(s string) string {
+	for i, r := range s {
+		if r == ' ' {
+			return s[:i]
+		}
+	}
+	return s
+}
+
+func restWords(s string) string {
+	for i, r := range s {
+		if r == ' ' {
+			return s[i+1:]
+		}
+	}
+	return ""
+}
+
+func (b *builder) colX(i int) float64 { return marginMM + ckCols[i].x*b.width()/186 }
+
+func (b *builder) coilRow(f *flow, st plan.Step) {
+	c := f.c
+	cs := st.Coil
+	y := f.y
+	h := ckCoilH
+	base := y + h/2 + 1.1
+	ph := b.phaseIndex(cs.Phase)
+	if ph >= 0 {
+		sty := b.phaseStyle(ph)
+		c.box(marginMM, y+0.4, 1.6, h-0.8, Pen{}, &Fill{sty.Colour})
+	}
+	c.text(b.colX(0)+2.5, base, sizeSmall, Regular, Ink, left, fmt.Sprint(st.Index))
+	of := fmt.Sprintf("%d of %d", cs.Order, cs.Of)
+	c.text(b.colX(1)+1, base, sizeBody, Bold, Ink, left, of)
+	c.text(b.colX(2)+1, base, sizeBody+1, Bold, Ink, left, fmt.Sprintf("T%d", cs.Tooth))
+	if ph >= 0 {
+		b.phaseMark(c, Point{b.colX(3) + 4, y + h/2}, 2.3, ph)
+	} else {
+		c.text(b.colX(3)+1, base, sizeBody, Bold, Ink, left, cs.Phase)
+	}
+	c.text(b.colX(4)+1, base, sizeBody, Regular, Ink, left, fmt.Sprintf("%d·%d", cs.Path, cs.Position))
+	cw := cs.Direction != winding.CCW.String()
+	c.senseArrow(b.colX(5)+3.5, y+h/2, 1.8, cw, Ink, 0.32)
+	word := "cw"
+	if !cw {
+		word = "ccw"
+	}
+	c.text(b.colX(5)+6.5, base, sizeBody, Bold, Ink, left, word)
+	c.text(b.colX(6)+1, base, sizeBody+1, Bold, Ink, left, fmt.Sprint(cs.Turns))
+	ft := cs.From
+	if cs.To != "" {
+		ft += " → " + cs.To
+	}
+	if ft == "" {
+		ft = fmt.Sprintf("slots %d and %d, %.2f m", cs.SlotBefore, cs.SlotAfter, cs.WireLengthM)
+	}
+	c.text(b.colX(7)+1, base, sizeTiny+0.5, Regular, Ink, left, fit(ft, b.colX(8)-b.colX(7)-2, sizeTiny+0.5, Regular))
+	b.tickBoxes(f, y, h, true)
+	c.line(marginMM, y+h, marginMM+b.width(), y+h, Pen{Width: 0.15, Colour: Faint})
+	f.y += h
+}
+
+// tickBoxes draws the boxes at the right of a row: two for a coil, one for
+// any other step, and the initials space.
+func (b *builder) tickBoxes(f *flow, y, h float64, coil bool) {
+	c := f.c
+	cy := y + (h-ckBoxS)/2
+	if coil {
+		c.checkbox(b.colX(8)+5-ckBoxS/2, cy, ckBoxS)
+		c.checkbox(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
+	} else {
+		c.checkbox(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
+	}
+	x := b.colX(10)
+	c.line(x+1, y+h-1.4, marginMM+b.width()-0.5, y+h-1.4, Pen{Width: 0.2, Colour: Ink})
+}
+
+func (b *builder) stepText(st plan.Step) (title, detail string) {
+	title = st.Title
+	if title == "" {
+		title = string(st.Kind)
+	}
+	detail = st.Detail
+	if st.Kind == plan.StepSeparator && st.Slot > 0 && detail == "" {
+		detail = fmt.Sprintf("slot %d", st.Slot)
+	}
+	for _, r := range st.Reminders {
+		if detail != "" {
+			detail += " "
+		}
+		detail += "• " + r
+	}
+	return title, detail
+}
+
+func (b *builder) stepRowHeight(st plan.Step) float64 {
+	_, detail := b.stepText(st)
+	h := 6.5
+	if detail != "" {
+		h += paraHeight(b.colX(8)-b.colX(1)-2, sizeTiny+0.5, Regular, detail)
+	}
+	return math.Max(h, ckCoilH)
+}
+
+var kindWords = map[plan.StepKind]string{
+	plan.StepPrepare: "prepare", plan.StepJumper: "jumper", plan.StepSeparator: "insulate",
+	plan.StepTerminal: "leads", plan.StepJoin: "join", plan.StepTest: "test",
+}
+
+func (b *builder) stepRow(f *flow, st plan.Step, h float64) {
+	c := f.c
+	y := f.y
+	if st.Kind == plan.StepPrepare || st.Kind == plan.StepSeparator {
+		c.box(marginMM, y, b.width(), h, Pen{}, &Fill{Panel})
+	}
+	title, detail := b.stepText(st)
+	c.text(b.colX(0)+2.5, y+4.3, sizeSmall, Regular, Ink, left, fmt.Sprint(st.Index))
+	kw := kindWords[st.Kind]
+	if kw == "" {
+		kw = string(st.Kind)
+	}
+	c.text(b.colX(1)+1, y+4.3, sizeTiny+0.5, Bold, Colour{90, 90, 90}, left, kw)
+	c.text(b.colX(2)+1, y+4.3, sizeBody, Bold, Ink, left, fit(title, b.colX(8)-b.colX(2)-2, sizeBody, Bold))
+	if detail != "" {
+		c.para(b.colX(2)+1, y+8, b.colX(8)-b.colX(2)-2, sizeTiny+0.5, Regular, Ink, detail)
+	}
+	b.tickBoxes(f, y, math.Min(h, 8), false)
+	c.line(marginMM, y+h, marginMM+b.width(), y+h, Pen{Width: 0.15, Colour: Faint})
+	f.y += h
+}
+
+// signOff draws name, date and signature fields across the page.
+func (b *builder) signOff(f *flow, what string) {
+	c := f.c
+	x0 := float64(marginMM)
+	w := b.width()
+	c.box(x0, f.y, w, 16, Pen{Width: 0.45, Colour: Ink}, nil)
+	c.text(x0+2, f.y+4.5, sizeBody, Bold, Ink, left, what)
+	fields := []string{"name", "date", "signature"}
+	fw := (w - 40) / 3
+	for i, fl := range fields {
+		x := x0 + 40 + float64(i)*fw
+		c.line(x, f.y, x, f.y+16, thin)
+		c.text(x+1.5, f.y+3.5, sizeTiny, Regular, Colour{90, 90, 90}, left, fl)
+	}
+	f.y += 18
+}

@@ -1,0 +1,206 @@
+package printout
+
+import (
+	"fmt"
+	"math"
+
+	"coilwright/winding"
+)
+
+// Connection sheet geometry, mm.
+const (
+	conBoxW = 12
+	conBoxH = 12
+	conGap  = 9
+	conTagW = 13
+	conLine = 19 // height of one line of coils
+)
+
+// connections draws every phase and path as a chain of coils from its start
+// terminal to its finish terminal, the jumpers between them, then the star
+// point or delta joints.
+func (b *builder) connections() {
+	l := b.p.Layout
+	title := "Connections"
+	c := b.newPage(ConnectionPage, title)
+	y := b.top() + 3
+	y = c.para(marginMM, y, b.width(), sizeSmall, Regular, Ink,
+		"Each path is one continuous wire, wound coil by coil from its start terminal to its finish terminal. "+
+			"The number on a jumper is the count of tooth pitches it runs round the lead end, up the tooth numbers; "+
+			"“reverse” marks a jumper after which the next coil is wound the other way round.")
+	y += 2
+	perLine := int((b.width() - 2*conTagW - 4) / (conBoxW + conGap))
+	perLine = max(1, perLine)
+	for _, ch := range l.Chains {
+		lines := (len(ch.Teeth) + perLine - 1) / perLine
+		need := 7 + float64(min(lines, 2))*conLine
+		if y+need > b.bottom() {
+			c = b.newPage(ConnectionPage, title+" (continued)")
+			y = b.top() + 3
+		}
+		y = b.chainRows(c, y, ch, perLine, title)
+		if c != nil && len(b.pages) > 0 {
+			c = &canvas{page: b.pages[len(b.pages)-1]}
+		}
+		y += 2
+	}
+	need := b.jointsHeight()
+	if y+need > b.bottom() {
+		c = b.newPage(ConnectionPage, title+" (continued)")
+		y = b.top() + 3
+	}
+	b.joints(c, y)
+}
+
+// pathWireM is the planned wire length of a path, 0 when the plan has none.
+func (b *builder) pathWireM(phase string, path int) float64 {
+	for _, pp := range b.p.Paths {
+		if pp.Phase == phase && pp.Path == path {
+			return pp.WireLengthM
+		}
+	}
+	return 0
+}
+
+// chainRows draws one chain, starting new pages as needed, and returns the
+// y below it (on the last page it used).
+func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int, title string) float64 {
+	l := b.p.Layout
+	st := b.phaseStyle(ch.Phase)
+	name := l.PhaseName(ch.Phase)
+	head := fmt.Sprintf("Phase %s, path %d of %d: %d coils, %s to %s", name, ch.Path, l.Spec.Paths, len(ch.Teeth), ch.Start, ch.Finish)
+	if m := b.pathWireM(name, ch.Path); m > 0 {
+		head += fmt.Sprintf(", %.2f m of wire between the terminals", m)
+	}
+	b.phaseMark(c, Point{marginMM + 2.2, y + 1.6}, 2.2, ch.Phase)
+	c.text(marginMM+6, y+2.8, sizeBody, Bold, Ink, left, head)
+	y += 6
+	pen := Pen{Width: 0.55, Colour: st.Colour, Dash: st.Dash, Round: true}
+	wirePen := Pen{Width: 0.45, Colour: st.Colour, Dash: st.Dash, Round: true}
+	x0 := float64(marginMM)
+	for i := 0; i < len(ch.Teeth); i += perLine {
+		if y+conLine > b.bottom() {
+			c = b.newPage(ConnectionPage, title+" (continued)")
+			y = b.top() + 3
+		}
+		mid := y + conBoxH/2 + 1
+		x := x0
+		if i == 0 {
+			b.terminalTag(c, x, mid, conTagW-3, ch.Start)
+		} else {
+			c.text(x+conTagW-4, mid+1.2, sizeSmall, Regular, Faint, right, "from line above")
+		}
+		x += conTagW
+		end := min(len(ch.Teeth), i+perLine)
+		c.line(x-3, mid, x, mid, wirePen)
+		if i > 0 {
+			c.line(x0+conTagW-3.5, mid, x, mid, wirePen)
+		}
+		for k := i; k < end; k++ {
+			tooth := ch.Teeth[k]
+			cl, _ := l.CoilOn(tooth)
+			c.box(x, mid-conBoxH/2, conBoxW, conBoxH, pen, &Fill{st.Tint})
+			c.label(x+conBoxW/2, mid-3, sizeBody, Bold, Ink, fmt.Sprintf("T%d", tooth))
+			c.senseArrow(x+conBoxW/2-2.6, mid+2.5, 1.5, cl.Direction == winding.CW, Ink, 0.3)
+			c.text(x+conBoxW/2-0.4, mid+3.6, sizeTiny, Regular, Ink, left, cl.Direction.String())
+			x += conBoxW
+			if k < len(ch.Jumpers) && (k+1 < end || end < len(ch.Teeth)) {
+				j := ch.Jumpers[k]
+				c.line(x, mid, x+conGap, mid, wirePen)
+				c.label(x+conGap/2, mid-2, sizeTiny, Regular, Ink, fmt.Sprintf("+%d", j.Span))
+				if j.ReversesSense {
+					c.label(x+conGap/2, mid+2.2, sizeTiny-0.8, Regular, Ink, "reverse")
+				}
+				x += conGap
+			}
+		}
+		if end == len(ch.Teeth) {
+			c.line(x, mid, x+3, mid, wirePen)
+			b.terminalTag(c, x+3, mid, conTagW-3, ch.Finish)
+		} else {
+			c.text(x+1, mid+1.2, sizeSmall, Regular, Faint, left, "next line")
+		}
+		y += conLine
+	}
+	return y
+}
+
+// terminalTag draws a terminal mark in a heavy box, its left edge at x.
+func (b *builder) terminalTag(c *canvas, x, mid, w float64, mark string) {
+	c.box(x, mid-3, w, 6, Pen{Width: 0.5, Colour: Ink}, &Fill{White})
+	c.label(x+w/2, mid, sizeBody+0.5, Bold, Ink, mark)
+}
+
+func (b *builder) jointsHeight() float64 { return 58 }
+
+// joints draws the star point or the delta corners (winding.Joints) and the
+// joining of parallel paths.
+func (b *builder) joints(c *canvas, y float64) {
+	l := b.p.Layout
+	x0 := float64(marginMM)
+	w := b.width()
+	js := winding.Joints(b.p.Connection, l.PhaseNames)
+	h := b.jointsHeight()
+	c.box(x0, y, w, h, Pen{Width: 0.25, Colour: Faint}, &Fill{Panel})
+	title := "Star point"
+	if b.p.Connection == winding.Delta {
+		title = "Delta joints"
+	}
+	c.text(x0+2, y+5, sizeHead, Bold, Ink, left, title)
+	// drawing on the left
+	cx, cy := x0+36, y+h/2+2
+	m := len(l.PhaseNames)
+	if b.p.Connection == winding.Star {
+		o := Point{cx, cy}
+		for i, n := range l.PhaseNames {
+			a := 90 + float64(i)*360/float64(m)
+			st := b.phaseStyle(i)
+			pen := Pen{Width: 0.6, Colour: st.Colour, Dash: st.Dash, Round: true}
+			p0, p1 := polar(o, 6, a), polar(o, 15, a)
+			c.line(cx, cy, p0.X, p0.Y, pen)
+			// the phase winding as a narrow box between its finish and start
+			d0, d1 := polar(p0, 1.6, a+90), polar(p0, 1.6, a-90)
+			e0, e1 := polar(p1, 1.6, a+90), polar(p1, 1.6, a-90)
+			c.poly([]Point{d0, e0, e1, d1}, true, pen, &Fill{st.Tint})
+			t := polar(o, 22, a)
+			c.line(p1.X, p1.Y, t.X, t.Y, pen)
+			b.terminalTag(c, t.X-5, t.Y, 10, n+"1")
+			lb := polar(o, 4.5, a+32)
+			c.label(lb.X, lb.Y, sizeTiny, Bold, Ink, n+"2")
+		}
+		c.circle(cx, cy, 1.6, Pen{}, &Fill{Black})
+	} else {
+		pts := make([]Point, m)
+		for i := range pts {
+			pts[i] = polar(Point{cx, cy}, 15, 90+float64(i)*360/float64(m))
+		}
+		for i := range l.PhaseNames {
+			st := b.phaseStyle(i)
+			a, z := pts[i], pts[(i+1)%m]
+			c.line(a.X, a.Y, z.X, z.Y, Pen{Width: 0.6, Colour: st.Colour, Dash: st.Dash, Round: true})
+			mp := Point{(a.X + z.X) / 2, (a.Y + z.Y) / 2}
+			b.phaseMark(c, mp, 2, i)
+		}
+		for i, j := range js {
+			// joint i joins the finish of phase i and the start of phase i+1: corner i+1
+			p := pts[(i+1)%m]
+			c.circle(p.X, p.Y, 1.4, Pen{}, &Fill{Black})
+			q := polar(Point{cx, cy}, 21, 90+float64((i+1)%m)*360/float64(m))
+			c.label(q.X, q.Y, sizeSmall, Bold, Ink, fmt.Sprintf("%s+%s", j.Marks[0], j.Marks[1]))
+		}
+	}
+	// words on the right
+	tx := x0 + 72
+	ty := y + 12
+	for _, j := range js {
+		ty = c.para(tx, ty, w-74, sizeBody, Regular, Ink, "• "+j.What)
+	}
+	if l.Spec.Paths > 1 {
+		ty += 1
+		ty = c.para(tx, ty, w-74, sizeBody, Regular, Ink, fmt.Sprintf(
+			"• parallel paths: each phase has %d paths; join the starts of all its paths at its terminal 1 and all the finishes at its terminal 2 before making the joints above.", l.Spec.Paths))
+	}
+	ty += 1
+	c.para(tx, ty, w-74, sizeBody, Regular, Ink, "• sleeve every joint, mark every lead with its terminal mark (IEC 60034-8) and check continuity of each phase before the joints are closed.")
+	_ = math.Pi
+}
