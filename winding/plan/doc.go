@@ -1,0 +1,23 @@
+// Package plan turns a job into a build plan: the turns (given, or solved from
+// an EMF or DC-bus target), the wire and its slot fill, the mean turn length
+// and the wire of every coil, path and cut, the expected resistance, the bench
+// steps in the order the work is done, and the test plan with its limits and
+// sources.
+//
+// Model. A tooth coil's mean turn is 2·(L + w) + π·b, L the stack length, w the
+// tooth width, each grown by the liner on both faces, and b the coil build
+// across the slot (round wire taken in square packing over the enamel, common
+// practice for a hand-wound coil). The EMF of a phase is E = √2·π·f·N·k_w·Φ
+// with f = p·n/60 and N the series turns per phase (textbook; e.g. Pyrhönen et
+// al., Design of Rotating Electrical Machines). Resistance is ρ·L/A at 20 °C
+// with ρ = 1/58 Ω·mm²/m and the IEC 60028 temperature correction.
+//
+// Conventions follow package winding: teeth 1..Q counter-clockwise from the
+// lead end, slot k after tooth k, directions seen from the air gap. Lengths of
+// wire are per strand in metres; geometry in mm.
+//
+// Build does no I/O and keeps no state: a Plan is plain data that screens and
+// printouts only read. The plan does not model saturation, armature reaction,
+// the voltage drop under load or the losses in iron and magnets: the EMFs are
+// open-circuit values.
+package plan

@@ -1,0 +1,202 @@
+package plan
+
+import (
+	"fmt"
+	"strings"
+
+	"coilwright/winding"
+)
+
+func (b *builder) add(s Step) {
+	s.Index = len(b.p.Steps) + 1
+	b.p.Steps = append(b.p.Steps, s)
+}
+
+// steps lays out the bench work in order: preparation, each path coil by coil
+// with its jumpers (and a separator before the second coil side enters a slot
+// shared by two phases), the leads, the tests that need the phases apart, the
+// joints, and the tests of the finished winding.
+func (b *builder) steps() error {
+	p, j := b.p, b.j
+	l := p.Layout
+	q := l.Spec.Slots
+	b.add(Step{Kind: StepPrepare, Title: "Deburr and clean the stator",
+		Detail: "File off burrs on the slot edges and tooth tips, round sharp corners at both ends of the stack, blow out the filings and wipe the slots clean. A burr cuts enamel and liner.",
+		Reminders: []string{"eye protection while filing and blowing out",
+			"solvent cleaners: ventilation, no flames, gloves"}})
+	b.add(Step{Kind: StepPrepare, Title: fmt.Sprintf("Fit %d slot liners", q),
+		Detail: fmt.Sprintf("One liner per slot, %s; it covers the walls and bottom of the slot and folds under the tooth tips, standing out %g mm at each end of the stack.",
+			linerSize(p, b.stackPlusCuffs(), j.Stator.LinerMM), linerCuff)})
+	b.add(Step{Kind: StepPrepare, Title: "Check and measure out the wire",
+		Detail: b.wireDetail()})
+
+	sidesIn := make([]int, q+1) // coil sides already in each slot
+	total := len(p.Coils)
+	lead := j.Build.LeadLengthMM
+	ci := 0
+	for _, ch := range l.Chains {
+		name := l.PhaseNames[ch.Phase]
+		for i, tooth := range ch.Teeth {
+			c, _ := l.CoilOn(tooth)
+			before, after := winding.SlotsOf(tooth, q)
+			for _, s := range []int{before, after} {
+				if sidesIn[s] == 1 {
+					if pa, pb, differ := slotPhases(l, s); differ {
+						b.add(Step{Kind: StepSeparator, Slot: s,
+							Title: fmt.Sprintf("Phase separator in slot %d", s),
+							Detail: fmt.Sprintf("Slot %d holds phases %s and %s. Lay a separator (%s) against the coil side already in it before winding tooth %d.",
+								s, l.PhaseNames[pa], l.PhaseNames[pb], separatorSize(p, b.stackPlusCuffs(), j.Stator.SeparatorMM), tooth)})
+					}
+				}
+			}
+			sidesIn[before]++
+			sidesIn[after]++
+			cp := p.Coils[ci]
+			ci++
+			cs := &CoilStep{Order: cp.Order, Of: total, Tooth: tooth, Phase: name, Path: c.Path, Position: c.Position,
+				Direction: c.Direction.String(), Turns: p.TurnsPerCoil, WireLengthM: cp.WireLengthM,
+				SlotBefore: before, SlotAfter: after}
+			if i == 0 {
+				cs.From = fmt.Sprintf("start lead %s (%g mm)", ch.Start, lead)
+			} else {
+				cs.From = fmt.Sprintf("jumper from tooth %d", ch.Teeth[i-1])
+			}
+			if i == len(ch.Teeth)-1 {
+				cs.To = fmt.Sprintf("finish lead %s (%g mm)", ch.Finish, lead)
+			} else {
+				cs.To = fmt.Sprintf("jumper to tooth %d", ch.Teeth[i+1])
+			}
+			cs.HowToWind = howToWind(p.Rotor, c.Direction, tooth, before, after, p.TurnsPerCoil, p.Wire.StrandsInHand)
+			pathWord := ""
+			if l.Spec.Paths > 1 {
+				pathWord = fmt.Sprintf(" path %d", c.Path)
+			}
+			b.add(Step{Kind: StepCoil, Coil: cs,
+				Title:  fmt.Sprintf("Coil %d of %d: tooth %d, phase %s%s, %s, %d turns", cp.Order, total, tooth, name, pathWord, c.Direction, p.TurnsPerCoil),
+				Detail: fmt.Sprintf("From %s to %s. %s", cs.From, cs.To, cs.HowToWind),
+				Reminders: []string{"count every turn; lay each turn beside the last, no crossings",
+					"keep the wire tight but do not stretch it; never let it scrape the slot edge"}})
+			if i < len(ch.Jumpers) {
+				jp := ch.Jumpers[i]
+				jpc := jp
+				sense := "the next coil is wound the same way round"
+				if jp.ReversesSense {
+					sense = "the next coil is wound the other way round"
+				}
+				b.add(Step{Kind: StepJumper, Jumper: &jpc,
+					Title: fmt.Sprintf("Jumper: tooth %d to tooth %d", jp.FromTooth, jp.ToTooth),
+					Detail: fmt.Sprintf("Carry the wire round the lead end, %d tooth pitch%s counter-clockwise (about %.0f mm with slack), without cutting it; %s. Sleeve it where it crosses other coils.",
+						jp.Span, plural(jp.Span, "", "es"), float64(jp.Span)*p.JumperPitchMM+j.Build.JumperSlackMM, sense)})
+			}
+		}
+	}
+	for _, name := range l.PhaseNames {
+		for _, end := range []struct{ mark, word string }{{name + "1", "start"}, {name + "2", "finish"}} {
+			what := fmt.Sprintf("the %s lead of phase %s", end.word, name)
+			if l.Spec.Paths > 1 {
+				what = fmt.Sprintf("the %d %s leads of phase %s (one per path)", l.Spec.Paths, end.word, name)
+			}
+			b.add(Step{Kind: StepTerminal,
+				Title: fmt.Sprintf("Lead %s", end.mark),
+				Detail: fmt.Sprintf("Trim %s to %g mm beyond the stator, slide on sleeving, strip the enamel from the last 10 mm (scrape or strip chemically; test that it is bare with the meter) and mark it %s.",
+					what, lead, end.mark),
+				Reminders: []string{"burning off enamel or tinning gives off fumes: ventilate or use extraction"}})
+		}
+	}
+	b.add(Step{Kind: StepTest, Test: TestContinuity, Title: "Test: continuity of every path"})
+	b.add(Step{Kind: StepTest, Test: TestPhaseInsulation, Title: "Test: insulation between phases (before joining)",
+		Reminders: []string{cautionIR}})
+	if l.Spec.Paths > 1 {
+		for _, name := range l.PhaseNames {
+			b.add(Step{Kind: StepJoin, Title: fmt.Sprintf("Join the paths of phase %s", name),
+				Detail: fmt.Sprintf("Join the %d start leads of phase %s together as %s1, and its %d finish leads as %s2: twist, solder or crimp, sleeve.",
+					l.Spec.Paths, name, name, l.Spec.Paths, name)})
+		}
+	}
+	for _, jt := range winding.Joints(p.Connection, l.PhaseNames) {
+		title := "Star point: " + strings.Join(jt.Marks, " + ")
+		if jt.Line != "" {
+			title = fmt.Sprintf("Delta corner: %s, line lead %s", strings.Join(jt.Marks, " + "), jt.Line)
+		}
+		b.add(Step{Kind: StepJoin, Title: title, Detail: capitalise(jt.What) + ".",
+			Reminders: []string{"solder fumes: ventilate", "sleeve the joint and tie it down clear of the rotor"}})
+	}
+	b.add(Step{Kind: StepTest, Test: TestResistance, Title: "Test: resistance of each phase"})
+	b.add(Step{Kind: StepTest, Test: TestBalance, Title: "Test: resistance balance"})
+	b.add(Step{Kind: StepTest, Test: TestInsulation, Title: "Test: insulation resistance to the core", Reminders: []string{cautionIR}})
+	b.add(Step{Kind: StepTest, Test: TestHighVoltage, Title: "Test: high-voltage withstand", Reminders: []string{cautionHV}})
+	b.add(Step{Kind: StepTest, Test: TestBackEMF, Title: "Test (optional): back-EMF balance with the rotor fitted", Reminders: []string{cautionSpin}})
+	return nil
+}
+
+// howToWind says in plain words which way the wire goes round a tooth, seen
+// from the air gap as DESIGN.md defines it. Facing the tooth from the air gap
+// with the lead end up, the slot on the right is the slot before the tooth
+// for an inner rotor (looking outward from the bore) and the slot after it for
+// an outer rotor (looking inward): clockwise, the wire runs away from the lead
+// end down the right-hand slot.
+func howToWind(r Rotor, d winding.Direction, tooth, before, after, turns, strands int) string {
+	right, left := before, after
+	view := fmt.Sprintf("seen from the bore, facing tooth %d with the lead end up", tooth)
+	if r == OuterRotor {
+		right, left = after, before
+		view = fmt.Sprintf("seen from outside the stator, facing tooth %d with the lead end up", tooth)
+	}
+	sense := "clockwise"
+	down, up := right, left
+	if d == winding.CCW {
+		sense = "counter-clockwise"
+		down, up = left, right
+	}
+	s := fmt.Sprintf("Wind %s %s: from the lead end go down slot %d and come back up slot %d; %d turns", sense, view, down, up, turns)
+	if strands > 1 {
+		s += fmt.Sprintf(", %d strands in hand laid side by side", strands)
+	}
+	return s + "; start and finish at the lead end."
+}
+
+const linerCuff = 3.0 // mm the liner stands out at each end of the stack (common practice)
+
+func linerSize(p *Plan, length, t float64) string {
+	return fmt.Sprintf("%.1f mm × %.0f mm of %g mm insulation", p.Slot.LinedPerimeterMM, length, t)
+}
+
+func separatorSize(p *Plan, length, t float64) string {
+	return fmt.Sprintf("%.1f mm × %.0f mm of %g mm film", p.Slot.DepthMM, length, t)
+}
+
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
+}
+
+func capitalise(s string) string {
+	if s == "" {
+		return s
+	}
+	return strings.ToUpper(s[:1]) + s[1:]
+}
+
+func (b *builder) wireDetail() string {
+	p := b.p
+	w := p.Wire
+	var s strings.Builder
+	fmt.Fprintf(&s, "Measure the bare copper with a micrometer after scraping the enamel off: %.3f mm ±%.3f mm. ", w.BareDiameterMM, w.DiameterTolMM)
+	if w.StrandsInHand > 1 {
+		fmt.Fprintf(&s, "Wind %d strands in hand from %d spools (or a measured bundle). ", w.StrandsInHand, w.StrandsInHand)
+	}
+	s.WriteString("Each path is one continuous wire; cut from the spool per strand:")
+	for _, pp := range p.Paths {
+		fmt.Fprintf(&s, " %s%s %.2f m;", pp.Phase, pathSuffix(len(p.Paths)/len(p.Layout.PhaseNames), pp.Path), pp.CutLengthM)
+	}
+	return strings.TrimSuffix(s.String(), ";") + "."
+}
+
+func pathSuffix(paths, path int) string {
+	if paths <= 1 {
+		return ""
+	}
+	return fmt.Sprintf(" path %d", path)
+}

@@ -1,0 +1,166 @@
+package plan
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"coilwright/winding/wire"
+)
+
+// Names of the tests in Plan.Tests; stable keys for other packages.
+const (
+	TestContinuity      = "continuity"
+	TestPhaseInsulation = "phase_insulation"
+	TestResistance      = "resistance"
+	TestBalance         = "balance"
+	TestInsulation      = "insulation_resistance"
+	TestHighVoltage     = "hv_withstand"
+	TestBackEMF         = "back_emf"
+)
+
+// Test limits with their sources.
+const (
+	// BalanceLimitPercent: phase resistances of a random-wound winding within
+	// 2 % of their mean (EASA AR100-2020; 1 % for form-wound).
+	BalanceLimitPercent = 2.0
+	// InsulationTestVolts: IEEE 43-2013 test voltage for windings rated below 1 kV.
+	InsulationTestVolts = 500.0
+	// MinInsulationMOhm: IEEE 43-2013 minimum insulation resistance after 1 min,
+	// corrected to 40 °C, for random-wound windings.
+	MinInsulationMOhm = 5.0
+	// IEEE43MinPowerW: the scope of IEEE 43 starts at 750 W.
+	IEEE43MinPowerW = 750.0
+	// LengthUncertaintyPercent widens the resistance band for the estimate of
+	// the mean turn and jumpers (common practice: a careful hand-wound coil
+	// lands within about 5 % of its estimated length).
+	LengthUncertaintyPercent = 5.0
+	// BackEMFBalancePercent: the line EMFs of a sound winding with the rotor
+	// fitted agree within a few per cent (common practice).
+	BackEMFBalancePercent = 3.0
+	// ContinuityFactor: a path reading above this multiple of its expected
+	// resistance has an open or a bad joint (common practice).
+	ContinuityFactor = 1.25
+)
+
+// Safety cautions shown with the tests and in the plan.
+const (
+	cautionHV = "Lethal voltage. Only a person trained for high-voltage testing, with a tester whose current is limited, " +
+		"the area closed off and the stator on an insulating surface, should do this. Follow local electrical codes and licensed practice. " +
+		"Discharge the winding to the core afterwards and keep it shorted until it is touched."
+	cautionIR = "The tester puts 500 V DC on the winding: do not touch the leads or the stator while testing, " +
+		"and discharge the winding to the core for at least as long as it was tested before touching it."
+	cautionSpin = "Spinning rotor and strong magnets: guard the rotor, clamp the stator, keep hands, hair and loose clothing clear, " +
+		"and bring the rotor onto the stator with a guide, not by hand (magnets pull hard enough to crush fingers). " +
+		"A turning generator makes voltage at its leads even when nothing is connected."
+)
+
+func (b *builder) tests() error {
+	p := b.p
+	names := p.Layout.PhaseNames
+	pairs := phasePairs(names)
+	pathR := 0.0
+	for _, pp := range p.Paths {
+		pathR = math.Max(pathR, pp.Ohm20C)
+	}
+	pathAmb := wire.ResistanceAt(pathR, p.AmbientC)
+	tolPct := 100 * 2 * p.Wire.DiameterTolMM / p.Wire.BareDiameterMM
+	band := math.Round((tolPct+LengthUncertaintyPercent)*10) / 10
+	hv := HVTestVolts(p.RatedPowerW, p.RatedVoltageV)
+	var pathWord string
+	if b.j.Winding.Paths > 1 {
+		pathWord = fmt.Sprintf(" (each of the %d paths of every phase on its own, before they are joined)", b.j.Winding.Paths)
+	}
+	var ts []Test
+	ts = append(ts, Test{Name: TestContinuity,
+		What:    fmt.Sprintf("Continuity of every path from its start lead to its finish lead: %s%s. Each reads near its expected resistance, none open.", endsList(names), pathWord),
+		Limit:   round3(ContinuityFactor * pathAmb), Unit: "ohm", Compare: "max",
+		Source: "common practice: an open circuit or a poor joint reads well above the expected resistance",
+		Note:   fmt.Sprintf("expected about %s per path at %g °C", formatOhm(pathAmb), p.AmbientC)})
+	beforeJoin := "star point"
+	if p.Connection.String() == "delta" {
+		beforeJoin = "delta corners"
+	}
+	ts = append(ts, Test{Name: TestPhaseInsulation,
+		What:    fmt.Sprintf("Insulation between phases, before the %s is made: %s, at %g V DC for 1 min.", beforeJoin, strings.Join(pairs, ", "), InsulationTestVolts),
+		Limit:   MinInsulationMOhm, Unit: "Mohm", Compare: "min", Voltage: InsulationTestVolts,
+		Source:  "IEEE 43-2013 minimum for random-wound windings, borrowed here for phase to phase (the standard tests winding to ground)",
+		Caution: cautionIR,
+		Note:    "a low reading between two phases points to a damaged separator or enamel where their coils share a slot"})
+	var expect []string
+	for _, ph := range p.PhaseOhms {
+		expect = append(expect, fmt.Sprintf("%s %s", ph.Phase, formatOhm(ph.OhmAmbient)))
+	}
+	ts = append(ts, Test{Name: TestResistance,
+		What: fmt.Sprintf("Resistance of each phase with a four-wire (Kelvin) meter, the winding at room temperature; refer the readings to 20 °C by the copper coefficient. Expected at %g °C: %s (%s at 20 °C).",
+			p.AmbientC, strings.Join(expect, ", "), formatOhm(p.PhaseResistance20C)),
+		Limit: band, Unit: "%", Compare: "band",
+		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band: ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm, plus %.0f %% for the length estimate (common practice)",
+			tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
+		Note: "a star winding is read line to line; check converts the three readings to phase values"})
+	ts = append(ts, Test{Name: TestBalance,
+		What:  "Balance of the three phase resistances: (highest − lowest) / mean.",
+		Limit: BalanceLimitPercent, Unit: "%", Compare: "max",
+		Source: "EASA AR100-2020: random-wound windings within 2 % (1 % for form-wound)",
+		Note:   "a phase high by about one coil's share has a coil with too many turns or a poor joint; low, a shorted turn"})
+	irNote := "also read at 10 min for the polarization index (at least 2.0 for class B insulation and above, IEEE 43-2013)"
+	if p.RatedPowerW < IEEE43MinPowerW {
+		irNote = fmt.Sprintf("this machine (about %.0f W) is below the scope of IEEE 43, which starts at 750 W: the limit is borrowed; ", p.RatedPowerW) + irNote
+	}
+	ts = append(ts, Test{Name: TestInsulation,
+		What:  fmt.Sprintf("Insulation resistance of the whole winding (all leads joined) to the stator core at %g V DC, read after 1 min; correct the reading to 40 °C.", InsulationTestVolts),
+		Limit: MinInsulationMOhm, Unit: "Mohm", Compare: "min", Voltage: InsulationTestVolts,
+		Source: "IEEE 43-2013: 500 V DC below 1 kV rating; minimum 5 MΩ at 40 °C for random-wound windings", Caution: cautionIR, Note: irNote})
+	ts = append(ts, Test{Name: TestHighVoltage,
+		What: fmt.Sprintf("High-voltage withstand: %.0f V AC 50/60 Hz for 1 min between the winding (all leads joined) and the core, after the insulation resistance has passed. No breakdown.",
+			hv),
+		Limit: 60, Unit: "s", Compare: "min", Voltage: hv,
+		Source: fmt.Sprintf("IEC 60034-1 clause 9.2 (table number from memory): %s, rated %.1f V line, about %.0f W",
+			hvRule(p.RatedPowerW, p.RatedVoltageV), p.RatedVoltageV, p.RatedPowerW),
+		Caution: cautionHV,
+		Note:    "a repeated test (after rework, or at acceptance) is at 80 % of this voltage; rewound windings: EASA AR100-2020 tables 4-4 and 4-5; a DC test is about 1.7 × the AC value"})
+	bt := Test{Name: TestBackEMF,
+		What:  "Optional, with the rotor fitted: spin the rotor at a steady known speed with the leads open and read the three line voltages; they should agree.",
+		Limit: BackEMFBalancePercent, Unit: "%", Compare: "max",
+		Source:  "common practice; expected value from E = √2·π·f·N·k_w·Φ (textbook, e.g. Pyrhönen et al.)",
+		Caution: cautionSpin}
+	if p.EMF != nil {
+		bt.Note = fmt.Sprintf("expected %.4f V rms line per rpm (%.4f V phase per rpm)", p.EMF.VoltsPerRPMPhase*b.lineFactor, p.EMF.VoltsPerRPMPhase)
+	}
+	ts = append(ts, bt)
+	p.Tests = ts
+	return nil
+}
+
+func hvRule(powerW, voltsV float64) string {
+	if powerW < 1000 && voltsV < 100 {
+		return "under 1 kW and under 100 V: 500 V + 2·U_N"
+	}
+	return "1000 V + 2·U_N, at least 1500 V"
+}
+
+func phasePairs(names []string) []string {
+	var out []string
+	for i := range names {
+		for k := i + 1; k < len(names); k++ {
+			out = append(out, names[i]+"–"+names[k])
+		}
+	}
+	return out
+}
+
+func endsList(names []string) string {
+	var s []string
+	for _, n := range names {
+		s = append(s, n+"1–"+n+"2")
+	}
+	return strings.Join(s, ", ")
+}
+
+func round3(x float64) float64 {
+	if x == 0 {
+		return 0
+	}
+	mag := math.Pow(10, 3-math.Ceil(math.Log10(math.Abs(x))))
+	return math.Round(x*mag) / mag
+}
