@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"os"
 	"reflect"
+	"regexp"
 	"sort"
 	"strings"
 	"time"
@@ -23,6 +24,10 @@ func Parse(data []byte, name string) (*Job, error) {
 	if len(data) > MaxFileSize {
 		return nil, &FieldError{File: name, Field: "(file)", Value: fmt.Sprintf("%d bytes", len(data)),
 			Reason: "too large for a job file", Hint: fmt.Sprintf("a job file is a few kilobytes; the limit is %d bytes", MaxFileSize)}
+	}
+	if len(bytes.TrimSpace(data)) == 0 {
+		return nil, &FieldError{File: name, Field: "(file)", Reason: "is empty",
+			Hint: "`coilwright new -o FILE` writes a commented job file to start from"}
 	}
 	j := &Job{}
 	dec := toml.NewDecoder(bytes.NewReader(data)).DisallowUnknownFields()
@@ -97,8 +102,12 @@ func decodeError(err error, name string) error {
 	if errors.As(err, &de) {
 		line, col := de.Position()
 		key := strings.Join(de.Key(), ".")
-		msg := strings.TrimPrefix(de.Error(), "toml: ")
+		msg := friendlyType(strings.TrimPrefix(de.Error(), "toml: "))
 		fe := &FieldError{File: name, Field: key, Line: line, Col: col, Reason: msg}
+		if key == "date" {
+			fe.Reason = "must be a TOML date"
+			fe.Hint = "write it without quotes, e.g. date = 2026-11-20"
+		}
 		if key == "" {
 			fe.Field = "(syntax)"
 			fe.Hint = "the file is not valid TOML there: each line is `key = value`, tables are `[name]`, text is in double quotes"
@@ -153,4 +162,26 @@ func fieldByTag(t reflect.Type, tag string) (reflect.StructField, bool) {
 		}
 	}
 	return reflect.StructField{}, false
+}
+
+// typeWords are the plain names of the Go types of Job fields.
+var typeWords = map[string]string{
+	"int": "a whole number", "float64": "a number", "string": "text in double quotes",
+	"bool": "true or false", "time.Time": "a date (YYYY-MM-DD)", "*int": "a whole number",
+	"*float64": "a number",
+}
+
+var decodeTypeRE = regexp.MustCompile(`^cannot decode TOML (\w[\w ]*?) into struct field \S+ of type (\S+)$`)
+
+// friendlyType rewords go-toml's type mismatch in the user's terms.
+func friendlyType(msg string) string {
+	m := decodeTypeRE.FindStringSubmatch(msg)
+	if m == nil {
+		return msg
+	}
+	want, ok := typeWords[m[2]]
+	if !ok {
+		want = "a table"
+	}
+	return fmt.Sprintf("the value is a TOML %s, but %s is needed here", m[1], want)
 }

@@ -73,8 +73,8 @@ func (b *builder) tests() error {
 	}
 	var ts []Test
 	ts = append(ts, Test{Name: TestContinuity,
-		What:    fmt.Sprintf("Continuity of every path from its start lead to its finish lead: %s%s. Each reads near its expected resistance, none open.", endsList(names), pathWord),
-		Limit:   round3(ContinuityFactor * pathAmb), Unit: "ohm", Compare: "max",
+		What:  fmt.Sprintf("Continuity of every path from its start lead to its finish lead: %s%s. Each reads near its expected resistance, none open.", endsList(names), pathWord),
+		Limit: round3(ContinuityFactor * pathAmb), Unit: "ohm", Compare: "max",
 		Source: "common practice: an open circuit or a poor joint reads well above the expected resistance",
 		Note:   fmt.Sprintf("expected about %s per path at %g °C", formatOhm(pathAmb), p.AmbientC)})
 	beforeJoin := "star point"
@@ -82,8 +82,8 @@ func (b *builder) tests() error {
 		beforeJoin = "delta corners"
 	}
 	ts = append(ts, Test{Name: TestPhaseInsulation,
-		What:    fmt.Sprintf("Insulation between phases, before the %s is made: %s, at %g V DC for 1 min.", beforeJoin, strings.Join(pairs, ", "), InsulationTestVolts),
-		Limit:   MinInsulationMOhm, Unit: "Mohm", Compare: "min", Voltage: InsulationTestVolts,
+		What:  fmt.Sprintf("Insulation between phases, before the %s is made: %s, at %g V DC for 1 min.", beforeJoin, strings.Join(pairs, ", "), InsulationTestVolts),
+		Limit: MinInsulationMOhm, Unit: "Mohm", Compare: "min", Voltage: InsulationTestVolts,
 		Source:  "IEEE 43-2013 minimum for random-wound windings, borrowed here for phase to phase (the standard tests winding to ground)",
 		Caution: cautionIR,
 		Note:    "a low reading between two phases points to a damaged separator or enamel where their coils share a slot"})
