@@ -223,7 +223,7 @@ func (g *guideModel) complete(s plan.Step) {
 	e := Entry{Kind: EntryDone, Step: s.Index}
 	if s.Coil != nil {
 		e.Turns = g.c.prog.turns[s.Index-1]
-		g.flash = fmt.Sprintf("coil %d of %d done: %d turns on tooth %d", s.Coil.Order, s.Coil.Of, e.Turns, s.Coil.Tooth)
+		g.flash = fmt.Sprintf("tooth %d wound: %d turns", s.Coil.Tooth, e.Turns)
 		if e.Turns != s.Coil.Turns {
 			g.flash += fmt.Sprintf(" (plan %d)", s.Coil.Turns)
 		}
@@ -242,6 +242,7 @@ func (g guideModel) startReadings(s plan.Step) (guideModel, tea.Cmd) {
 		g.fields[i] = newTextInput(fmt.Sprintf("%-8s ", f.label), 16)
 		g.fields[i].Width = 12
 		g.fields[i].Placeholder = f.unit
+		g.fields[i].SetValue(f.def)
 	}
 	if r := g.c.prog.readings[s.Index-1]; r != nil {
 		for i, v := range r.values {

@@ -24,21 +24,49 @@ func TestMain(m *testing.M) {
 	os.Exit(m.Run())
 }
 
-// memRecorder keeps entries in memory; fail makes Append refuse.
+// memRecorder keeps entries in memory the way the journal store keeps
+// events: an entry it cannot write waits and goes first next time.
 type memRecorder struct {
 	mu      sync.Mutex
 	entries []Entry
+	waiting []Entry
 	fail    error
 }
+
+type heldErr struct {
+	err  error
+	held int
+}
+
+func (e heldErr) Error() string    { return e.err.Error() }
+func (e heldErr) HeldEntries() int { return e.held }
 
 func (r *memRecorder) Append(e Entry) error {
 	r.mu.Lock()
 	defer r.mu.Unlock()
+	r.waiting = append(r.waiting, e)
+	return r.flush()
+}
+
+func (r *memRecorder) Retry() error {
+	r.mu.Lock()
+	defer r.mu.Unlock()
+	return r.flush()
+}
+
+func (r *memRecorder) flush() error {
 	if r.fail != nil {
-		return r.fail
+		return heldErr{r.fail, len(r.waiting)}
 	}
-	r.entries = append(r.entries, e)
+	r.entries = append(r.entries, r.waiting...)
+	r.waiting = nil
 	return nil
+}
+
+func (r *memRecorder) setFail(err error) {
+	r.mu.Lock()
+	defer r.mu.Unlock()
+	r.fail = err
 }
 
 func (r *memRecorder) all() []Entry {
@@ -162,3 +190,5 @@ func lineWith(s, sub string) string {
 	}
 	return ""
 }
+
+func ansiStrip(s string) string { return ansi.Strip(s) }

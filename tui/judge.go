@@ -2,6 +2,7 @@ package tui
 
 import (
 	"fmt"
+	"strconv"
 	"strings"
 
 	"coilwright/winding/plan"
@@ -20,21 +21,28 @@ type Judge func(p *plan.Plan, t plan.Test, values []float64) Verdict
 
 // field is one reading a test step asks for.
 type field struct {
+	key   string // name of the value in the progress record
 	label string
 	unit  string
+	def   string // filled in beforehand (a test voltage, the room temperature)
 }
 
-// fieldsFor lists the readings of a test: a band test (resistance balance)
-// asks one value per phase, any other test one value.
+// fieldsFor lists the readings of a test. The tests of the plan builder get
+// the readings the check engine judges (line resistances and temperature,
+// insulation resistance and test voltage...); any other test asks one value
+// per phase when it is judged as a band, else one value.
 func fieldsFor(p *plan.Plan, t plan.Test) []field {
+	if fs := verifyFields(p, t); fs != nil {
+		return fs
+	}
 	if t.Compare == "band" && p != nil && p.Layout != nil && len(p.Layout.PhaseNames) > 0 {
 		out := make([]field, 0, len(p.Layout.PhaseNames))
 		for _, n := range p.Layout.PhaseNames {
-			out = append(out, field{label: "phase " + n, unit: t.Unit})
+			out = append(out, field{key: n, label: "phase " + n, unit: t.Unit})
 		}
 		return out
 	}
-	return []field{{label: "reading", unit: t.Unit}}
+	return []field{{key: "value", label: "reading", unit: t.Unit}}
 }
 
 // limitJudge compares readings with the test's limit: "max" and "min" per
@@ -81,3 +89,44 @@ func limitJudge(_ *plan.Plan, t plan.Test, v []float64) Verdict {
 
 // fmtNum prints a reading without needless digits.
 func fmtNum(x float64) string { return fmt.Sprintf("%.4g", x) }
+
+// verifyFields are the readings the check engine needs for the plan
+// builder's tests, or nil for a test it does not judge step by step.
+func verifyFields(p *plan.Plan, t plan.Test) []field {
+	temp := ""
+	if p != nil {
+		temp = strconv.FormatFloat(p.AmbientC, 'g', -1, 64)
+	}
+	lines := []field{
+		{key: "uv", label: "U-V", unit: "ohm"},
+		{key: "vw", label: "V-W", unit: "ohm"},
+		{key: "wu", label: "W-U", unit: "ohm"},
+		{key: "temp", label: "winding", unit: "degC", def: temp},
+	}
+	switch t.Name {
+	case plan.TestResistance, plan.TestBalance:
+		return lines
+	case plan.TestInsulation:
+		return []field{
+			{key: "ir1", label: "IR 1 min", unit: "Mohm"},
+			{key: "volts", label: "test V", unit: "V DC", def: strconv.FormatFloat(t.Voltage, 'g', -1, 64)},
+			{key: "temp", label: "winding", unit: "degC", def: temp},
+		}
+	case plan.TestHighVoltage:
+		return []field{
+			{key: "volts", label: "applied", unit: "V AC", def: strconv.FormatFloat(t.Voltage, 'g', -1, 64)},
+			{key: "seconds", label: "held", unit: "s, no breakdown"},
+		}
+	case plan.TestBackEMF:
+		return []field{
+			{key: "uv", label: "U-V", unit: "V rms"},
+			{key: "vw", label: "V-W", unit: "V rms"},
+			{key: "wu", label: "W-U", unit: "V rms"},
+			{key: "rpm", label: "speed", unit: "rpm"},
+		}
+	}
+	return nil
+}
+
+// defaultJudge is used when Options.Judge is nil.
+var defaultJudge Judge = limitJudge

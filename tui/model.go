@@ -41,7 +41,7 @@ type Options struct {
 	History  []Entry  // the record so far, replayed to resume
 	Notice   string   // shown on the status line at start (e.g. a torn last line)
 	Where    string   // where progress is kept, in words, for the help screen
-	Judge    Judge    // verdicts of test readings; nil compares with the limits
+	Judge    Judge    // verdicts of test readings; nil uses VerifyJudge
 	Now      func() time.Time
 }
 
@@ -73,7 +73,7 @@ func New(o Options) *Model {
 		tests: map[string]plan.Test{},
 	}
 	if c.judge == nil {
-		c.judge = limitJudge
+		c.judge = defaultJudge
 	}
 	if c.now == nil {
 		c.now = time.Now
@@ -121,17 +121,15 @@ func (m *Model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		m.help = m.help.open(bw, bh)
 	case savedMsg:
 		cmd = m.c.out.saved(msg)
-		if m.quitting && m.c.out.pending() == 0 {
+		if m.quitting && m.c.out.settled() {
 			return m, tea.Quit
 		}
 	case retryMsg:
 		cmd = m.c.out.retry()
 	case tea.KeyMsg:
 		cmd = m.key(msg)
-		if m.quitting {
-			if m.c.out.pending() == 0 && !m.c.out.inflight {
-				return m, tea.Quit
-			}
+		if m.quitting && m.c.out.settled() {
+			return m, tea.Quit
 		}
 	}
 	return m, tea.Batch(cmd, m.c.out.kick())
@@ -222,7 +220,7 @@ func (m *Model) header() string {
 		rest = " | " + c.planName()
 	}
 	if lipglossWidth(rest) > room {
-		rest = ansi.Truncate(rest, room, "")
+		rest = ansi.Truncate(rest, room, "...")
 	}
 	left := c.st.title.Render(title) + c.st.dim.Render(rest)
 	gap := c.width - lipglossWidth(left) - len(right)

@@ -100,6 +100,28 @@ func (g guideModel) panel(w, h int) []string {
 	if boxed {
 		cw = max(0, w-4)
 	}
+	inner := h
+	if boxed {
+		inner = max(0, h-2)
+	}
+	b := g.panelLines(cw, false)
+	if len(b.l) > inner {
+		b = g.panelLines(cw, true)
+	}
+	out := b.l
+	if len(out) > inner {
+		out = out[:inner]
+	}
+	if !boxed {
+		return out
+	}
+	return strings.Split(c.st.panel.Width(max(0, w-2)).Render(strings.Join(out, "\n")), "\n")
+}
+
+// panelLines builds the panel's lines at content width cw; compact keeps the
+// turn count to one line for short terminals.
+func (g guideModel) panelLines(cw int, compact bool) *lines {
+	c := g.c
 	b := &lines{st: c.st, w: cw}
 	cur := c.prog.current()
 	s, ok := c.step(cur)
@@ -107,7 +129,7 @@ func (g guideModel) panel(w, h int) []string {
 	case !ok:
 		g.doneView(b)
 	case s.Kind == plan.StepCoil && s.Coil != nil:
-		g.coilView(b, s)
+		g.coilView(b, s, compact)
 	case s.Kind == plan.StepTest:
 		g.testView(b, s)
 	default:
@@ -125,18 +147,7 @@ func (g guideModel) panel(w, h int) []string {
 			b.text(fmt.Sprintf("Undo step %d (%s)? enter/y undoes it, esc keeps it.", ls.Index, ls.Title), c.st.warn.Render)
 		}
 	}
-	inner := h
-	if boxed {
-		inner = max(0, h-2)
-	}
-	out := b.l
-	if len(out) > inner {
-		out = out[:inner]
-	}
-	if !boxed {
-		return out
-	}
-	return strings.Split(c.st.panel.Width(max(0, w-2)).Render(strings.Join(out, "\n")), "\n")
+	return b
 }
 
 // stepOf is the "step i of n" note.
@@ -145,7 +156,7 @@ func (g guideModel) stepOf(s plan.Step) string {
 }
 
 // coilView is the panel of a coil step.
-func (g guideModel) coilView(b *lines, s plan.Step) {
+func (g guideModel) coilView(b *lines, s plan.Step, compact bool) {
 	c := g.c
 	cs := s.Coil
 	b.titled(fmt.Sprintf("coil %d of %d", cs.Order, cs.Of), g.stepOf(s))
@@ -153,8 +164,10 @@ func (g guideModel) coilView(b *lines, s plan.Step) {
 		c.st.strong.Render(strconv.Itoa(cs.Tooth)), c.st.phaseStyle(c.phaseIndex(cs.Phase)).Render(cs.Phase), cs.Path, cs.Position))
 	b.kvStrong("wind", cs.HowToWind)
 	n := c.prog.turns[s.Index-1]
-	b.raw("")
-	g.counter(b, n, cs.Turns)
+	if !compact {
+		b.raw("")
+	}
+	g.counter(b, n, cs.Turns, compact)
 	if g.mode == modeConfirmTurns {
 		b.text(fmt.Sprintf("%d turns counted, the plan says %d. enter/y records %d; esc goes back to counting.", n, cs.Turns, n), c.st.warn.Render)
 	}
@@ -167,13 +180,10 @@ func (g guideModel) coilView(b *lines, s plan.Step) {
 	for _, r := range s.Reminders {
 		b.kv("mind", r)
 	}
-	if s.Detail != "" {
-		b.kv("", s.Detail)
-	}
 }
 
 // counter shows the turn count in large figures with a bar against the plan.
-func (g guideModel) counter(b *lines, n, want int) {
+func (g guideModel) counter(b *lines, n, want int, compact bool) {
 	st := g.c.st
 	style := st.counter
 	if n == want {
@@ -190,13 +200,13 @@ func (g guideModel) counter(b *lines, n, want int) {
 		of += fmt.Sprintf("  %d to go", want-n)
 	}
 	bigW := ansi.StringWidth(big[0])
-	if bigW+2+len(of) <= b.w {
+	if !compact && bigW+2+len(of) <= b.w {
 		b.raw(style.Render(big[0]), style.Render(big[1])+"  "+of, style.Render(big[2]))
 	} else {
-		b.raw(style.Render(strconv.Itoa(n)) + " " + of)
+		b.raw(c0(b.st, "turns") + style.Render(strconv.Itoa(n)) + " " + of)
 	}
 	bw := min(40, b.w-2)
-	if bw >= 10 && want > 0 {
+	if bw >= 10 && want > 0 && !compact {
 		fill := min(bw, n*bw/want)
 		b.raw("[" + strings.Repeat("#", fill) + strings.Repeat(".", bw-fill) + "]")
 	}
@@ -323,4 +333,9 @@ func (g guideModel) doneView(b *lines) {
 	b.titled("all steps done", fmt.Sprintf("%d of %d", c.prog.count(), len(c.steps())))
 	b.text(fmt.Sprintf("Every step of %s is recorded: %d coils wound.", c.planName(), c.prog.coilsDone(c.steps())), c.st.value.Render)
 	b.text("o shows every step with its record; u takes back the last one; q quits.", c.st.dim.Render)
+}
+
+// c0 is a panel label.
+func c0(st *styles, label string) string {
+	return st.dim.Render(fmt.Sprintf("%-*s", labelWidth, label))
 }

@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"errors"
 	"time"
 
 	tea "github.com/charmbracelet/bubbletea"
@@ -29,19 +30,21 @@ type Entry struct {
 	At      time.Time // set by the guide when the entry is made
 }
 
-// Recorder is the progress record the guide writes to. Append must make the
-// entry durable before it returns nil; on an error the entry counts as not
-// written and the guide offers it again later. The guide calls Append from
-// tea.Cmds, one at a time, never from Update or View.
+// Recorder is the progress record the guide writes to. Append hands one
+// entry over and returns nil once it is durable. On an error the recorder
+// keeps the entry (and any after it) and writes it, in order, before the next
+// one or at Retry, which returns nil once nothing waits. The guide calls the
+// recorder only from tea.Cmds, one call at a time, never from Update or View.
 type Recorder interface {
 	Append(Entry) error
+	Retry() error
 }
 
-// savedMsg reports a written batch: n entries made durable, then err (nil
-// when the whole batch was written).
+// savedMsg reports a write: err is nil when everything handed over is
+// durable; held is how many entries the recorder still keeps unwritten.
 type savedMsg struct {
-	n   int
-	err error
+	err  error
+	held int
 }
 
 // retryMsg asks the writer to try again after a failure.
@@ -51,63 +54,96 @@ type retryMsg struct{}
 // timer in the guide, and it runs only while a write is failing.
 const retryAfter = 2 * time.Second
 
-// writer queues entries and writes them in order, one batch at a time.
+// heldCounter is implemented by errors that say how many entries wait.
+type heldCounter interface{ HeldEntries() int }
+
+// writer hands entries to the recorder in order, one command at a time.
 type writer struct {
 	rec      Recorder
-	queue    []Entry
+	queue    []Entry // not yet handed over
 	inflight bool
-	err      error // last write error, nil once a write succeeds
 	waiting  bool  // a retry timer is running
+	err      error // last write error, nil once everything is durable
+	held     int   // entries the recorder keeps unwritten
 	failures int
-	written  int
 }
 
 // push queues an entry.
 func (w *writer) push(e Entry) { w.queue = append(w.queue, e) }
 
-// pending reports how many entries are not yet durable.
-func (w *writer) pending() int { return len(w.queue) }
+// pending is how many entries are not yet durable.
+func (w *writer) pending() int { return len(w.queue) + w.held }
 
-// kick starts a write of the queued entries unless one is running, a retry
-// is waiting, or there is nothing to write.
+// settled reports that nothing waits and nothing is being written.
+func (w *writer) settled() bool { return w.pending() == 0 && !w.inflight }
+
+// kick hands the queued entries over unless a write runs, a retry is
+// waiting, or there is nothing to write.
 func (w *writer) kick() tea.Cmd {
 	if w.rec == nil || w.inflight || w.waiting || len(w.queue) == 0 {
+		if w.rec == nil {
+			w.queue = nil
+		}
 		return nil
 	}
 	w.inflight = true
-	batch := append([]Entry(nil), w.queue...)
+	batch := w.queue
+	w.queue = nil
 	rec := w.rec
+	held := w.held
 	return func() tea.Msg {
-		for i, e := range batch {
+		var last error
+		for _, e := range batch {
 			if err := rec.Append(e); err != nil {
-				return savedMsg{n: i, err: err}
+				last = err
 			}
 		}
-		return savedMsg{n: len(batch)}
+		return savedMsg{err: last, held: heldAfter(last, held+len(batch))}
 	}
 }
 
+// heldAfter is how many entries wait after a write that ended with err.
+func heldAfter(err error, upTo int) int {
+	if err == nil {
+		return 0
+	}
+	var hc heldCounter
+	if errors.As(err, &hc) {
+		return hc.HeldEntries()
+	}
+	return upTo
+}
+
 // saved takes the result of a write and returns the next command: another
-// batch, a retry timer after a failure, or nil.
+// write, a retry timer after a failure, or nil.
 func (w *writer) saved(msg savedMsg) tea.Cmd {
 	w.inflight = false
-	n := min(max(0, msg.n), len(w.queue))
-	w.queue = w.queue[n:]
-	w.written += n
+	w.held = msg.held
 	if msg.err != nil {
 		w.err = msg.err
 		w.failures++
 		w.waiting = true
 		return tea.Tick(retryAfter, func(time.Time) tea.Msg { return retryMsg{} })
 	}
-	w.err = nil
-	w.failures = 0
+	w.err, w.held, w.failures = nil, 0, 0
 	return w.kick()
 }
 
-// retry writes again when the timer fires; the error stays shown until a
-// write succeeds.
+// retry asks the recorder to write what it keeps; the error stays shown
+// until a write succeeds.
 func (w *writer) retry() tea.Cmd {
 	w.waiting = false
-	return w.kick()
+	if w.rec == nil || w.inflight {
+		return nil
+	}
+	if w.held == 0 {
+		return w.kick()
+	}
+	w.inflight = true
+	rec := w.rec
+	held := w.held
+	return func() tea.Msg {
+		err := rec.Retry()
+		return savedMsg{err: err, held: heldAfter(err, held)}
+	}
 }

@@ -284,7 +284,9 @@ func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, w int) dr
 	for r := range rows {
 		d.lines = append(d.lines, rows[r].String())
 	}
-	d.lines = append(d.lines, st.dim.Render(stripCaption(first+1, first+n, q, w)))
+	if n < q {
+		d.lines = append(d.lines, st.dim.Render(stripCaption(first+1, first+n, q, w)))
+	}
 	return d
 }
 
