@@ -1,0 +1,126 @@
+package verify
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"coilwright/winding"
+	"coilwright/winding/plan"
+)
+
+// ImbalanceLimitPercent is the largest difference between phase resistances,
+// (max − min)/mean, of a random-wound winding (EASA AR100-2020; 1 % for
+// form-wound coils).
+const ImbalanceLimitPercent = 2.0
+
+// LengthUncertainty is the stated uncertainty of the plan's wire length, a
+// geometric mean-turn estimate of a hand-wound coil (coil build, tension,
+// jumper routing): ±4 % (common practice).
+const LengthUncertainty = 0.04
+
+// ErrUnsupported marks a plan this package cannot judge (not three phases,
+// no expected resistance).
+var ErrUnsupported = errors.New("verify: not supported")
+
+// Check judges the readings against the plan. It returns an *InputError
+// (errors.Is ErrInput) for readings that cannot be judged. Each section of the
+// readings that is present is judged; the report's verdict is the worst of
+// its findings.
+func Check(p *plan.Plan, r Readings) (*Report, error) {
+	if err := r.Validate(); err != nil {
+		return nil, err
+	}
+	if p == nil || p.Layout == nil {
+		return nil, fmt.Errorf("%w: no plan or no layout", ErrUnsupported)
+	}
+	if n := len(p.Layout.PhaseNames); n != 3 {
+		return nil, fmt.Errorf("%w: %d phases; the check handles three-phase windings", ErrUnsupported, n)
+	}
+	c := &checker{p: p, r: r, rep: &Report{
+		TemperatureC: r.TempC, Connection: p.Connection.String(), FourWire: r.FourWire, LeadOhm: r.LeadOhm,
+		ImbalanceLimit: ImbalanceLimitPercent, Verdict: Pass, Phases: []Phase{}, Findings: []Finding{},
+	}}
+	c.rep.Expected = ExpectedOhm{At20C: p.PhaseResistance20C, AtTemp: AtTemp(p.PhaseResistance20C, r.TempC)}
+	c.rep.Band = bandFor(p)
+	if r.HasResistance() {
+		if p.PhaseResistance20C <= 0 {
+			return nil, fmt.Errorf("%w: the plan has no expected phase resistance", ErrUnsupported)
+		}
+		c.resistance()
+	}
+	if r.Insulation != nil {
+		c.insulation()
+	}
+	if r.Withstand != nil {
+		c.withstand()
+	}
+	if r.EMF != nil {
+		c.backEMF()
+	}
+	c.cautions()
+	return c.rep, nil
+}
+
+type checker struct {
+	p   *plan.Plan
+	r   Readings
+	rep *Report
+}
+
+func (c *checker) add(f Finding) {
+	c.rep.Findings = append(c.rep.Findings, f)
+	c.rep.Verdict = Worst(c.rep.Verdict, f.Severity)
+}
+
+func (c *checker) name(i int) string { return c.p.Layout.PhaseNames[i] }
+
+// bandFor is the band of a correct winding about the plan's value. The
+// diameter tolerance δ on the bare diameter d gives R between (d/(d+δ))² and
+// (d/(d−δ))² of nominal (IEC 60317-0-1 tolerances; R ∝ 1/d²). The length
+// uncertainty multiplies it (worst case).
+func bandFor(p *plan.Plan) Band {
+	d, tol := p.Wire.BareDiameterMM, p.Wire.DiameterTolMM
+	lo, hi := 1.0, 1.0
+	if d > 0 && tol > 0 && tol < d {
+		lo, hi = sq(d/(d+tol)), sq(d/(d-tol))
+	}
+	b := Band{DiameterMM: d, DiameterTolMM: tol, LengthPercent: 100 * LengthUncertainty,
+		DiameterPercent: [2]float64{100 * (lo - 1), 100 * (hi - 1)}}
+	b.LowPercent = 100 * (lo*(1-LengthUncertainty) - 1)
+	b.HighPercent = 100 * (hi*(1+LengthUncertainty) - 1)
+	b.Low20C = p.PhaseResistance20C * (1 + b.LowPercent/100)
+	b.High20C = p.PhaseResistance20C * (1 + b.HighPercent/100)
+	return b
+}
+
+func sq(x float64) float64 { return x * x }
+
+// phasesAtTemp turns the readings into phase values at the winding
+// temperature, lead resistance removed.
+func (c *checker) phasesAtTemp() [3]float64 {
+	r := c.r
+	sub := func(v float64) float64 {
+		if math.IsInf(v, 1) {
+			return v
+		}
+		return v - r.LeadOhm
+	}
+	if len(r.PerPhase) == 3 {
+		c.rep.Method = "per-phase"
+		return [3]float64{sub(r.PerPhase[0]), sub(r.PerPhase[1]), sub(r.PerPhase[2])}
+	}
+	c.rep.Method = "line-to-line"
+	uv, vw, wu := sub(r.UV), sub(r.VW), sub(r.WU)
+	for i, v := range []float64{uv, vw, wu} {
+		l := Line{Lines: []string{"UV", "VW", "WU"}[i], Ohm: v}
+		if math.IsInf(v, 1) {
+			l.Ohm, l.Open = 0, true
+		}
+		c.rep.Lines = append(c.rep.Lines, l)
+	}
+	if c.p.Connection == winding.Delta {
+		return DeltaPhases(uv, vw, wu)
+	}
+	return StarPhases(uv, vw, wu)
+}

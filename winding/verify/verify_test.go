@@ -1,0 +1,376 @@
+package verify_test
+
+import (
+	"errors"
+	"math"
+	"strings"
+	"testing"
+
+	"coilwright/winding"
+	"coilwright/winding/job"
+	"coilwright/winding/plan"
+	"coilwright/winding/verify"
+)
+
+func demoPlan(t testing.TB) *plan.Plan {
+	t.Helper()
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		t.Fatalf("plan.Build(job.Demo()) err = %v", err)
+	}
+	return p
+}
+
+func near(got, want, relTol float64) bool {
+	return math.Abs(got-want) <= relTol*math.Abs(want)
+}
+
+// Hand-checked conversions. Star: phases 1.0, 1.1, 1.2 Ω read UV = 2.1,
+// VW = 2.3, WU = 2.2; R_U = (2.1 + 2.2 − 2.3)/2 = 1.0. Delta of Ru = 1,
+// Rv = 2, Rw = 3 (S = 6): R_UV = 1·5/6 = 0.8333, R_VW = 2·4/6 = 1.3333,
+// R_WU = 3·3/6 = 1.5. Balanced delta of 0.3 Ω: 0.3·0.6/0.9 = 0.2 per line.
+func TestConversions(t *testing.T) {
+	cases := []struct {
+		name   string
+		delta  bool
+		phases [3]float64
+		lines  [3]float64
+		tol    float64
+	}{
+		{"star unequal", false, [3]float64{1.0, 1.1, 1.2}, [3]float64{2.1, 2.3, 2.2}, 1e-12},
+		{"star balanced", false, [3]float64{0.139, 0.139, 0.139}, [3]float64{0.278, 0.278, 0.278}, 1e-12},
+		{"delta unequal", true, [3]float64{1, 2, 3}, [3]float64{5.0 / 6, 8.0 / 6, 1.5}, 1e-12},
+		{"delta balanced", true, [3]float64{0.3, 0.3, 0.3}, [3]float64{0.2, 0.2, 0.2}, 1e-12},
+	}
+	for _, c := range cases {
+		fwd, inv := verify.StarLines, verify.StarPhases
+		if c.delta {
+			fwd, inv = verify.DeltaLines, verify.DeltaPhases
+		}
+		got := fwd(c.phases)
+		for i := range got {
+			if !near(got[i], c.lines[i], c.tol) {
+				t.Errorf("%s: lines(%v) = %v; want %v", c.name, c.phases, got, c.lines)
+				break
+			}
+		}
+		back := inv(c.lines[0], c.lines[1], c.lines[2])
+		for i := range back {
+			if !near(back[i], c.phases[i], c.tol) {
+				t.Errorf("%s: phases(%v) = %v; want %v", c.name, c.lines, back, c.phases)
+				break
+			}
+		}
+	}
+}
+
+// IEC 60028: α20 = 0.00393 /K for annealed copper, R_T = R_20·(1 + α20·(T − 20)).
+// The 234.5 form (1/0.00393 − 20 = 234.45, rounded) agrees to 1e-4 over −20..120 °C.
+func TestTemperatureCorrection(t *testing.T) {
+	for _, temp := range []float64{-20, 0, 15, 20, 27, 40, 75, 120} {
+		want := 1 + 0.00393*(temp-20)
+		if got := verify.AtTemp(1, temp); !near(got, want, 1e-4) {
+			t.Errorf("AtTemp(1, %g) = %.6f; want %.6f (IEC 60028 α20)", temp, got, want)
+		}
+		if got := verify.To20C(verify.AtTemp(0.5, temp), temp); !near(got, 0.5, 1e-12) {
+			t.Errorf("To20C(AtTemp(0.5, %g)) = %g; want 0.5", temp, got)
+		}
+	}
+	// IEEE 43: IR halves for every 10 K rise, so 100 MΩ at 30 °C is 50 MΩ at 40 °C.
+	for _, c := range []struct{ temp, want float64 }{{30, 50}, {40, 100}, {20, 25}, {50, 200}} {
+		if got := verify.IRTo40C(100, c.temp); !near(got, c.want, 1e-12) {
+			t.Errorf("IRTo40C(100, %g) = %g; want %g", c.temp, got, c.want)
+		}
+	}
+}
+
+// linesFor makes line readings at tempC from 20 °C phase values, for the
+// plan's connection.
+func linesFor(p *plan.Plan, ph20 [3]float64, tempC float64) verify.Readings {
+	var ph [3]float64
+	for i := range ph {
+		ph[i] = verify.AtTemp(ph20[i], tempC)
+	}
+	l := verify.StarLines(ph)
+	if p.Connection == winding.Delta {
+		l = verify.DeltaLines(ph)
+	}
+	return verify.Readings{UV: l[0], VW: l[1], WU: l[2], TempC: tempC, FourWire: true}
+}
+
+func scaled(r float64, f [3]float64) [3]float64 { return [3]float64{r * f[0], r * f[1], r * f[2]} }
+
+func findPhase(rep *verify.Report, sev verify.Verdict, phase string) *verify.Finding {
+	for i, f := range rep.Findings {
+		if f.Severity == sev && f.Phase == phase {
+			return &rep.Findings[i]
+		}
+	}
+	return nil
+}
+
+func findText(rep *verify.Report, sev verify.Verdict, text string) *verify.Finding {
+	for i, f := range rep.Findings {
+		if f.Severity == sev && strings.Contains(f.Message, text) {
+			return &rep.Findings[i]
+		}
+	}
+	return nil
+}
+
+// Done when: readings made from the plan's own value at 27 °C pass, each
+// phase's 20 °C value within 0.3 % of the IEC 60028 correction.
+func TestPlanValueAt27CPasses(t *testing.T) {
+	for _, conn := range []winding.Connection{winding.Star, winding.Delta} {
+		p := demoPlan(t)
+		p.Connection = conn
+		r20 := p.PhaseResistance20C
+		rep, err := verify.Check(p, linesFor(p, scaled(r20, [3]float64{1, 1, 1}), 27))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if rep.Verdict != verify.Pass {
+			t.Errorf("%v: Check(plan value at 27 °C).Verdict = %s; want pass; findings %+v", conn, rep.Verdict, rep.Findings)
+		}
+		// IEC 60028 by its coefficient: R_20 = R_27 / (1 + 0.00393·7).
+		for _, ph := range rep.Phases {
+			want := ph.OhmAtTemp / (1 + 0.00393*7)
+			if !near(ph.Ohm20C, want, 0.003) || !near(ph.Ohm20C, r20, 0.003) {
+				t.Errorf("%v: phase %s at 20 °C = %.6f; want %.6f within 0.3 %%", conn, ph.Phase, ph.Ohm20C, want)
+			}
+		}
+	}
+}
+
+// Done when: one phase 8 % low fails with a failing finding naming it.
+func TestOnePhaseLowFailsNamingIt(t *testing.T) {
+	p := demoPlan(t)
+	for i, name := range []string{"U", "V", "W"} {
+		f := [3]float64{1, 1, 1}
+		f[i] = 0.92
+		rep, err := verify.Check(p, linesFor(p, scaled(p.PhaseResistance20C, f), 27))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if rep.Verdict != verify.Fail || findPhase(rep, verify.Fail, name) == nil {
+			t.Errorf("Check(phase %s 8 %% low) = %s, findings %+v; want fail naming %s", name, rep.Verdict, rep.Findings, name)
+		}
+	}
+}
+
+// Done when: readings three times too high do not pass.
+func TestThreeTimesDoesNotPass(t *testing.T) {
+	p := demoPlan(t)
+	rep, err := verify.Check(p, linesFor(p, scaled(3*p.PhaseResistance20C, [3]float64{1, 1, 1}), 27))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if rep.Verdict == verify.Pass || findText(rep, verify.Fail, "star and delta confused") == nil {
+		t.Errorf("Check(3× readings) = %s, %+v; want fail, star and delta confused", rep.Verdict, rep.Findings)
+	}
+}
+
+// Faults simulated on the demo plan (24/28 star, 8 coils of 18 turns per
+// phase, one path): the phase's resistance is proportional to its wire length.
+func TestDiagnosisOfSimulatedFaults(t *testing.T) {
+	p := demoPlan(t)
+	r20 := p.PhaseResistance20C
+	pathM := p.Paths[0].WireLengthM
+	turnM := p.MeanTurnLengthMM / 1000
+	less := func(turns float64) float64 { return (pathM - turns*turnM) / pathM }
+
+	t.Run("five turns missing on a V coil", func(t *testing.T) {
+		rep, _ := verify.Check(p, linesFor(p, scaled(r20, [3]float64{1, less(5), 1}), 22))
+		f := findPhase(rep, verify.Fail, "V")
+		if f == nil || !strings.Contains(f.Message, "about 5 turns fewer") {
+			t.Errorf("Check(V −5 turns) findings = %+v; want phase V, about 5 turns fewer", rep.Findings)
+		}
+	})
+	t.Run("a W coil shorted", func(t *testing.T) {
+		rep, _ := verify.Check(p, linesFor(p, scaled(r20, [3]float64{1, 1, less(float64(p.TurnsPerCoil))}), 22))
+		f := findPhase(rep, verify.Fail, "W")
+		if f == nil || !strings.Contains(f.Message, "one coil's share") || len(f.Teeth) != 8 {
+			t.Errorf("Check(W coil shorted) findings = %+v; want phase W, one coil's share, 8 candidate teeth", rep.Findings)
+		}
+	})
+	t.Run("four extra turns on U", func(t *testing.T) {
+		rep, _ := verify.Check(p, linesFor(p, scaled(r20, [3]float64{less(-4), 1, 1}), 22))
+		f := findPhase(rep, verify.Fail, "U")
+		if f == nil || !strings.Contains(f.Message, "about 4 extra turns") || !strings.Contains(f.Message, "poor joint") {
+			t.Errorf("Check(U +4 turns) findings = %+v; want phase U, poor joint or about 4 extra turns", rep.Findings)
+		}
+	})
+	t.Run("connected delta though the plan says star", func(t *testing.T) {
+		ph := verify.AtTemp(r20, 22)
+		l := verify.DeltaLines([3]float64{ph, ph, ph})
+		rep, _ := verify.Check(p, verify.Readings{UV: l[0], VW: l[1], WU: l[2], TempC: 22, FourWire: true})
+		if rep.Verdict != verify.Fail || findText(rep, verify.Fail, "connected in delta") == nil {
+			t.Errorf("Check(star plan wound delta) = %s, %+v; want fail, connected in delta", rep.Verdict, rep.Findings)
+		}
+	})
+	t.Run("per-phase given line values", func(t *testing.T) {
+		ph := 2 * verify.AtTemp(r20, 22)
+		rep, _ := verify.Check(p, verify.Readings{PerPhase: []float64{ph, ph, ph}, TempC: 22, FourWire: true})
+		if findText(rep, verify.Fail, "line-to-line readings given as per-phase") == nil {
+			t.Errorf("Check(per-phase 2×) = %+v; want line read as phase", rep.Findings)
+		}
+	})
+	t.Run("all phases thinner wire", func(t *testing.T) {
+		f := 1 / (0.95 * 0.95) // 0.95 mm wire for 1.00 mm: +10.8 %
+		rep, _ := verify.Check(p, linesFor(p, scaled(r20, [3]float64{f, f, f}), 22))
+		if rep.Verdict != verify.Warn || findText(rep, verify.Warn, "0.950 mm instead of 1.000 mm") == nil {
+			t.Errorf("Check(all +10.8 %%) = %s, %+v; want warn naming 0.950 mm wire", rep.Verdict, rep.Findings)
+		}
+	})
+	t.Run("phase U open", func(t *testing.T) {
+		inf := math.Inf(1)
+		rep, _ := verify.Check(p, verify.Readings{UV: inf, VW: 2 * r20, WU: inf, TempC: 20, FourWire: true})
+		if findPhase(rep, verify.Fail, "U") == nil || !strings.Contains(findPhase(rep, verify.Fail, "U").Message, "open") {
+			t.Errorf("Check(U open) = %+v; want phase U open", rep.Findings)
+		}
+	})
+	t.Run("delta phase V open", func(t *testing.T) {
+		q := *p
+		q.Connection = winding.Delta
+		// Delta with V (between lines V and W) open: UV = Ru, VW = Ru + Rw, WU = Rw.
+		rep, _ := verify.Check(&q, verify.Readings{UV: r20, VW: 2 * r20, WU: r20, TempC: 20, FourWire: true})
+		if findPhase(rep, verify.Fail, "V") == nil {
+			t.Errorf("Check(delta V open) = %+v; want phase V open", rep.Findings)
+		}
+	})
+}
+
+// lineEMF gives the line voltages of the demo plan's coils with one coil
+// reversed (0: none), computed here from the layout's phasors.
+func lineEMF(p *plan.Plan, reversedTooth int, voltsPerTurn float64) [3]float64 {
+	var e [3]complex128
+	for _, c := range p.Coils {
+		z := verify.CoilPhasor(c.Tooth, p.Layout.Spec.Slots, p.Layout.Spec.PolePairs(), c.Direction)
+		if c.Tooth == reversedTooth {
+			z = -z
+		}
+		e[map[string]int{"U": 0, "V": 1, "W": 2}[c.Phase]] += z * complex(float64(c.Turns)*voltsPerTurn, 0)
+	}
+	abs := func(z complex128) float64 { return math.Hypot(real(z), imag(z)) }
+	return [3]float64{abs(e[0] - e[1]), abs(e[1] - e[2]), abs(e[2] - e[0])}
+}
+
+func TestBackEMF(t *testing.T) {
+	p := demoPlan(t)
+	rpm := 300.0
+	// Scale so the healthy winding reads the plan's prediction.
+	healthy := lineEMF(p, 0, 1)
+	want := math.Sqrt(3) * p.EMF.VoltsPerRPMPhase * rpm
+	vpt := want / healthy[0]
+
+	l := lineEMF(p, 0, vpt)
+	rep, err := verify.Check(p, verify.Readings{TempC: 20, EMF: &verify.BackEMF{UV: l[0], VW: l[1], WU: l[2], RPM: rpm}})
+	if err != nil || rep.Verdict != verify.Pass {
+		t.Fatalf("Check(healthy back-EMF) = %v, %+v; want pass", err, rep)
+	}
+	for _, tooth := range []int{1, 5, 10} {
+		l := lineEMF(p, tooth, vpt)
+		rep, _ := verify.Check(p, verify.Readings{TempC: 20, EMF: &verify.BackEMF{UV: l[0], VW: l[1], WU: l[2], RPM: rpm}})
+		if rep.Verdict != verify.Fail || rep.EMF == nil || !containsInt(rep.EMF.Reversed, tooth) {
+			t.Errorf("Check(coil on tooth %d reversed) = %s, candidates %v, %+v; want fail naming tooth %d", tooth, rep.Verdict, rep.EMF.Reversed, rep.Findings, tooth)
+		}
+	}
+}
+
+func containsInt(xs []int, x int) bool {
+	for _, v := range xs {
+		if v == x {
+			return true
+		}
+	}
+	return false
+}
+
+func TestInsulationAndWithstand(t *testing.T) {
+	p := demoPlan(t)
+	cases := []struct {
+		name string
+		in   *verify.Insulation
+		hv   *verify.Withstand
+		want verify.Verdict
+		text string
+	}{
+		{"good IR and PI", &verify.Insulation{IR1MOhm: 800, IR10MOhm: 2400, Volts: 500}, nil, verify.Pass, "below IEEE 43's 750 W scope"},
+		{"IR low at 40 °C", &verify.Insulation{IR1MOhm: 15, Volts: 500}, nil, verify.Fail, "below the 5 MΩ minimum"},
+		{"PI low", &verify.Insulation{IR1MOhm: 800, IR10MOhm: 1000, Volts: 500}, nil, verify.Fail, "polarization index 1.25"},
+		{"PI moot above 5 GΩ", &verify.Insulation{IR1MOhm: 30000, IR10MOhm: 33000, Volts: 500}, nil, verify.Pass, "disregarded"},
+		{"low test voltage", &verify.Insulation{IR1MOhm: 800, Volts: 250}, nil, verify.Warn, "500 V DC"},
+		{"withstand failed", nil, &verify.Withstand{Passed: false, Volts: 568}, verify.Fail, "failed"},
+		// Demo: 34.1 V line, about 384 W: IEC 60034-1 500 + 2·34.1 = 568 V.
+		{"withstand at the IEC value", nil, &verify.Withstand{Passed: true, Volts: 570}, verify.Pass, "568 V"},
+		{"withstand too low", nil, &verify.Withstand{Passed: true, Volts: 250}, verify.Warn, "below 80 %"},
+	}
+	for _, c := range cases {
+		rep, err := verify.Check(p, verify.Readings{TempC: 20, Insulation: c.in, Withstand: c.hv})
+		if err != nil {
+			t.Fatalf("%s: %v", c.name, err)
+		}
+		if rep.Verdict != c.want || findText(rep, c.want, c.text) == nil {
+			t.Errorf("%s: Check = %s, %+v; want %s with %q", c.name, rep.Verdict, rep.Findings, c.want, c.text)
+		}
+		if len(rep.Cautions) == 0 {
+			t.Errorf("%s: no cautions shown with an insulation test", c.name)
+		}
+	}
+}
+
+func TestRecommendedWithstand(t *testing.T) {
+	// IEC 60034-1 (from memory): < 1 kW and < 100 V: 500 + 2·U_N; else 1000 + 2·U_N, at least 1500.
+	cases := []struct{ un, p, want float64 }{{24, 300, 548}, {48, 2000, 1500}, {400, 5000, 1800}, {0, 100, 0}}
+	for _, c := range cases {
+		if got := verify.RecommendedWithstandV(c.un, c.p); got != c.want {
+			t.Errorf("RecommendedWithstandV(%g, %g) = %g; want %g", c.un, c.p, got, c.want)
+		}
+	}
+}
+
+func TestBadReadings(t *testing.T) {
+	p := demoPlan(t)
+	ok := verify.Readings{UV: 0.3, VW: 0.3, WU: 0.3, TempC: 20}
+	nan, inf := math.NaN(), math.Inf(1)
+	cases := []struct {
+		name  string
+		edit  func(*verify.Readings)
+		field string
+	}{
+		{"negative", func(r *verify.Readings) { r.VW = -0.3 }, "vw"},
+		{"missing one", func(r *verify.Readings) { r.WU = 0 }, "wu"},
+		{"not a number", func(r *verify.Readings) { r.UV = nan }, "uv"},
+		{"below absolute zero", func(r *verify.Readings) { r.TempC = -300 }, "temp"},
+		{"in kelvin", func(r *verify.Readings) { r.TempC = 293 }, "temp"},
+		{"absurd ohm", func(r *verify.Readings) { r.UV = 5e6 }, "uv"},
+		{"lead above reading", func(r *verify.Readings) { r.LeadOhm = 0.4 }, "lead-ohm"},
+		{"four-wire and lead", func(r *verify.Readings) { r.FourWire, r.LeadOhm = true, 0.01 }, "lead-ohm"},
+		{"temp infinite", func(r *verify.Readings) { r.TempC = inf }, "temp"},
+		{"ir without volts", func(r *verify.Readings) { r.Insulation = &verify.Insulation{IR1MOhm: 100} }, "ir-volts"},
+		{"emf without rpm", func(r *verify.Readings) { r.EMF = &verify.BackEMF{UV: 10, VW: 10, WU: 10} }, "rpm"},
+		{"hv without volts", func(r *verify.Readings) { r.Withstand = &verify.Withstand{Passed: true} }, "hv-volts"},
+		{"nothing", func(r *verify.Readings) { *r = verify.Readings{} }, "uv"},
+	}
+	for _, c := range cases {
+		r := ok
+		c.edit(&r)
+		_, err := verify.Check(p, r)
+		var ie *verify.InputError
+		if !errors.As(err, &ie) || !errors.Is(err, verify.ErrInput) || ie.Field != c.field {
+			t.Errorf("%s: Check err = %v; want an InputError on %q", c.name, err, c.field)
+		}
+	}
+}
+
+func BenchmarkCheckWithBackEMF(b *testing.B) {
+	p := demoPlan(b)
+	l := lineEMF(p, 5, 0.1)
+	r := linesFor(p, scaled(p.PhaseResistance20C, [3]float64{1, 0.95, 1}), 25)
+	r.EMF = &verify.BackEMF{UV: l[0], VW: l[1], WU: l[2], RPM: 300}
+	for b.Loop() {
+		if _, err := verify.Check(p, r); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
