@@ -43,8 +43,8 @@ type Finding struct {
 // (DESIGN.md) with extra fields.
 type Report struct {
 	TemperatureC float64 `json:"temperature_c"`
-	Connection   string  `json:"connection"` // of the plan: "star" or "delta"
-	Method       string  `json:"method,omitempty"`     // "line-to-line" or "per-phase"
+	Connection   string  `json:"connection"`       // of the plan: "star" or "delta"
+	Method       string  `json:"method,omitempty"` // "line-to-line" or "per-phase"
 	FourWire     bool    `json:"four_wire"`
 	LeadOhm      float64 `json:"lead_ohm"`
 
