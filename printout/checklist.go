@@ -221,11 +221,11 @@ func (b *builder) signOff(f *flow, what string) {
 	x0 := float64(marginMM)
 	w := b.width()
 	c.box(x0, f.y, w, 16, Pen{Width: 0.45, Colour: Ink}, nil)
-	c.text(x0+2, f.y+4.5, sizeBody, Bold, Ink, left, what)
+	c.para(x0+2, f.y+4.5, 52, sizeBody, Bold, Ink, what)
 	fields := []string{"name", "date", "signature"}
-	fw := (w - 40) / 3
+	fw := (w - 56) / 3
 	for i, fl := range fields {
-		x := x0 + 40 + float64(i)*fw
+		x := x0 + 56 + float64(i)*fw
 		c.line(x, f.y, x, f.y+16, thin)
 		c.text(x+1.5, f.y+3.5, sizeTiny, Regular, Colour{90, 90, 90}, left, fl)
 	}

@@ -88,7 +88,7 @@ func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int,
 		if i == 0 {
 			b.terminalTag(c, x, mid, conTagW-3, ch.Start)
 		} else {
-			c.text(x+conTagW-4, mid+1.2, sizeSmall, Regular, Faint, right, "from line above")
+			c.text(x+conTagW-3.5, mid+1, sizeTiny, Regular, Faint, right, "from above")
 		}
 		x += conTagW
 		end := min(len(ch.Teeth), i+perLine)

@@ -73,7 +73,7 @@ func (b *builder) developed() {
 		"The stator unrolled: teeth left to right in number order, slot k between tooth k and tooth k+1 (slot "+
 			fmt.Sprint(q)+" between tooth "+fmt.Sprint(q)+" and tooth 1). Each coil is drawn round its tooth; its sides sit in the slots either side.")
 	y += 2
-	rows, perRow, pitch := devRows(q, b.width())
+	rows, perRow, pitch := devRows(q, b.width()-6)
 	seps := map[int]bool{}
 	for _, s := range separatorSlots(l) {
 		seps[s] = true

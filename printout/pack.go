@@ -21,11 +21,13 @@ type Options struct {
 
 // Reading is what was recorded for one test.
 type Reading struct {
-	Values []float64 // in the test's unit
-	Text   string    // as written, when not a plain number (e.g. "U 0.412, V 0.414, W 0.413")
-	Taken  time.Time // zero when unknown
-	By     string    // initials, when recorded
-	Pass   *bool     // the verdict recorded with it, if any
+	// Values are the named values as measured (e.g. "U": 0.412), printed in
+	// name order with the test's unit.
+	Values  map[string]float64
+	Text    string    // a reading as written, when there are no values
+	Taken   time.Time // zero when unknown
+	By      string    // initials, when recorded
+	Verdict string    // "pass", "warn", "fail" or "" when none was recorded
 }
 
 // ErrNoPlan is returned for a nil plan or one without a layout.

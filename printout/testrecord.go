@@ -2,6 +2,7 @@ package printout
 
 import (
 	"fmt"
+	"sort"
 	"strconv"
 	"strings"
 
@@ -30,23 +31,30 @@ func expectText(t plan.Test) string {
 // readingText is how a recorded reading prints.
 func readingText(r Reading, unit string) string {
 	var parts []string
+	if len(r.Values) > 0 {
+		names := make([]string, 0, len(r.Values))
+		for n := range r.Values {
+			names = append(names, n)
+		}
+		sort.Strings(names)
+		vs := make([]string, len(names))
+		for i, n := range names {
+			vs[i] = n + " " + strconv.FormatFloat(r.Values[n], 'g', 5, 64)
+		}
+		s := strings.Join(vs, ", ")
+		if unit != "" && unit != "%" {
+			s += " " + unit
+		}
+		parts = append(parts, s)
+	}
 	if r.Text != "" {
 		parts = append(parts, r.Text)
-	} else {
-		vs := make([]string, len(r.Values))
-		for i, v := range r.Values {
-			vs[i] = strconv.FormatFloat(v, 'g', 5, 64)
-		}
-		if len(vs) > 0 {
-			s := strings.Join(vs, ", ")
-			if unit != "" {
-				s += " " + unit
-			}
-			parts = append(parts, s)
-		}
+	}
+	if r.Verdict != "" {
+		parts = append(parts, r.Verdict)
 	}
 	if !r.Taken.IsZero() {
-		parts = append(parts, r.Taken.Format("2006-01-02"))
+		parts = append(parts, r.Taken.UTC().Format("2006-01-02"))
 	}
 	if r.By != "" {
 		parts = append(parts, "by "+r.By)
@@ -124,7 +132,7 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	left0 := w * 0.58
 	what := t.What
 	if t.Voltage > 0 {
-		what += fmt.Sprintf(" Test voltage %.0f V.", t.Voltage)
+		what = strings.TrimSuffix(what, ".") + fmt.Sprintf(". Test voltage %.0f V.", t.Voltage)
 	}
 	if t.Note != "" {
 		what += " " + t.Note
@@ -163,8 +171,8 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	// pass / fail
 	py := y + h - 6.5
 	pass, fail := false, false
-	if r, ok := b.o.Readings[t.Name]; ok && r.Pass != nil {
-		pass, fail = *r.Pass, !*r.Pass
+	if r, ok := b.o.Readings[t.Name]; ok {
+		pass, fail = r.Verdict == "pass", r.Verdict == "fail"
 	}
 	c.checkbox(rx+2, py, ckBoxS)
 	if pass {
