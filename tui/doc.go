@@ -19,8 +19,9 @@
 // '>' clockwise, '<' counter-clockwise. A wound coil carries '#', the tooth of
 // the current step '@'; colour only repeats what the letters say.
 //
-// The package does no file I/O of its own: the progress record is a Recorder
-// given by the caller, and every call to it runs inside a tea.Cmd. It reads
-// plans and never changes them. It computes no verdicts of its own beyond a
+// The models do no I/O of their own: the progress record is a Recorder given
+// by the caller (JournalRecorder over a winding/journal store; Run opens one),
+// and every call to it runs inside a tea.Cmd. It reads plans and never
+// changes them. It computes no verdicts of its own beyond a
 // plain limit comparison used when no Judge is given.
 package tui

@@ -127,6 +127,3 @@ func verifyFields(p *plan.Plan, t plan.Test) []field {
 	}
 	return nil
 }
-
-// defaultJudge is used when Options.Judge is nil.
-var defaultJudge Judge = limitJudge

@@ -73,7 +73,7 @@ func New(o Options) *Model {
 		tests: map[string]plan.Test{},
 	}
 	if c.judge == nil {
-		c.judge = defaultJudge
+		c.judge = VerifyJudge
 	}
 	if c.now == nil {
 		c.now = time.Now

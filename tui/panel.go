@@ -223,7 +223,7 @@ func (g guideModel) checkView(b *lines, s plan.Step) {
 		next := s.Slot%max(1, q) + 1
 		b.kv("slot", fmt.Sprintf("%d, between tooth %d and tooth %d", s.Slot, s.Slot, next))
 	}
-	if j := s.Jumper; j != nil {
+	if j := s.Jumper; j != nil && s.Detail == "" {
 		t := fmt.Sprintf("from tooth %d to tooth %d, %d tooth pitches round the lead end", j.FromTooth, j.ToTooth, j.Span)
 		if j.ReversesSense {
 			t += "; the next coil goes round the other way"
