@@ -37,7 +37,7 @@ func positions(data []byte) map[string]Pos {
 		rest := trim[eq+1:]
 		val := strings.TrimLeft(rest, " \t")
 		if strings.HasPrefix(val, "{") {
-			base := indent + eq + 1 + (len(rest) - len(val)) + 1 // column of '{' (0-based)
+			base := indent + eq + 1 + (len(rest) - len(val)) // index of the brace, 0-based
 			inline(out, key, val, i+1, base)
 		}
 	}
