@@ -62,10 +62,6 @@ func (c *canvas) circle(x, y, r float64, p Pen, fill *Fill) {
 	c.add(&Arc{Centre: Point{x, y}, Radius: r, Start: 0, Sweep: 360, Pen: p, Fill: fill})
 }
 
-func (c *canvas) arc(x, y, r, start, sweep float64, p Pen) {
-	c.add(&Arc{Centre: Point{x, y}, Radius: r, Start: start, Sweep: sweep, Pen: p})
-}
-
 func (c *canvas) poly(pts []Point, closed bool, p Pen, fill *Fill) {
 	c.add(&Poly{Points: pts, Closed: closed, Pen: p, Fill: fill})
 }

@@ -11,7 +11,7 @@ import (
 const (
 	conBoxW = 12
 	conBoxH = 12
-	conGap  = 9
+	conGap  = 8
 	conTagW = 13
 	conLine = 19 // height of one line of coils
 )
@@ -29,7 +29,7 @@ func (b *builder) connections() {
 			"The number on a jumper is the count of tooth pitches it runs round the lead end, up the tooth numbers; "+
 			"“reverse” marks a jumper after which the next coil is wound the other way round.")
 	y += 2
-	perLine := int((b.width() - 2*conTagW - 4) / (conBoxW + conGap))
+	perLine := int((b.width() - 2*conTagW - 6 + conGap) / (conBoxW + conGap))
 	perLine = max(1, perLine)
 	for _, ch := range l.Chains {
 		lines := (len(ch.Teeth) + perLine - 1) / perLine
@@ -118,7 +118,9 @@ func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int,
 			c.line(x, mid, x+3, mid, wirePen)
 			b.terminalTag(c, x+3, mid, conTagW-3, ch.Finish)
 		} else {
-			c.text(x+1, mid+1.2, sizeSmall, Regular, Faint, left, "next line")
+			c.line(x, mid, x+3.5, mid, wirePen)
+			c.arrowHead(Point{x + 3.5, mid + 3.2}, -90, 2, st.Colour)
+			c.line(x+3.5, mid, x+3.5, mid+1.5, wirePen)
 		}
 		y += conLine
 	}

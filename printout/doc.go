@@ -1,0 +1,36 @@
+// Package printout lays out and renders the shop pack of a winding plan: the
+// slot map with its title block, the developed layout, the connection sheet,
+// the cut list and materials, the winding checklist and the test record.
+//
+// Model. Build turns a *plan.Plan into a Pack: pages of plain shapes (lines,
+// boxes, arcs, polylines, text runs) in mm from the top left corner of the
+// sheet, y pointing down, angles in degrees counter-clockwise as a reader
+// sees the page. Every text run carries its measured width (from the Go
+// fonts' own advance widths), so layouts are tested on the model without a
+// PDF. Render is a thin pass that draws the model with fpdf; it does no
+// layout. Fonts are the Go fonts (goregular, gobold, gomono) embedded as
+// subsets; runes they lack are printed as '?'. Glyphs the fonts lack and the
+// pack needs (the circular arrows of winding sense, the conductor cross and
+// dot, the warning triangle) are vector shapes.
+//
+// Conventions. Teeth are numbered 1..Q counter-clockwise seen from the
+// connection end, tooth 1 at the top of the slot map; slot k lies between
+// tooth k and tooth k+1 (DESIGN.md). A sense arrow shows the way round the
+// tooth seen from the air gap facing the tooth, following the path from its
+// start terminal. In the developed layout a cross marks a coil side whose
+// current (from the start terminal) runs into the stack, away from the
+// connection end, and a dot one running out towards it; sideIntoStack
+// derives this from the sense and the rotor side. Phase colours follow IEC
+// 60445 (brown, black, grey for L1, L2, L3) and every colour is doubled by
+// the phase letter and a line pattern (solid, dashed, dotted) so the pack
+// reads on a monochrome printer; a fourth and fifth phase take orange and
+// violet with dash-dot patterns (this project's choice: IEC 60445 names no
+// further phase colours and reserves blue and green-and-yellow). Output is
+// deterministic: the PDF dates come from Options.Date or the plan's Date,
+// resources are sorted, so two renders of one plan are byte-identical.
+//
+// What it does not do. It reads plans and never changes them, computes no
+// winding quantity of its own beyond drawing geometry, reads no files
+// (readings from the progress record arrive as plain data in
+// Options.Readings) and prints nothing but A4 and US Letter portrait sheets.
+package printout
