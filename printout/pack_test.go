@@ -402,8 +402,12 @@ func firstDiff(a, b []string) string {
 }
 
 func TestRenderDeterministic(t *testing.T) {
+	goregularBefore := bytes.Clone(faceFonts[Regular])
 	a := render(t, buildFixture(t, 0))
 	b := render(t, buildFixture(t, 0))
+	if !bytes.Equal(goregularBefore, faceFonts[Regular]) {
+		t.Errorf("Render changed the shared font bytes")
+	}
 	if !bytes.Equal(a, b) {
 		t.Fatalf("two renders of one plan differ (%d and %d bytes)", len(a), len(b))
 	}

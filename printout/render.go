@@ -1,6 +1,7 @@
 package printout
 
 import (
+	"bytes"
 	"fmt"
 	"io"
 	"math"
@@ -33,7 +34,10 @@ func Render(p *Pack, w io.Writer) error {
 	f.SetAutoPageBreak(false, 0)
 	f.SetMargins(0, 0, 0)
 	for face, data := range faceFonts {
-		f.AddUTF8FontFromBytes(faceFamily[face], "", data)
+		// fpdf writes into the font bytes it is given while it cuts the
+		// subset, so each render gets its own copy: the shared gofont
+		// slices stay pristine, renders stay identical and free of races.
+		f.AddUTF8FontFromBytes(faceFamily[face], "", bytes.Clone(data))
 	}
 	r := &renderer{f: f}
 	for _, pg := range p.Pages {
