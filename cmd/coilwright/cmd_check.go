@@ -1,0 +1,360 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"os"
+	"strconv"
+	"strings"
+
+	"github.com/spf13/cobra"
+
+	"coilwright/winding/journal"
+	"coilwright/winding/plan"
+	"coilwright/winding/verify"
+)
+
+func init() { register(newCheckCmd) }
+
+// readingFlag is a number given on the command line; for resistances it also
+// takes OL or open (the meter over range) as +Inf.
+type readingFlag struct {
+	v       float64
+	allowOL bool
+}
+
+func (f *readingFlag) String() string { return strconv.FormatFloat(f.v, 'g', -1, 64) }
+func (f *readingFlag) Type() string   { return "number" }
+func (f *readingFlag) Set(s string) error {
+	s = strings.TrimSpace(s)
+	if f.allowOL && (strings.EqualFold(s, "ol") || strings.EqualFold(s, "open")) {
+		f.v = math.Inf(1)
+		return nil
+	}
+	v, err := strconv.ParseFloat(strings.TrimSuffix(s, ","), 64)
+	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
+		if f.allowOL {
+			return fmt.Errorf("%q is not a number (ohm, or OL for an open circuit)", s)
+		}
+		return fmt.Errorf("%q is not a number", s)
+	}
+	f.v = v
+	return nil
+}
+
+type checkFlags struct {
+	demo, asJSON, record     bool
+	readingsFile, progress   string
+	uv, vw, wu, temp, lead   readingFlag
+	perPhase                 string
+	fourWire                 bool
+	ir1, ir10, irVolts       readingFlag
+	hvPass, hvFail           bool
+	hvVolts                  readingFlag
+	emfUV, emfVW, emfWU, rpm readingFlag
+}
+
+func newCheckCmd() *cobra.Command {
+	f := &checkFlags{uv: readingFlag{allowOL: true}, vw: readingFlag{allowOL: true}, wu: readingFlag{allowOL: true}}
+	cmd := &cobra.Command{
+		Use:   "check JOB | --demo  --uv R --vw R --wu R --temp T [more readings]",
+		Short: "Prove a finished stator: resistance, balance, insulation, withstand and back-EMF against the plan",
+		Long: `check compares what you measured on the finished stator with what its plan
+expects, and says pass, warn or fail, with findings that name the phase and the
+likely cause.
+
+Resistance: the three line-to-line readings of the connected winding (--uv,
+--vw, --wu, in ohm; OL for an open circuit), or --per-phase U,V,W read before
+the star point is made, and the winding temperature --temp in °C. Subtract the
+meter leads with --lead-ohm (read them shorted together) or say --four-wire.
+Phases are corrected to 20 °C (IEC 60028) and compared with the plan inside a
+band from the wire's diameter tolerance (IEC 60317) and the length estimate;
+balance within 2 % (EASA AR100).
+
+Insulation (IEEE 43-2013): --ir1 and --ir10 in MΩ after 1 and 10 minutes at
+--ir-volts V DC. Withstand (IEC 60034-1): --hv-pass or --hv-fail with --hv-volts.
+Back-EMF: --emf-uv --emf-vw --emf-wu in V rms at --rpm.
+
+The same readings can be given in a TOML file (--readings FILE); flags
+override it. --record appends the readings and the verdict to the job's
+progress record, where the bench guide and the printed test record show them.
+
+The exit status is 0 whenever the check ran, whatever its verdict (read it in
+the output), and 2 for readings that cannot be judged.
+
+High-voltage and insulation tests can kill: only trained people, following
+local codes and licensed practice.`,
+		Example: "  coilwright check --demo --uv 0.2861 --vw 0.2858 --wu 0.2866 --temp 22.5 --four-wire\n" +
+			"  coilwright check stator.toml --readings bench.toml --record --json",
+		Args: maxArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error { return runCheck(cmd, args, f) },
+	}
+	fl := cmd.Flags()
+	addDemoFlag(cmd, &f.demo)
+	fl.BoolVar(&f.asJSON, "json", false, "write the report as JSON")
+	fl.Var(&f.uv, "uv", "resistance between lines U and V, ohm (OL: open)")
+	fl.Var(&f.vw, "vw", "resistance between lines V and W, ohm (OL: open)")
+	fl.Var(&f.wu, "wu", "resistance between lines W and U, ohm (OL: open)")
+	fl.StringVar(&f.perPhase, "per-phase", "", "phase resistances U,V,W read before the star point is made, ohm (instead of --uv --vw --wu)")
+	fl.Var(&f.temp, "temp", "winding temperature, °C")
+	fl.Var(&f.lead, "lead-ohm", "meter lead resistance to subtract from each reading, ohm")
+	fl.BoolVar(&f.fourWire, "four-wire", false, "readings are four-wire (Kelvin): no lead correction")
+	fl.Var(&f.ir1, "ir1", "insulation resistance to core after 1 min, MΩ")
+	fl.Var(&f.ir10, "ir10", "insulation resistance to core after 10 min, MΩ")
+	fl.Var(&f.irVolts, "ir-volts", "insulation test voltage, V DC")
+	fl.BoolVar(&f.hvPass, "hv-pass", false, "the withstand test held without breakdown")
+	fl.BoolVar(&f.hvFail, "hv-fail", false, "the withstand test broke down or tripped")
+	fl.Var(&f.hvVolts, "hv-volts", "withstand test voltage applied, V")
+	fl.Var(&f.emfUV, "emf-uv", "back-EMF between lines U and V, V rms")
+	fl.Var(&f.emfVW, "emf-vw", "back-EMF between lines V and W, V rms")
+	fl.Var(&f.emfWU, "emf-wu", "back-EMF between lines W and U, V rms")
+	fl.Var(&f.rpm, "rpm", "rotor speed during the back-EMF reading, rpm")
+	fl.StringVar(&f.readingsFile, "readings", "", "read the measurements from this TOML file (flags override it)")
+	fl.BoolVar(&f.record, "record", false, "append the readings and the verdict to the job's progress record")
+	fl.StringVar(&f.progress, "progress", "", "the progress record to append to with --record (default: beside the job, JOB.progress)")
+	return cmd
+}
+
+func runCheck(cmd *cobra.Command, args []string, f *checkFlags) error {
+	_, p, jobPath, err := loadPlanArg(cmd, args, f.demo)
+	if err != nil {
+		return err
+	}
+	r, err := f.readings(cmd)
+	if err != nil {
+		return err
+	}
+	rep, err := verify.Check(p, r)
+	var ie *verify.InputError
+	switch {
+	case errors.As(err, &ie):
+		return badInputf("--%s %s: %s", flagOf(ie.Field), fmtReading(ie.Value), ie.Reason)
+	case errors.Is(err, verify.ErrUnsupported):
+		return badInput(err)
+	case err != nil:
+		return err
+	}
+	if f.record {
+		path := f.progress
+		if path == "" && jobPath != "" {
+			path = journal.PathFor(jobPath)
+		}
+		if path == "" {
+			if path, err = demoProgressPath(); err != nil {
+				return err
+			}
+		}
+		if err := recordCheck(path, r, rep); err != nil {
+			return err
+		}
+		fmt.Fprintf(cmd.ErrOrStderr(), "recorded in %s\n", path)
+	}
+	if f.asJSON {
+		return writeJSON(cmd.OutOrStdout(), rep)
+	}
+	w := cmd.OutOrStdout()
+	fmt.Fprintf(w, "Check of %s\n\n", planTitle(p))
+	_, err = fmt.Fprint(w, rep.Text())
+	return err
+}
+
+func planTitle(p *plan.Plan) string {
+	t := p.Name
+	if t == "" {
+		t = "the job"
+	}
+	if p.Layout != nil {
+		t += fmt.Sprintf(" (%d teeth, %d poles, %s)", p.Layout.Spec.Slots, p.Layout.Spec.Poles, p.Connection)
+	}
+	return t
+}
+
+// flagOf turns a verify field ("uv", "per-phase U") into its flag name.
+func flagOf(field string) string {
+	name, _, _ := strings.Cut(field, " ")
+	return name
+}
+
+func fmtReading(v float64) string {
+	if math.IsInf(v, 1) {
+		return "OL"
+	}
+	return strconv.FormatFloat(v, 'g', -1, 64)
+}
+
+// readings gathers the readings from the file and the flags. Resistance and
+// temperature are required.
+func (f *checkFlags) readings(cmd *cobra.Command) (verify.Readings, error) {
+	var r verify.Readings
+	haveTemp := false
+	if f.readingsFile != "" {
+		data, err := os.ReadFile(f.readingsFile)
+		if err != nil {
+			return r, badInputf("--readings %s: %v", f.readingsFile, err)
+		}
+		if r, haveTemp, err = verify.ParseReadings(data); err != nil {
+			return r, badInputf("--readings %s: %v", f.readingsFile, err)
+		}
+	}
+	ch := cmd.Flags().Changed
+	set := func(name string, dst *float64, src readingFlag) {
+		if ch(name) {
+			*dst = src.v
+		}
+	}
+	set("uv", &r.UV, f.uv)
+	set("vw", &r.VW, f.vw)
+	set("wu", &r.WU, f.wu)
+	set("lead-ohm", &r.LeadOhm, f.lead)
+	if ch("temp") {
+		r.TempC, haveTemp = f.temp.v, true
+	}
+	if ch("four-wire") {
+		r.FourWire = f.fourWire
+	}
+	if ch("per-phase") {
+		parts := strings.Split(f.perPhase, ",")
+		if len(parts) != 3 {
+			return r, badInputf("--per-phase %q: give three resistances U,V,W separated by commas", f.perPhase)
+		}
+		r.PerPhase = make([]float64, 3)
+		for i, s := range parts {
+			rf := readingFlag{allowOL: true}
+			if err := rf.Set(s); err != nil {
+				return r, badInputf("--per-phase %s: %v", []string{"U", "V", "W"}[i], err)
+			}
+			r.PerPhase[i] = rf.v
+		}
+	}
+	if len(r.PerPhase) == 0 {
+		for _, x := range []struct {
+			name string
+			v    float64
+		}{{"uv", r.UV}, {"vw", r.VW}, {"wu", r.WU}} {
+			if x.v == 0 && !ch(x.name) {
+				return r, badInputf("--%s is missing: give all three line-to-line readings --uv, --vw and --wu in ohm (or --per-phase U,V,W)", x.name)
+			}
+		}
+	}
+	if !haveTemp {
+		return r, badInputf("--temp is missing: the winding temperature in °C is needed to correct the readings to 20 °C")
+	}
+
+	// Insulation.
+	if ch("ir1") || ch("ir10") || ch("ir-volts") {
+		if r.Insulation == nil {
+			r.Insulation = &verify.Insulation{}
+		}
+		set("ir1", &r.Insulation.IR1MOhm, f.ir1)
+		set("ir10", &r.Insulation.IR10MOhm, f.ir10)
+		set("ir-volts", &r.Insulation.Volts, f.irVolts)
+	}
+	if in := r.Insulation; in != nil {
+		switch {
+		case !ch("ir1") && in.IR1MOhm == 0 && in.IR10MOhm > 0:
+			return r, badInputf("--ir1 is missing: the polarization index needs the 1-minute reading too")
+		case !ch("ir1") && in.IR1MOhm == 0 && f.readingsFile == "":
+			return r, badInputf("--ir1 is missing: give the insulation resistance after 1 min in MΩ")
+		case in.Volts == 0:
+			return r, badInputf("--ir-volts is missing: give the insulation test voltage (IEEE 43: 500 V DC below 1 kV)")
+		}
+	}
+	// Withstand.
+	switch {
+	case f.hvPass && f.hvFail:
+		return r, badInputf("--hv-pass and --hv-fail: give one of them")
+	case f.hvPass || f.hvFail:
+		r.Withstand = &verify.Withstand{Passed: f.hvPass}
+		if r.Withstand.Volts = f.hvVolts.v; !ch("hv-volts") {
+			return r, badInputf("--hv-volts is missing: give the withstand test voltage applied")
+		}
+	case ch("hv-volts"):
+		if r.Withstand == nil {
+			return r, badInputf("--hv-volts without a result: add --hv-pass or --hv-fail")
+		}
+		r.Withstand.Volts = f.hvVolts.v
+	}
+	// Back-EMF.
+	if ch("emf-uv") || ch("emf-vw") || ch("emf-wu") || ch("rpm") {
+		if r.EMF == nil {
+			r.EMF = &verify.BackEMF{}
+		}
+		set("emf-uv", &r.EMF.UV, f.emfUV)
+		set("emf-vw", &r.EMF.VW, f.emfVW)
+		set("emf-wu", &r.EMF.WU, f.emfWU)
+		set("rpm", &r.EMF.RPM, f.rpm)
+		for _, name := range []string{"emf-uv", "emf-vw", "emf-wu", "rpm"} {
+			if !ch(name) && f.readingsFile == "" {
+				return r, badInputf("--%s is missing: a back-EMF check needs --emf-uv, --emf-vw, --emf-wu and --rpm", name)
+			}
+		}
+	}
+	return r, nil
+}
+
+// recordCheck appends the readings and the verdict to the progress record.
+// Events of no step are the check command's: the bench guide shows them apart.
+func recordCheck(path string, r verify.Readings, rep *verify.Report) error {
+	s, _, _, err := journal.Open(path, "coilwright check")
+	if err != nil {
+		return err
+	}
+	ev := journal.Event{Kind: journal.Reading, Test: "check", Verdict: string(rep.Verdict), Readings: map[string]float64{}}
+	var open []string
+	put := func(name string, v float64) {
+		if math.IsInf(v, 1) {
+			open = append(open, name)
+			return
+		}
+		ev.Readings[name] = v
+	}
+	if len(r.PerPhase) == 3 {
+		put("per_phase_u", r.PerPhase[0])
+		put("per_phase_v", r.PerPhase[1])
+		put("per_phase_w", r.PerPhase[2])
+	} else if r.HasResistance() {
+		put("uv", r.UV)
+		put("vw", r.VW)
+		put("wu", r.WU)
+	}
+	put("temp", r.TempC)
+	if r.LeadOhm > 0 {
+		put("lead_ohm", r.LeadOhm)
+	}
+	if r.FourWire {
+		put("four_wire", 1)
+	}
+	if in := r.Insulation; in != nil {
+		put("ir1", in.IR1MOhm)
+		if in.IR10MOhm > 0 {
+			put("ir10", in.IR10MOhm)
+		}
+		put("ir_volts", in.Volts)
+	}
+	if w := r.Withstand; w != nil {
+		put("hv_volts", w.Volts)
+		put("hv_passed", map[bool]float64{true: 1, false: 0}[w.Passed])
+	}
+	if e := r.EMF; e != nil {
+		put("emf_uv", e.UV)
+		put("emf_vw", e.VW)
+		put("emf_wu", e.WU)
+		put("rpm", e.RPM)
+	}
+	if len(open) > 0 {
+		ev.Note = "open (OL): " + strings.Join(open, ", ")
+	}
+	for _, fd := range rep.Findings {
+		msg := string(fd.Severity) + ": "
+		if fd.Phase != "" {
+			msg += "phase " + fd.Phase + ": "
+		}
+		ev.Findings = append(ev.Findings, msg+fd.Message)
+	}
+	if err := s.Append(ev); err != nil {
+		s.Close()
+		return err
+	}
+	return s.Close()
+}

@@ -1,0 +1,190 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"coilwright/winding/job"
+	"coilwright/winding/journal"
+	"coilwright/winding/plan"
+	"coilwright/winding/verify"
+)
+
+// demoLines gives the demo plan's line-to-line readings at tempC with the
+// phases scaled by f (star: two phases in series).
+func demoLines(t *testing.T, tempC float64, f [3]float64) []string {
+	t.Helper()
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		t.Fatal(err)
+	}
+	var ph [3]float64
+	for i := range ph {
+		ph[i] = verify.AtTemp(f[i]*p.PhaseResistance20C, tempC)
+	}
+	l := verify.StarLines(ph)
+	return []string{"--uv", fmt.Sprintf("%.6f", l[0]), "--vw", fmt.Sprintf("%.6f", l[1]), "--wu", fmt.Sprintf("%.6f", l[2]),
+		"--temp", fmt.Sprint(tempC)}
+}
+
+func checkJSON(t *testing.T, args ...string) (int, map[string]any, string) {
+	t.Helper()
+	code, out, errs := runCLI(t, append(args, "--json")...)
+	var m map[string]any
+	if code == 0 {
+		if err := json.Unmarshal([]byte(out), &m); err != nil {
+			t.Fatalf("check --json output is not JSON: %v\n%s", err, out)
+		}
+	}
+	return code, m, errs
+}
+
+// The "done when", through the command line.
+func TestCheckDoneWhen(t *testing.T) {
+	base := []string{"check", "--demo", "--four-wire"}
+	t.Run("plan value at 27 °C passes", func(t *testing.T) {
+		code, m, errs := checkJSON(t, append(base, demoLines(t, 27, [3]float64{1, 1, 1})...)...)
+		if code != 0 || m["verdict"] != "pass" {
+			t.Fatalf("check(plan value) = exit %d, verdict %v, %s; want 0, pass", code, m["verdict"], errs)
+		}
+		exp := m["expected_phase_ohm"].(map[string]any)["at_20c"].(float64)
+		for _, ph := range m["phases"].([]any) {
+			r20 := ph.(map[string]any)["ohm_at_20c"].(float64)
+			if d := r20/exp - 1; d > 0.003 || d < -0.003 {
+				t.Errorf("phase %v at 20 °C = %g; want within 0.3 %% of %g", ph.(map[string]any)["phase"], r20, exp)
+			}
+		}
+		for _, k := range []string{"temperature_c", "expected_phase_ohm", "phases", "imbalance_percent", "verdict", "findings"} {
+			if _, ok := m[k]; !ok {
+				t.Errorf("check --json lacks %q (DESIGN.md contract)", k)
+			}
+		}
+	})
+	t.Run("one phase 8 % low fails naming it", func(t *testing.T) {
+		code, m, _ := checkJSON(t, append(base, demoLines(t, 27, [3]float64{1, 0.92, 1})...)...)
+		if code != 0 || m["verdict"] != "fail" {
+			t.Fatalf("check(V 8 %% low) = exit %d, verdict %v; want 0, fail", code, m["verdict"])
+		}
+		named := false
+		for _, f := range m["findings"].([]any) {
+			f := f.(map[string]any)
+			named = named || (f["severity"] == "fail" && f["phase"] == "V")
+		}
+		if !named {
+			t.Errorf("check(V 8 %% low) findings = %v; want a failing finding naming V", m["findings"])
+		}
+	})
+	t.Run("three times too high does not pass", func(t *testing.T) {
+		code, m, _ := checkJSON(t, append(base, demoLines(t, 27, [3]float64{3, 3, 3})...)...)
+		if code != 0 || m["verdict"] == "pass" {
+			t.Errorf("check(3×) = exit %d, verdict %v; want 0 and not pass", code, m["verdict"])
+		}
+	})
+}
+
+func TestCheckBadInput(t *testing.T) {
+	ok := []string{"--uv", "0.29", "--vw", "0.29", "--wu", "0.29", "--temp", "20"}
+	with := func(flag, v string) []string {
+		out := append([]string{"check", "--demo"}, ok...)
+		for i := range out {
+			if out[i] == flag {
+				out[i+1] = v
+				return out
+			}
+		}
+		return append(out, flag, v)
+	}
+	without := func(flag string) []string {
+		out := []string{"check", "--demo"}
+		for i := 0; i < len(ok); i += 2 {
+			if ok[i] != flag {
+				out = append(out, ok[i], ok[i+1])
+			}
+		}
+		return out
+	}
+	cases := []struct {
+		name string
+		args []string
+		flag string
+	}{
+		{"not a number", with("--uv", "abc"), "--uv"},
+		{"comma decimal", with("--vw", "0,29"), "--vw"},
+		{"negative", with("--wu", "-0.29"), "--wu"},
+		{"zero", with("--uv", "0"), "--uv"},
+		{"below absolute zero", with("--temp", "-274"), "--temp"},
+		{"temperature not a number", with("--temp", "warm"), "--temp"},
+		{"temperature NaN", with("--temp", "NaN"), "--temp"},
+		{"absurd resistance", with("--uv", "1e9"), "--uv"},
+		{"missing wu", without("--wu"), "--wu"},
+		{"missing temp", without("--temp"), "--temp"},
+		{"lead above reading", with("--lead-ohm", "0.5"), "--lead-ohm"},
+		{"ir without volts", with("--ir1", "100"), "--ir-volts"},
+		{"hv without volts", append(with("--temp", "20"), "--hv-pass"), "--hv-volts"},
+		{"emf without rpm", append(with("--emf-uv", "10"), "--emf-vw", "10", "--emf-wu", "10"), "--rpm"},
+		{"per-phase of two", append(without("--uv"), "--per-phase", "0.1,0.1"), "--per-phase"},
+		{"readings file missing", with("--readings", "/nonexistent/readings.toml"), "--readings"},
+	}
+	for _, c := range cases {
+		code, _, errs := runCLI(t, c.args...)
+		if code != 2 || !strings.Contains(errs, c.flag) {
+			t.Errorf("%s: check %v = exit %d, %q; want 2 naming %s", c.name, c.args, code, errs, c.flag)
+		}
+	}
+}
+
+func TestCheckTextGolden(t *testing.T) {
+	args := append([]string{"check", "--demo", "--four-wire"}, demoLines(t, 22.5, [3]float64{1, 1, 0.95})...)
+	args = append(args, "--ir1", "800", "--ir10", "2100", "--ir-volts", "500", "--hv-pass", "--hv-volts", "570")
+	code, out, errs := runCLI(t, args...)
+	if code != 0 {
+		t.Fatalf("check = exit %d: %s", code, errs)
+	}
+	golden(t, "verify", "check-demo-w-low.txt", out)
+
+	code, out, errs = runCLI(t, "check", "--demo", "--readings", "../../testdata/verify/full.toml")
+	if code != 0 {
+		t.Fatalf("check --readings = exit %d: %s", code, errs)
+	}
+	golden(t, "verify", "check-demo-readings-file.txt", out)
+}
+
+func TestCheckRecord(t *testing.T) {
+	rec := filepath.Join(t.TempDir(), "demo.progress")
+	args := append([]string{"check", "--demo", "--four-wire", "--record", "--progress", rec}, demoLines(t, 21, [3]float64{1, 1, 1})...)
+	for i := 0; i < 2; i++ {
+		if code, _, errs := runCLI(t, args...); code != 0 {
+			t.Fatalf("check --record = exit %d: %s", code, errs)
+		}
+	}
+	code, _, _ := runCLI(t, "check", "--demo", "--record", "--progress", rec, "--per-phase", "0.14,0.14,OL", "--temp", "21", "--four-wire")
+	if code != 0 {
+		t.Fatalf("check --record --per-phase with OL = exit %d", code)
+	}
+	data, err := os.ReadFile(rec)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ev, torn, err := journal.Decode(data)
+	if err != nil || torn != nil || len(ev) != 3 {
+		t.Fatalf("record = %d events, %v, %v; want 3", len(ev), torn, err)
+	}
+	e := ev[0]
+	if e.Kind != journal.Reading || e.Test != "check" || e.Verdict != "pass" || e.Readings["temp"] != 21 || e.Readings["uv"] == 0 || len(e.Findings) == 0 {
+		t.Errorf("recorded event = %+v; want a check reading with uv, temp 21, pass and findings", e)
+	}
+	if ev[1].Seq != 2 {
+		t.Errorf("second event seq = %d; want 2", ev[1].Seq)
+	}
+	if ev[2].Verdict != "fail" || !strings.Contains(ev[2].Note, "per_phase_w") {
+		t.Errorf("open-phase event = %+v; want fail with the open reading noted", ev[2])
+	}
+	st := journal.Replay(ev)
+	if st.Readings["check"].Seq != 3 {
+		t.Errorf("Replay latest check = seq %d; want 3", st.Readings["check"].Seq)
+	}
+}

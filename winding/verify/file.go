@@ -1,0 +1,89 @@
+package verify
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+
+	"github.com/pelletier/go-toml/v2"
+)
+
+// readingsFile is the measurements file: TOML with the same names as the
+// check command's flags (underscores for dashes). An open circuit is written
+// inf (the meter shows OL).
+type readingsFile struct {
+	Temp     *float64  `toml:"temp"`
+	UV       float64   `toml:"uv"`
+	VW       float64   `toml:"vw"`
+	WU       float64   `toml:"wu"`
+	PerPhase []float64 `toml:"per_phase"`
+	LeadOhm  float64   `toml:"lead_ohm"`
+	FourWire bool      `toml:"four_wire"`
+
+	Insulation *struct {
+		IR1   float64 `toml:"ir1"`
+		IR10  float64 `toml:"ir10"`
+		Volts float64 `toml:"volts"`
+	} `toml:"insulation"`
+	Withstand *struct {
+		Passed *bool   `toml:"passed"`
+		Volts  float64 `toml:"volts"`
+	} `toml:"withstand"`
+	EMF *struct {
+		UV  float64 `toml:"uv"`
+		VW  float64 `toml:"vw"`
+		WU  float64 `toml:"wu"`
+		RPM float64 `toml:"rpm"`
+	} `toml:"emf"`
+}
+
+// FileError is a measurements file that cannot be read.
+type FileError struct {
+	Line   int // 0 when not known
+	Reason string
+}
+
+func (e *FileError) Error() string {
+	if e.Line > 0 {
+		return fmt.Sprintf("verify: measurements file line %d: %s", e.Line, e.Reason)
+	}
+	return "verify: measurements file: " + e.Reason
+}
+
+// ParseReadings reads a measurements file. Unknown keys are refused (a
+// misspelt key must not pass unnoticed). The second result says whether the
+// file gave the temperature. Readings are not validated here: call
+// Readings.Validate (Check does).
+func ParseReadings(data []byte) (Readings, bool, error) {
+	var f readingsFile
+	dec := toml.NewDecoder(bytes.NewReader(data)).DisallowUnknownFields()
+	if err := dec.Decode(&f); err != nil {
+		var de *toml.DecodeError
+		if errors.As(err, &de) {
+			line, _ := de.Position()
+			return Readings{}, false, &FileError{Line: line, Reason: de.Error()}
+		}
+		var sm *toml.StrictMissingError
+		if errors.As(err, &sm) {
+			return Readings{}, false, &FileError{Reason: "unknown key: " + sm.String()}
+		}
+		return Readings{}, false, &FileError{Reason: err.Error()}
+	}
+	r := Readings{UV: f.UV, VW: f.VW, WU: f.WU, PerPhase: f.PerPhase, LeadOhm: f.LeadOhm, FourWire: f.FourWire}
+	if f.Temp != nil {
+		r.TempC = *f.Temp
+	}
+	if in := f.Insulation; in != nil {
+		r.Insulation = &Insulation{IR1MOhm: in.IR1, IR10MOhm: in.IR10, Volts: in.Volts}
+	}
+	if w := f.Withstand; w != nil {
+		if w.Passed == nil {
+			return Readings{}, false, &FileError{Reason: "[withstand] needs passed = true or false"}
+		}
+		r.Withstand = &Withstand{Passed: *w.Passed, Volts: w.Volts}
+	}
+	if e := f.EMF; e != nil {
+		r.EMF = &BackEMF{UV: e.UV, VW: e.VW, WU: e.WU, RPM: e.RPM}
+	}
+	return r, f.Temp != nil, nil
+}

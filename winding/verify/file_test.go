@@ -1,0 +1,75 @@
+package verify_test
+
+import (
+	"errors"
+	"math"
+	"os"
+	"path/filepath"
+	"testing"
+
+	"coilwright/winding/verify"
+)
+
+const fileDir = "../../testdata/verify"
+
+func TestParseReadings(t *testing.T) {
+	cases := []struct {
+		file     string
+		wantErr  bool
+		haveTemp bool
+		check    func(verify.Readings) bool
+	}{
+		{"full.toml", false, true, func(r verify.Readings) bool {
+			return r.TempC == 22.5 && r.UV == 0.2861 && r.FourWire && r.Insulation.IR10MOhm == 2100 &&
+				r.Withstand.Passed && r.EMF.RPM == 300
+		}},
+		{"per-phase-open.toml", false, true, func(r verify.Readings) bool {
+			return len(r.PerPhase) == 3 && math.IsInf(r.PerPhase[2], 1) && r.LeadOhm == 0.012
+		}},
+		{"unknown-key.toml", true, false, nil},
+		{"bad-type.toml", true, false, nil},
+	}
+	for _, c := range cases {
+		data, err := os.ReadFile(filepath.Join(fileDir, c.file))
+		if err != nil {
+			t.Fatal(err)
+		}
+		r, haveTemp, err := verify.ParseReadings(data)
+		var fe *verify.FileError
+		if c.wantErr {
+			if !errors.As(err, &fe) {
+				t.Errorf("ParseReadings(%s) err = %v; want a FileError", c.file, err)
+			}
+			continue
+		}
+		if err != nil || haveTemp != c.haveTemp || !c.check(r) {
+			t.Errorf("ParseReadings(%s) = %+v, %v, %v; want the file's values", c.file, r, haveTemp, err)
+		}
+	}
+}
+
+func FuzzParseReadings(f *testing.F) {
+	entries, err := os.ReadDir(fileDir)
+	if err != nil {
+		f.Fatal(err)
+	}
+	for _, e := range entries {
+		data, err := os.ReadFile(filepath.Join(fileDir, e.Name()))
+		if err != nil {
+			f.Fatal(err)
+		}
+		f.Add(data)
+	}
+	p := demoPlan(f)
+	f.Fuzz(func(t *testing.T, data []byte) {
+		r, _, err := verify.ParseReadings(data)
+		if err != nil {
+			return
+		}
+		// Whatever parses is either refused as input or judged without panic.
+		rep, err := verify.Check(p, r)
+		if err == nil && rep.Verdict == "" {
+			t.Fatalf("Check(%+v) gave no verdict", r)
+		}
+	})
+}
