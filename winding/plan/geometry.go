@@ -132,8 +132,8 @@ func (b *builder) fit() error {
 	}
 	if p.SlotFill > s.CeilingFill {
 		return b.j.Fail(field, val,
-			fmt.Sprintf("%d coil sides of %d turns × %d strands of %.3f mm need %.1f mm² of copper in a slot with %.1f mm² usable: a fill of %.2f, above the %.2f that round wire of %.3f mm overall can reach even perfectly layered",
-				b.sides, p.TurnsPerCoil, p.Wire.StrandsInHand, p.Wire.BareDiameterMM, copper, s.UsableAreaMM2, p.SlotFill, s.CeilingFill, p.Wire.OverallDiameterMM),
+			fmt.Sprintf("%d coil side%s of %d turns × %d strand%s of %.3f mm need %.1f mm² of copper in a slot with %.1f mm² usable: a fill of %.2f, above the %.2f that round wire of %.3f mm overall can reach even perfectly layered",
+				b.sides, plural(b.sides, "", "s"), p.TurnsPerCoil, p.Wire.StrandsInHand, plural(p.Wire.StrandsInHand, "", "s"), p.Wire.BareDiameterMM, copper, s.UsableAreaMM2, p.SlotFill, s.CeilingFill, p.Wire.OverallDiameterMM),
 			fmt.Sprintf("at most %d turns fit at the practical fill %.2f; use thinner wire with parallel paths, fewer turns, or a larger slot", s.MaxTurns, s.PracticalFill))
 	}
 	if p.SlotFill > s.PracticalFill {

@@ -2,6 +2,7 @@ package plan
 
 import (
 	"fmt"
+	"strconv"
 	"strings"
 
 	"coilwright/winding"
@@ -20,6 +21,7 @@ func (b *builder) steps() error {
 	p, j := b.p, b.j
 	l := p.Layout
 	q := l.Spec.Slots
+	b.p.Steps = make([]Step, 0, 3+3*len(p.Coils)+6*len(l.PhaseNames)+12)
 	b.add(Step{Kind: StepPrepare, Title: "Deburr and clean the stator",
 		Detail: "File off burrs on the slot edges and tooth tips, round sharp corners at both ends of the stack, blow out the filings and wipe the slots clean. A burr cuts enamel and liner.",
 		Reminders: []string{"eye protection while filing and blowing out",
@@ -33,6 +35,12 @@ func (b *builder) steps() error {
 	sidesIn := make([]int, q+1) // coil sides already in each slot
 	total := len(p.Coils)
 	lead := j.Build.LeadLengthMM
+	leadText := " (" + ftoa(lead) + " mm)"
+	turnsText := itoa(p.TurnsPerCoil) + " turns"
+	// One slice shared by every coil step; readers do not change it.
+	coilReminders := []string{"count every turn; lay each turn beside the last, no crossings",
+		"keep the wire tight but do not stretch it; never let it scrape the slot edge"}
+	sepSize := separatorSize(p, b.stackPlusCuffs(), j.Stator.SeparatorMM)
 	ci := 0
 	for _, ch := range l.Chains {
 		name := l.PhaseNames[ch.Phase]
@@ -43,9 +51,9 @@ func (b *builder) steps() error {
 				if sidesIn[s] == 1 {
 					if pa, pb, differ := slotPhases(l, s); differ {
 						b.add(Step{Kind: StepSeparator, Slot: s,
-							Title: fmt.Sprintf("Phase separator in slot %d", s),
-							Detail: fmt.Sprintf("Slot %d holds phases %s and %s. Lay a separator (%s) against the coil side already in it before winding tooth %d.",
-								s, l.PhaseNames[pa], l.PhaseNames[pb], separatorSize(p, b.stackPlusCuffs(), j.Stator.SeparatorMM), tooth)})
+							Title: "Phase separator in slot " + itoa(s),
+							Detail: "Slot " + itoa(s) + " holds phases " + l.PhaseNames[pa] + " and " + l.PhaseNames[pb] +
+								". Lay a separator (" + sepSize + ") against the coil side already in it before winding tooth " + itoa(tooth) + "."})
 					}
 				}
 			}
@@ -57,25 +65,25 @@ func (b *builder) steps() error {
 				Direction: c.Direction.String(), Turns: p.TurnsPerCoil, WireLengthM: cp.WireLengthM,
 				SlotBefore: before, SlotAfter: after}
 			if i == 0 {
-				cs.From = fmt.Sprintf("start lead %s (%g mm)", ch.Start, lead)
+				cs.From = "start lead " + ch.Start + leadText
 			} else {
-				cs.From = fmt.Sprintf("jumper from tooth %d", ch.Teeth[i-1])
+				cs.From = "jumper from tooth " + itoa(ch.Teeth[i-1])
 			}
 			if i == len(ch.Teeth)-1 {
-				cs.To = fmt.Sprintf("finish lead %s (%g mm)", ch.Finish, lead)
+				cs.To = "finish lead " + ch.Finish + leadText
 			} else {
-				cs.To = fmt.Sprintf("jumper to tooth %d", ch.Teeth[i+1])
+				cs.To = "jumper to tooth " + itoa(ch.Teeth[i+1])
 			}
 			cs.HowToWind = howToWind(p.Rotor, c.Direction, tooth, before, after, p.TurnsPerCoil, p.Wire.StrandsInHand)
 			pathWord := ""
 			if l.Spec.Paths > 1 {
-				pathWord = fmt.Sprintf(" path %d", c.Path)
+				pathWord = " path " + itoa(c.Path)
 			}
 			b.add(Step{Kind: StepCoil, Coil: cs,
-				Title:  fmt.Sprintf("Coil %d of %d: tooth %d, phase %s%s, %s, %d turns", cp.Order, total, tooth, name, pathWord, c.Direction, p.TurnsPerCoil),
-				Detail: fmt.Sprintf("From %s to %s. %s", cs.From, cs.To, cs.HowToWind),
-				Reminders: []string{"count every turn; lay each turn beside the last, no crossings",
-					"keep the wire tight but do not stretch it; never let it scrape the slot edge"}})
+				Title: "Coil " + itoa(cp.Order) + " of " + itoa(total) + ": tooth " + itoa(tooth) + ", phase " + name + pathWord +
+					", " + cs.Direction + ", " + turnsText,
+				Detail:    "From " + cs.From + " to " + cs.To + ". " + cs.HowToWind,
+				Reminders: coilReminders})
 			if i < len(ch.Jumpers) {
 				jp := ch.Jumpers[i]
 				jpc := jp
@@ -84,9 +92,10 @@ func (b *builder) steps() error {
 					sense = "the next coil is wound the other way round"
 				}
 				b.add(Step{Kind: StepJumper, Jumper: &jpc,
-					Title: fmt.Sprintf("Jumper: tooth %d to tooth %d", jp.FromTooth, jp.ToTooth),
-					Detail: fmt.Sprintf("Carry the wire round the lead end, %d tooth pitch%s counter-clockwise (about %.0f mm with slack), without cutting it; %s. Sleeve it where it crosses other coils.",
-						jp.Span, plural(jp.Span, "", "es"), float64(jp.Span)*p.JumperPitchMM+j.Build.JumperSlackMM, sense)})
+					Title: "Jumper: tooth " + itoa(jp.FromTooth) + " to tooth " + itoa(jp.ToTooth),
+					Detail: "Carry the wire round the lead end, " + itoa(jp.Span) + " tooth pitch" + plural(jp.Span, "", "es") +
+						" counter-clockwise (about " + strconv.FormatFloat(float64(jp.Span)*p.JumperPitchMM+j.Build.JumperSlackMM, 'f', 0, 64) +
+						" mm with slack), without cutting it; " + sense + ". Sleeve it where it crosses other coils."})
 			}
 		}
 	}
@@ -137,10 +146,10 @@ func (b *builder) steps() error {
 // end down the right-hand slot.
 func howToWind(r Rotor, d winding.Direction, tooth, before, after, turns, strands int) string {
 	right, left := before, after
-	view := fmt.Sprintf("seen from the bore, facing tooth %d with the lead end up", tooth)
+	view := " seen from the bore, facing tooth "
 	if r == OuterRotor {
 		right, left = after, before
-		view = fmt.Sprintf("seen from outside the stator, facing tooth %d with the lead end up", tooth)
+		view = " seen from outside the stator, facing tooth "
 	}
 	sense := "clockwise"
 	down, up := right, left
@@ -148,12 +157,17 @@ func howToWind(r Rotor, d winding.Direction, tooth, before, after, turns, strand
 		sense = "counter-clockwise"
 		down, up = left, right
 	}
-	s := fmt.Sprintf("Wind %s %s: from the lead end go down slot %d and come back up slot %d; %d turns", sense, view, down, up, turns)
+	s := "Wind " + sense + view + itoa(tooth) + " with the lead end up: from the lead end go down slot " + itoa(down) +
+		" and come back up slot " + itoa(up) + "; " + itoa(turns) + " turns"
 	if strands > 1 {
-		s += fmt.Sprintf(", %d strands in hand laid side by side", strands)
+		s += ", " + itoa(strands) + " strands in hand laid side by side"
 	}
 	return s + "; start and finish at the lead end."
 }
+
+func itoa(n int) string { return strconv.Itoa(n) }
+
+func ftoa(v float64) string { return strconv.FormatFloat(v, 'g', -1, 64) }
 
 const linerCuff = 3.0 // mm the liner stands out at each end of the stack (common practice)
 

@@ -1,0 +1,35 @@
+package plan
+
+import (
+	"strings"
+	"testing"
+)
+
+// bench120 is a 120-slot, 112-pole outer-rotor stator (a large direct-drive
+// generator) with 4 parallel paths: 40 coils per phase.
+var bench120 = strings.NewReplacer(
+	"slots = 12", "slots = 120", "poles = 10", "poles = 112\npaths = 4",
+	`rotor = "inner"`, `rotor = "outer"`, "diameter_mm = 60", "diameter_mm = 600",
+).Replace(handJob)
+
+func BenchmarkBuild120Slots(b *testing.B) {
+	j := mustJob(b, bench120)
+	if p := mustPlan(b, j); len(p.Coils) != 120 {
+		b.Fatalf("%d coils; want 120", len(p.Coils))
+	}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := Build(j); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+func BenchmarkBuildDemo(b *testing.B) {
+	j := mustJob(b, handJob)
+	for b.Loop() {
+		if _, err := Build(j); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

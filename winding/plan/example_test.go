@@ -1,0 +1,35 @@
+package plan_test
+
+import (
+	"fmt"
+
+	"coilwright/winding/job"
+	"coilwright/winding/plan"
+)
+
+func ExampleBuild() {
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("%d turns per coil, fill %.2f, mean turn %.1f mm\n", p.TurnsPerCoil, p.SlotFill, p.MeanTurnLengthMM)
+	fmt.Printf("phase %.1f mΩ at 20 °C, DC bus %.1f V at %g rpm\n", 1000*p.PhaseResistance20C, p.EMF.DCBusAtCutIn, p.EMF.CutInSpeedRPM)
+	fmt.Println(p.Steps[3].Title)
+	// Output:
+	// 18 turns per coil, fill 0.38, mean turn 84.9 mm
+	// phase 139.2 mΩ at 20 °C, DC bus 27.7 V at 300 rpm
+	// Coil 1 of 24: tooth 1, phase U, cw, 18 turns
+}
+
+func ExampleHVTestVolts() {
+	fmt.Println(plan.HVTestVolts(250, 34.1), plan.HVTestVolts(3000, 400))
+	// Output: 570 1800
+}
+
+func ExamplePhaseEMF() {
+	// 8 coils of 18 turns in series, k_w = 0.933, 0.28 mWb per pole, 28 poles at 500 rpm.
+	f := plan.ElectricalHz(28, 500)
+	fmt.Printf("%.2f Hz, %.2f V rms\n", f, plan.PhaseEMF(f, 8*18, 0.933, 0.28e-3))
+	// Output: 116.67 Hz, 19.50 V rms
+}
