@@ -183,7 +183,7 @@ func (b *builder) stepRowHeight(st plan.Step) float64 {
 	_, detail := b.stepText(st)
 	h := 6.5
 	if detail != "" {
-		h += paraHeight(b.colX(8)-b.colX(1)-2, sizeTiny+0.5, Regular, detail)
+		h += paraHeight(b.colX(8)-b.colX(2)-2, sizeTiny+0.5, Regular, detail) + 0.8
 	}
 	return math.Max(h, ckCoilH)
 }

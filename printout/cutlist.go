@@ -60,7 +60,7 @@ func (b *builder) cutList() {
 
 	f.heading("Insulation and other materials")
 	mcols := scaleCols([]column{
-		{"item", 40, left, Bold}, {"count", 14, right, Regular}, {"size", 48, left, Regular}, {"length", 18, right, Mono}, {"note", 66, left, Regular},
+		{"item", 38, left, Bold}, {"count", 11, right, Regular}, {"size", 60, left, Regular}, {"length", 16, right, Mono}, {"note", 61, left, Regular},
 	}, w)
 	var mrows [][]string
 	for _, m := range p.Materials {
