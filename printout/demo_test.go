@@ -1,0 +1,65 @@
+package printout
+
+import (
+	"bytes"
+	"fmt"
+	"slices"
+	"testing"
+
+	"coilwright/winding/job"
+	"coilwright/winding/plan"
+)
+
+func demoPlan(t testing.TB) *plan.Plan {
+	t.Helper()
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		t.Fatalf("plan.Build(job.Demo()) = %v", err)
+	}
+	return p
+}
+
+func TestDemoPackReadsBack(t *testing.T) {
+	p := demoPlan(t)
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pdf := render(t, pk)
+	pages, err := pdfPageTexts(pdf)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for k := 1; k <= p.Layout.Spec.Slots; k++ {
+		if !slices.Contains(pages[0], fmt.Sprint(k)) {
+			t.Errorf("demo slot map lacks tooth %d", k)
+		}
+	}
+	var all []string
+	for _, pg := range pages {
+		all = append(all, pg...)
+	}
+	for _, m := range []string{"U1", "U2", "V1", "V2", "W1", "W2", fmt.Sprintf("%d turns per coil", p.TurnsPerCoil), "Winding checklist", "Caution"} {
+		if !slices.Contains(all, m) {
+			t.Errorf("demo pack PDF lacks %q", m)
+		}
+	}
+	if len(pdf) >= 1<<20 || len(pk.Pages) < 4 {
+		t.Errorf("demo pack = %d bytes, %d pages; want under 1 MB and at least 4 pages", len(pdf), len(pk.Pages))
+	}
+}
+
+func BenchmarkDemoPack(b *testing.B) {
+	p := demoPlan(b)
+	for b.Loop() {
+		pk, err := Build(p, Options{})
+		if err != nil {
+			b.Fatal(err)
+		}
+		var buf bytes.Buffer
+		if err := Render(pk, &buf); err != nil {
+			b.Fatal(err)
+		}
+		b.SetBytes(int64(buf.Len()))
+	}
+}
