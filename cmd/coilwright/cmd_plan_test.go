@@ -34,7 +34,7 @@ func TestPlanDemoIndependent(t *testing.T) {
 	}
 	var p struct {
 		Layout struct {
-			Slots  int `json:"slots"`
+			Slots  int                   `json:"slots"`
 			Coils  []struct{ Tooth int } `json:"coils"`
 			Chains []struct {
 				Phase   string `json:"phase"`

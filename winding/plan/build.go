@@ -98,6 +98,9 @@ func (b *builder) layout() error {
 	} else {
 		b.lineFactor = 1
 		b.phaseCurr = b.j.Rating.CurrentA / (2 * math.Sin(math.Pi/m))
+		if w.Phases == 3 {
+			b.warn("delta: any third-harmonic EMF of the magnets adds round the delta and drives a circulating current that heats the winding even at no load; star is the usual choice for tooth-coil PM machines (common practice)")
+		}
 	}
 	return nil
 }

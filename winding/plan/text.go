@@ -92,16 +92,15 @@ func (p *Plan) Text() string {
 
 	b.WriteString("\nCut list\n")
 	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
-	for _, pp := range p.Paths {
-		fmt.Fprintf(tw, "  wire %s%s\t%d × %.2f m\tone continuous length per strand, leads and allowances included\n",
-			pp.Phase, pathSuffix(l.Spec.Paths, pp.Path), w.StrandsInHand, pp.CutLengthM)
+	for i, pp := range p.Paths {
+		note := ""
+		if i == 0 {
+			note = "one continuous length per strand, with leads and allowances"
+		}
+		fmt.Fprintf(tw, "  wire %s%s\t%d × %.2f m\t%s\n", pp.Phase, pathSuffix(l.Spec.Paths, pp.Path), w.StrandsInHand, pp.CutLengthM, note)
 	}
 	for _, m := range p.Materials {
-		note := ""
-		if m.Note != "" {
-			note = m.Note
-		}
-		fmt.Fprintf(tw, "  %s\t%d × %s\t%s\n", m.Item, m.Count, m.SizeText, note)
+		fmt.Fprintf(tw, "  %s\t%d × %s\t%s\n", m.Item, m.Count, m.SizeText, m.Note)
 	}
 	tw.Flush()
 
