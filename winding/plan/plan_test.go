@@ -1,6 +1,7 @@
 package plan
 
 import (
+	"encoding/json"
 	"errors"
 	"math"
 	"math/cmplx"
@@ -335,4 +336,28 @@ func TestBuildDoesNotChangeTheJob(t *testing.T) {
 	if j.Winding.Phases != 0 || j.Build.SpoolMargin != 0 {
 		t.Errorf("Build changed its job: phases %d, margin %g", j.Winding.Phases, j.Build.SpoolMargin)
 	}
+}
+
+func TestStepJSON(t *testing.T) {
+	p := mustPlan(t, job.Demo())
+	for _, s := range p.Steps {
+		if s.Kind != StepJumper {
+			continue
+		}
+		b, err := json.Marshal(s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		got := string(b)
+		for _, want := range []string{`"kind":"jumper"`, `"jumper":{"from_tooth":1,"to_tooth":2,"span_teeth":1,"reverses_sense":true}`, `"index":5`} {
+			if !strings.Contains(got, want) {
+				t.Errorf("json.Marshal(first jumper step) = %s; want it to contain %s", got, want)
+			}
+		}
+		if strings.Contains(got, "FromTooth") {
+			t.Errorf("json.Marshal(jumper step) = %s; Go field names leak", got)
+		}
+		return
+	}
+	t.Error("demo plan has no jumper step")
 }
