@@ -93,9 +93,10 @@ func (b *builder) steps() error {
 				}
 				b.add(Step{Kind: StepJumper, Jumper: &jpc,
 					Title: "Jumper: tooth " + itoa(jp.FromTooth) + " to tooth " + itoa(jp.ToTooth),
-					Detail: "Carry the wire round the lead end, " + itoa(jp.Span) + " tooth pitch" + plural(jp.Span, "", "es") +
-						" counter-clockwise (about " + strconv.FormatFloat(float64(jp.Span)*p.JumperPitchMM+j.Build.JumperSlackMM, 'f', 0, 64) +
-						" mm with slack), without cutting it; " + sense + ". Sleeve it where it crosses other coils."})
+					Detail: "Carry the wire round the lead end " + itoa(jp.Span) + " tooth pitch" + plural(jp.Span, "", "es") +
+						" up the tooth numbers (counter-clockwise seen from the lead end), about " +
+						strconv.FormatFloat(float64(jp.Span)*p.JumperPitchMM+j.Build.JumperSlackMM, 'f', 0, 64) +
+						" mm with slack, without cutting it; " + sense + ". Sleeve it where it crosses other coils."})
 			}
 		}
 	}
