@@ -281,10 +281,10 @@ func (g guideModel) updateReadings(msg tea.KeyMsg, s plan.Step, ok bool) (guideM
 		if g.focus < len(g.fields)-1 {
 			return g, g.focusField(g.focus + 1)
 		}
-		vals, err := parseReadings(g.fields, g.labels)
+		vals, bad, err := parseReadings(g.fields, g.labels)
 		if err != "" {
 			g.inErr = err
-			return g, nil
+			return g, g.focusField(bad)
 		}
 		if !ok {
 			g.mode = modeWork
@@ -307,8 +307,9 @@ func (g guideModel) updateReadings(msg tea.KeyMsg, s plan.Step, ok bool) (guideM
 	return g, cmd
 }
 
-// parseReadings reads every field as a number that is not negative.
-func parseReadings(fs []textinput.Model, labels []field) ([]float64, string) {
+// parseReadings reads every field as a number that is not negative; on a
+// bad field it returns its index and why.
+func parseReadings(fs []textinput.Model, labels []field) ([]float64, int, string) {
 	out := make([]float64, 0, len(fs))
 	for i, f := range fs {
 		txt := strings.TrimSpace(strings.ReplaceAll(f.Value(), ",", "."))
@@ -319,15 +320,15 @@ func parseReadings(fs []textinput.Model, labels []field) ([]float64, string) {
 		}
 		switch {
 		case txt == "":
-			return nil, name + ": type a number"
+			return nil, i, name + ": type a number"
 		case err != nil || v != v || v > 1e15 || v < -1e15:
-			return nil, fmt.Sprintf("%s: %q is not a number (use digits and a point, e.g. 1.25)", name, txt)
+			return nil, i, fmt.Sprintf("%s: %q is not a number (use digits and a point, e.g. 1.25)", name, txt)
 		case v < 0:
-			return nil, fmt.Sprintf("%s: %s is negative; readings here are magnitudes", name, txt)
+			return nil, i, fmt.Sprintf("%s: %s is negative; readings here are magnitudes", name, txt)
 		}
 		out = append(out, v)
 	}
-	return out, ""
+	return out, 0, ""
 }
 
 // shortHelp lists the keys that matter now, for the help line.

@@ -20,15 +20,20 @@ func handPlan(tb testing.TB, slots, poles, layers int) *plan.Plan {
 		tb.Fatalf("winding.Design(%d/%d) = %v", slots, poles, err)
 	}
 	p := &plan.Plan{
-		Name:         "test stator",
-		Layout:       l,
-		Connection:   winding.Star,
-		Rotor:        plan.OuterRotor,
-		TurnsPerCoil: 12,
-		Wire:         plan.Wire{BareDiameterMM: 0.8, OverallDiameterMM: 0.88, StrandsInHand: 1},
+		Name:                   "test stator",
+		Layout:                 l,
+		Connection:             winding.Star,
+		Rotor:                  plan.OuterRotor,
+		TurnsPerCoil:           12,
+		Wire:                   plan.Wire{BareDiameterMM: 0.8, OverallDiameterMM: 0.88, StrandsInHand: 1, DiameterTolMM: 0.008},
+		PhaseResistance20C:     0.5,
+		PhaseResistanceAmbient: 0.49,
+		AmbientC:               15,
 		Tests: []plan.Test{
-			{Name: "balance", What: "phase resistances at the terminals", Limit: 2, Unit: "ohm", Compare: "band", Source: "EASA AR100-2020"},
-			{Name: "ir", What: "insulation resistance to core at 500 V DC after 1 min", Limit: 5, Unit: "Mohm", Compare: "min", Voltage: 500, Source: "IEEE 43-2013"},
+			{Name: "phase_pairs", What: "insulation between phases before the star point, 500 V DC", Limit: 5, Unit: "Mohm", Compare: "min", Voltage: 500, Source: "IEEE 43-2013 (borrowed)"},
+			{Name: plan.TestInsulation, What: "insulation resistance to core at 500 V DC after 1 min", Limit: 5, Unit: "Mohm", Compare: "min", Voltage: 500, Source: "IEEE 43-2013", Caution: "test voltage: keep clear, discharge after"},
+			{Name: plan.TestResistance, What: "resistance of each phase", Limit: 7, Unit: "%", Compare: "band", Source: "IEC 60028"},
+			{Name: plan.TestHighVoltage, What: "570 V AC for 1 min, winding to core", Limit: 60, Unit: "s", Compare: "min", Voltage: 570, Source: "IEC 60034-1 clause 9.2"},
 		},
 	}
 	add := func(s plan.Step) {
@@ -74,8 +79,10 @@ func handPlan(tb testing.TB, slots, poles, layers int) *plan.Plan {
 		}
 	}
 	add(plan.Step{Kind: plan.StepTerminal, Title: "strip, sleeve and mark the six leads"})
-	add(plan.Step{Kind: plan.StepTest, Title: "insulation resistance to core", Test: "ir"})
+	add(plan.Step{Kind: plan.StepTest, Title: "insulation between phases", Test: "phase_pairs"})
 	add(plan.Step{Kind: plan.StepJoin, Title: "make the star point U2+V2+W2"})
-	add(plan.Step{Kind: plan.StepTest, Title: "resistance balance", Test: "balance"})
+	add(plan.Step{Kind: plan.StepTest, Title: "resistance of each phase", Test: plan.TestResistance})
+	add(plan.Step{Kind: plan.StepTest, Title: "insulation resistance to core", Test: plan.TestInsulation})
+	add(plan.Step{Kind: plan.StepTest, Title: "high-voltage withstand", Test: plan.TestHighVoltage})
 	return p
 }

@@ -5,7 +5,6 @@ import (
 	"flag"
 	"os"
 	"path/filepath"
-	"strings"
 	"sync"
 	"testing"
 	"time"
@@ -16,11 +15,27 @@ import (
 	"github.com/muesli/termenv"
 )
 
-var update = flag.Bool("update", false, "rewrite the golden screens under testdata/golden/tui")
+// updating reports the -update flag, which rewrites the golden screens under
+// testdata/golden/tui. The flag itself is registered by teatest's golden
+// package, which this test binary links.
+func updating() bool {
+	f := flag.Lookup("update")
+	if f == nil {
+		return false
+	}
+	g, ok := f.Value.(flag.Getter)
+	if !ok {
+		return false
+	}
+	b, _ := g.Get().(bool)
+	return b
+}
 
 func TestMain(m *testing.M) {
 	lipgloss.SetColorProfile(termenv.Ascii)
 	lipgloss.SetHasDarkBackground(true)
+	// Timers never fire in these tests: a test sends retryMsg itself.
+	retryTick = func(time.Duration, func(time.Time) tea.Msg) tea.Cmd { return nil }
 	os.Exit(m.Run())
 }
 
@@ -99,7 +114,8 @@ func press(k string) tea.KeyMsg {
 }
 
 // drive sends messages to the model and runs the commands they return,
-// synchronously, the way the program loop would (timers are skipped).
+// synchronously and in order, the way the program loop would; the retry
+// timer is switched off in TestMain.
 func drive(tb testing.TB, m *Model, msgs ...tea.Msg) {
 	tb.Helper()
 	for _, msg := range msgs {
@@ -119,15 +135,7 @@ func runCmd(m *Model, cmd tea.Cmd, depth int) {
 	if cmd == nil {
 		return
 	}
-	done := make(chan tea.Msg, 1)
-	go func() { done <- cmd() }()
-	var out tea.Msg
-	select {
-	case out = <-done:
-	case <-time.After(50 * time.Millisecond):
-		return // a timer: the tests fire retries themselves
-	}
-	switch out := out.(type) {
+	switch out := cmd().(type) {
 	case nil:
 	case tea.BatchMsg:
 		for _, c := range out {
@@ -163,7 +171,7 @@ func plain(m *Model) string { return ansi.Strip(m.View()) }
 func golden(t *testing.T, name, got string) {
 	t.Helper()
 	path := filepath.Join("..", "testdata", "golden", "tui", name)
-	if *update {
+	if updating() {
 		if err := os.MkdirAll(filepath.Dir(path), 0o755); err != nil {
 			t.Fatal(err)
 		}
@@ -179,16 +187,6 @@ func golden(t *testing.T, name, got string) {
 	if string(want) != got {
 		t.Errorf("screen %s differs from the golden file:\n--- got\n%s\n--- want\n%s", name, got, want)
 	}
-}
-
-// lineWith returns the first line of s containing sub, or "".
-func lineWith(s, sub string) string {
-	for _, l := range strings.Split(s, "\n") {
-		if strings.Contains(l, sub) {
-			return l
-		}
-	}
-	return ""
 }
 
 func ansiStrip(s string) string { return ansi.Strip(s) }

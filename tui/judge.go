@@ -101,7 +101,7 @@ func verifyFields(p *plan.Plan, t plan.Test) []field {
 		{key: "uv", label: "U-V", unit: "ohm"},
 		{key: "vw", label: "V-W", unit: "ohm"},
 		{key: "wu", label: "W-U", unit: "ohm"},
-		{key: "temp", label: "winding", unit: "degC", def: temp},
+		{key: "temp", label: "temp", unit: "degC winding", def: temp},
 	}
 	switch t.Name {
 	case plan.TestResistance, plan.TestBalance:
@@ -110,7 +110,7 @@ func verifyFields(p *plan.Plan, t plan.Test) []field {
 		return []field{
 			{key: "ir1", label: "IR 1 min", unit: "Mohm"},
 			{key: "volts", label: "test V", unit: "V DC", def: strconv.FormatFloat(t.Voltage, 'g', -1, 64)},
-			{key: "temp", label: "winding", unit: "degC", def: temp},
+			{key: "temp", label: "temp", unit: "degC winding", def: temp},
 		}
 	case plan.TestHighVoltage:
 		return []field{

@@ -51,7 +51,7 @@ func newKeyMaps() *keyMaps {
 			Done:     key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "step done")),
 			Note:     key.NewBinding(key.WithKeys("n"), key.WithHelp("n", "note")),
 			Undo:     key.NewBinding(key.WithKeys("u"), key.WithHelp("u", "undo last step")),
-			Readings: key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "enter readings")),
+			Readings: key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "type readings")),
 		},
 		typing: typingKeys{
 			Accept: key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "accept")),

@@ -103,7 +103,11 @@ func stepLine(c *shared, s plan.Step, i int) string {
 			t += fmt.Sprintf(" (%d so far)", c.prog.turns[i])
 		}
 	default:
-		t = string(s.Kind) + ": " + s.Title
+		title := s.Title
+		if k := string(s.Kind) + ": "; len(title) > len(k) && strings.EqualFold(title[:len(k)], k) {
+			title = title[len(k):]
+		}
+		t = fmt.Sprintf("%-9s %s", s.Kind, title)
 	}
 	if r := c.prog.readings[i]; r != nil {
 		t += " -> " + strings.ToUpper(r.verdict)

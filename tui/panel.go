@@ -51,7 +51,7 @@ func (b *lines) kv(label, value string) {
 		if i == 0 {
 			lab = b.st.dim.Render(fmt.Sprintf("%-*s", labelWidth, label))
 		}
-		b.l = append(b.l, lab+b.st.value.Render(ln))
+		b.l = append(b.l, ansi.Truncate(lab, labelWidth, "")+b.st.value.Render(ln))
 	}
 }
 
@@ -249,16 +249,20 @@ func (g guideModel) testView(b *lines, s plan.Step) {
 		b.kv("source", t.Source)
 		if t.Voltage > 0 {
 			b.kv("volts", fmt.Sprintf("%s V", fmtNum(t.Voltage)))
+		}
+		switch {
+		case t.Caution != "":
+			b.text("CAUTION "+t.Caution, c.st.caution.Render)
+		case t.Voltage > 0:
 			b.text(hvCaution, c.st.caution.Render)
 		}
-		if t.Caution != "" {
-			b.text("CAUTION "+t.Caution, c.st.caution.Render)
-		}
-		b.kv("", t.Note)
+		b.kv("note", t.Note)
 	}
 	b.text(s.Detail, c.st.value.Render)
 	for _, r := range s.Reminders {
-		b.kv("mind", r)
+		if !known || r != t.Caution {
+			b.kv("mind", r)
+		}
 	}
 	switch g.mode {
 	case modeReadings:
@@ -272,11 +276,9 @@ func (g guideModel) testView(b *lines, s plan.Step) {
 	case modeVerdict:
 		b.raw("")
 		for i, f := range g.fields {
-			u := ""
 			if i < len(g.labels) {
-				u = " " + g.labels[i].unit
+				b.kv(g.labels[i].label, f.Value()+" "+g.labels[i].unit)
 			}
-			b.raw(f.Value() + u)
 		}
 		g.verdictView(b, g.verdict)
 		b.text("enter/y records it and goes on; esc types the readings again.", c.st.statusNow.Render)
@@ -319,7 +321,7 @@ func limitText(t plan.Test) string {
 	case "min":
 		return fmt.Sprintf("at least %s %s", fmtNum(t.Limit), t.Unit)
 	case "band":
-		return fmt.Sprintf("within %s %% of each other", fmtNum(t.Limit))
+		return fmt.Sprintf("within +/-%s %% of the expected value", fmtNum(t.Limit))
 	}
 	if t.Limit != 0 {
 		return fmt.Sprintf("%s %s", fmtNum(t.Limit), t.Unit)

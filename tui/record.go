@@ -54,6 +54,10 @@ type retryMsg struct{}
 // timer in the guide, and it runs only while a write is failing.
 const retryAfter = 2 * time.Second
 
+// retryTick starts the retry timer; tests replace it to fire the retry by
+// hand.
+var retryTick = tea.Tick
+
 // heldCounter is implemented by errors that say how many entries wait.
 type heldCounter interface{ HeldEntries() int }
 
@@ -123,7 +127,7 @@ func (w *writer) saved(msg savedMsg) tea.Cmd {
 		w.err = msg.err
 		w.failures++
 		w.waiting = true
-		return tea.Tick(retryAfter, func(time.Time) tea.Msg { return retryMsg{} })
+		return retryTick(retryAfter, func(time.Time) tea.Msg { return retryMsg{} })
 	}
 	w.err, w.held, w.failures = nil, 0, 0
 	return w.kick()

@@ -98,7 +98,7 @@ func fitRing(q, w, h int) (ringGeometry, bool) {
 	minRx := math.Max(6, float64(q*(tw+1))/(2*math.Pi))
 	for rx := minRx; ; rx += 0.5 {
 		ry := math.Max(rx*0.46, float64(q)/(2*math.Pi)*1.1)
-		gw := int(math.Ceil(2*rx)) + tw + 1
+		gw := int(math.Ceil(2*rx)) + tw + 3 // a column of margin on each side
 		gh := int(math.Ceil(2*ry)) + 1
 		if gw > w || gh > h {
 			return ringGeometry{}, false
@@ -107,7 +107,7 @@ func fitRing(q, w, h int) (ringGeometry, bool) {
 		g.cx, g.cy, g.rx, g.ry = gw/2, gh/2, rx, ry
 		for i := 0; i < q; i++ {
 			th := math.Pi/2 + 2*math.Pi*float64(i)/float64(q) // counter-clockwise from the top
-			g.x[i] = min(max(0, int(math.Round(float64(g.cx)+rx*math.Cos(th)))-tw/2), gw-tw)
+			g.x[i] = min(max(1, int(math.Round(float64(g.cx)+rx*math.Cos(th)))-tw/2), gw-tw-1)
 			g.y[i] = min(max(0, int(math.Round(float64(g.cy)-ry*math.Sin(th)))), gh-1)
 		}
 		if !g.overlaps() {
