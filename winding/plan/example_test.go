@@ -33,3 +33,13 @@ func ExamplePhaseEMF() {
 	fmt.Printf("%.2f Hz, %.2f V rms\n", f, plan.PhaseEMF(f, 8*18, 0.933, 0.28e-3))
 	// Output: 116.67 Hz, 19.50 V rms
 }
+
+func ExampleFluxFromTestCoil() {
+	// 20 turns on one tooth of a 24/28 stator (pitch factor sin 105° = 0.966)
+	// read 1.70 V rms with the rotor turned at 300 rpm.
+	phi := plan.FluxFromTestCoil(28, 20, 300, 1.70, 0.9659258)
+	// The phase of 8 such teeth wound with 18 turns each, k_w = 0.933, at 500 rpm:
+	e := plan.PhaseEMF(plan.ElectricalHz(28, 500), 8*18, 0.9330127, phi)
+	fmt.Printf("Φ = %.4f mWb, E = %.2f V rms\n", phi*1000, e)
+	// Output: Φ = 0.2830 mWb, E = 19.70 V rms
+}
