@@ -349,7 +349,7 @@ func (j *Job) checkRating() *FieldError {
 	if r.SpeedRPM == 0 && j.Flux.Given() && j.Turns.Target == TargetDCBus && r.VoltageV == 0 {
 		return j.Fail("rating.speed_rpm", "", "is needed to report the voltage at rated speed", "give the rated speed, or rating.voltage_v")
 	}
-	if r.SpeedRPM == 0 && !j.Flux.Given() && r.VoltageV == 0 {
+	if !j.Flux.Given() && r.VoltageV == 0 {
 		return j.Fail("rating.voltage_v", "", "with no flux source the rated voltage cannot be computed, and the high-voltage test needs it", "give the rated line voltage rms")
 	}
 	return j.rangeCheck("rating.power_w", r.PowerW, 0, 1e8, "W", "the rated output")

@@ -25,7 +25,7 @@ func BenchmarkBuild120Slots(b *testing.B) {
 	}
 }
 
-func BenchmarkBuildDemo(b *testing.B) {
+func BenchmarkBuild12Slots(b *testing.B) {
 	j := mustJob(b, handJob)
 	for b.Loop() {
 		if _, err := Build(j); err != nil {
