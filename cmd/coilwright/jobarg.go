@@ -16,7 +16,8 @@ func addDemoFlag(cmd *cobra.Command, demo *bool) {
 
 // loadJobArg reads the job a command works on: exactly one of a JOB argument
 // or --demo. A missing, unreadable or invalid file is invalid input (exit
-// status 2). path is "" for the demo.
+// status 2). path is "" for the demo. Use it with Args: maxArgs(1) and
+// addDemoFlag; a command that needs the plan too calls loadPlanArg.
 func loadJobArg(cmd *cobra.Command, args []string, demo bool) (j *job.Job, path string, err error) {
 	switch {
 	case demo && len(args) > 0:

@@ -27,7 +27,10 @@ func PhaseEMF(f, seriesTurns, kw, phi float64) float64 {
 // FluxFromTestCoil returns the fundamental flux per pole that makes a test coil
 // of turns on one tooth read voltsRMS at rpm: the inverse of PhaseEMF with the
 // tooth coil's own winding factor, its pitch factor (a single coil has no
-// distribution).
+// distribution). The reading holds the harmonics of the magnet field too; on
+// the near-sinusoidal EMF of a tooth coil they change the rms value little,
+// and the same harmonics reach the phase, so the estimate carries over (common
+// practice). Read with a true-rms meter at a steady speed.
 func FluxFromTestCoil(poles, turns int, rpm, voltsRMS, pitchFactor float64) float64 {
 	return voltsRMS / (math.Sqrt2 * math.Pi * ElectricalHz(poles, rpm) * float64(turns) * pitchFactor)
 }
