@@ -85,7 +85,11 @@ func (p *Plan) Text() string {
 		row(k, "%s%s: %d coils, %.2f m between terminals (jumpers %.2f m), %s at 20 °C",
 			pp.Phase, pathSuffix(l.Spec.Paths, pp.Path), pp.Coils, pp.WireLengthM, pp.JumperLengthM, formatOhm(pp.Ohm20C))
 	}
-	row("Resistance", "phase %s at 20 °C, %s at %g °C (IEC 60028)", formatOhm(p.PhaseResistance20C), formatOhm(p.PhaseResistanceAmbient), p.AmbientC)
+	if p.AmbientC == 20 {
+		row("Resistance", "phase %s at 20 °C (IEC 60028)", formatOhm(p.PhaseResistance20C))
+	} else {
+		row("Resistance", "phase %s at 20 °C, %s at %g °C (IEC 60028)", formatOhm(p.PhaseResistance20C), formatOhm(p.PhaseResistanceAmbient), p.AmbientC)
+	}
 	row("Current", "%.2f A per phase, %.2f A/mm², copper loss %.1f W at %g °C", p.PhaseCurrentA, p.CurrentDensityAmm2, p.CopperLossW, p.AmbientC)
 	row("Copper", "%.1f m in the winding with leads (%.3f kg); buy %.1f m (%.3f kg)", p.CopperLengthM, p.CopperMassKg, p.BuyLengthM, p.BuyMassKg)
 	tw.Flush()
