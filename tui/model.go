@@ -269,7 +269,7 @@ func (m *Model) helpLine() string {
 func (m *Model) smallView() string {
 	c := m.c
 	if !c.sized {
-		return "coilwright bench: waiting for the terminal size..."
+		return fmt.Sprintf("coilwright bench: waiting for the terminal size...\nIt needs at least %dx%d; enlarge the terminal if this stays.", minWidth, minHeight)
 	}
 	msg := fmt.Sprintf("Terminal too small: %dx%d.\nEnlarge it to at least %dx%d.\nYour progress is safe.", c.width, c.height, minWidth, minHeight)
 	if c.out.err != nil {
