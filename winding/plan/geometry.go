@@ -60,6 +60,9 @@ func (b *builder) slot() error {
 			fmt.Sprintf("the wire is wider than the slot opening (%.2f mm) and cannot be fed into the slot", sl.OpeningMM),
 			fmt.Sprintf("use wire under %.2f mm overall, several thinner strands in hand, or check stator.slot.opening_mm", sl.OpeningMM))
 	}
+	if n := b.p.Wire.StrandsInHand; n > 1 && float64(n)*od > sl.OpeningMM {
+		b.warn("wire: %d strands side by side (%.2f mm) are wider than the slot opening (%.2f mm); feed them through the opening one after another", n, float64(n)*od, sl.OpeningMM)
+	}
 	if s.DepthMM-2*st.LinerMM < od {
 		return b.j.Fail("stator.slot.depth_mm", fmt.Sprintf("%.2f", s.DepthMM), fmt.Sprintf("the lined slot is shallower than one wire (%.3f mm)", od), "")
 	}
@@ -174,7 +177,6 @@ func (b *builder) lengths() error {
 	l := p.Layout
 	lead := j.Build.LeadLengthMM / 1000
 	order := 0
-	total := len(l.Coils)
 	for _, ch := range l.Chains {
 		pp := PathPlan{Phase: l.PhaseNames[ch.Phase], Path: ch.Path, Coils: len(ch.Teeth)}
 		for _, tooth := range ch.Teeth {
@@ -193,6 +195,5 @@ func (b *builder) lengths() error {
 		pp.CutLengthM = pp.WireLengthM + 2*lead + float64(pp.Coils)*j.Build.ExtraPerCoilMM/1000
 		p.Paths = append(p.Paths, pp)
 	}
-	_ = total
 	return nil
 }

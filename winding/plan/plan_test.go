@@ -361,3 +361,28 @@ func TestStepJSON(t *testing.T) {
 	}
 	t.Error("demo plan has no jumper step")
 }
+
+// A slot given by its area alone is taken as square for its liner, separator
+// and coil build: A = 70 mm², side √70 = 8.36660 mm; lined perimeter
+// 2·8.36660 + 8.36660 + (8.36660 − 2) = 31.46640 mm; liner 0.2·31.46640 =
+// 6.29328 mm²; separator 0.2·(8.36660 − 0.2) = 1.63332 mm²; usable 62.07340 mm².
+func TestAreaOnlySlot(t *testing.T) {
+	src := strings.NewReplacer("depth_mm = 10\n", "area_mm2 = 70\n", "width_top_mm = 6\n", "", "width_bottom_mm = 8\n", "").Replace(handJob)
+	p := mustPlan(t, mustJob(t, src))
+	s := p.Slot
+	for _, c := range []struct {
+		name      string
+		got, want float64
+	}{
+		{"DepthMM", s.DepthMM, 8.36660}, {"LinedPerimeterMM", s.LinedPerimeterMM, 31.46640},
+		{"LinerAreaMM2", s.LinerAreaMM2, 6.29328}, {"SeparatorAreaMM2", s.SeparatorAreaMM2, 1.63332},
+		{"UsableAreaMM2", s.UsableAreaMM2, 62.07340},
+	} {
+		if math.Abs(c.got-c.want) > 2e-5 {
+			t.Errorf("Build(area-only slot).Slot.%s = %.5f; want %.5f", c.name, c.got, c.want)
+		}
+	}
+	if !s.DepthEstimated || !hasWarning(p, "taken as square") {
+		t.Errorf("Build(area-only slot): DepthEstimated %v, warnings %q; want the estimate said", s.DepthEstimated, p.Warnings)
+	}
+}
