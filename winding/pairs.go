@@ -1,6 +1,11 @@
 package winding
 
-import "sort"
+import (
+	"runtime"
+	"sort"
+	"sync"
+	"sync/atomic"
+)
 
 // Summary is the figure of merit of one feasible pair, for sweeps.
 type Summary struct {
@@ -49,7 +54,10 @@ func Pairs(sw Sweep) ([]Summary, error) {
 			return nil, invalid("layers", ly, "layers must be 1 or 2")
 		}
 	}
-	var out []Summary
+	// One job per (layers, Q); the jobs run on every core and their results
+	// are joined in job order, so the output does not depend on scheduling.
+	type job struct{ layers, slots int }
+	var jobs []job
 	for _, ly := range sw.Layers {
 		for q := sw.Phases; q <= sw.MaxSlots; q++ {
 			// The coil count must be a multiple of the phase count
@@ -57,23 +65,51 @@ func Pairs(sw Sweep) ([]Summary, error) {
 			if (ly == 1 && q%2 != 0) || (q/(3-ly))%sw.Phases != 0 {
 				continue
 			}
-			tt := newTrigTable(q)
-			for poles := 2; poles <= sw.MaxPoles; poles += 2 {
-				l, err := design(Spec{Slots: q, Poles: poles, Phases: sw.Phases, Layers: ly, Paths: 1}, false, tt)
-				if err != nil {
-					continue
-				}
-				if l.WindingFactor < sw.MinWindingFactor || (sw.BalancedOnly && !l.RadialForceBalanced) {
-					continue
-				}
-				out = append(out, Summary{Spec: l.Spec, Q: l.Q, WindingFactor: l.WindingFactor,
-					Periodicity: l.Periodicity, LCM: l.LCM, CoggingFactor: l.CoggingFactor,
-					RadialForceBalanced: l.RadialForceBalanced, ParallelPaths: l.ParallelPaths})
-			}
+			jobs = append(jobs, job{ly, q})
 		}
+	}
+	results := make([][]Summary, len(jobs))
+	var next atomic.Int64
+	var wg sync.WaitGroup
+	for w := 0; w < runtime.GOMAXPROCS(0); w++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for {
+				i := int(next.Add(1) - 1)
+				if i >= len(jobs) {
+					return
+				}
+				results[i] = sweepSlots(sw, jobs[i].layers, jobs[i].slots)
+			}
+		}()
+	}
+	wg.Wait()
+	var out []Summary
+	for _, r := range results {
+		out = append(out, r...)
 	}
 	sort.SliceStable(out, func(i, j int) bool { return better(out[i], out[j]) })
 	return out, nil
+}
+
+// sweepSlots lays out every pole count for one slot count and layer count.
+func sweepSlots(sw Sweep, layers, q int) []Summary {
+	var out []Summary
+	tt := newTrigTable(q)
+	for poles := 2; poles <= sw.MaxPoles; poles += 2 {
+		l, err := design(Spec{Slots: q, Poles: poles, Phases: sw.Phases, Layers: layers, Paths: 1}, false, tt)
+		if err != nil {
+			continue
+		}
+		if l.WindingFactor < sw.MinWindingFactor || (sw.BalancedOnly && !l.RadialForceBalanced) {
+			continue
+		}
+		out = append(out, Summary{Spec: l.Spec, Q: l.Q, WindingFactor: l.WindingFactor,
+			Periodicity: l.Periodicity, LCM: l.LCM, CoggingFactor: l.CoggingFactor,
+			RadialForceBalanced: l.RadialForceBalanced, ParallelPaths: l.ParallelPaths})
+	}
+	return out
 }
 
 func better(a, b Summary) bool {
