@@ -45,19 +45,12 @@ type coilJSON struct {
 }
 
 type chainJSON struct {
-	Phase   string       `json:"phase"`
-	Path    int          `json:"path"`
-	Start   string       `json:"start"`
-	Finish  string       `json:"finish"`
-	Teeth   []int        `json:"teeth"`
-	Jumpers []jumperJSON `json:"jumpers"`
-}
-
-type jumperJSON struct {
-	From          int  `json:"from_tooth"`
-	To            int  `json:"to_tooth"`
-	Span          int  `json:"span_teeth"`
-	ReversesSense bool `json:"reverses_sense"`
+	Phase   string   `json:"phase"`
+	Path    int      `json:"path"`
+	Start   string   `json:"start"`
+	Finish  string   `json:"finish"`
+	Teeth   []int    `json:"teeth"`
+	Jumpers []Jumper `json:"jumpers"`
 }
 
 // MarshalJSON writes the layout in the shape of the `layout --json` contract.
@@ -85,12 +78,8 @@ func (l *Layout) MarshalJSON() ([]byte, error) {
 		j.Coils[i] = coilJSON{c.Tooth, l.PhaseNames[c.Phase], c.Direction.String(), c.Path, c.Position}
 	}
 	for i, ch := range l.Chains {
-		cj := chainJSON{Phase: l.PhaseNames[ch.Phase], Path: ch.Path, Start: ch.Start, Finish: ch.Finish,
-			Teeth: ch.Teeth, Jumpers: make([]jumperJSON, len(ch.Jumpers))}
-		for k, jp := range ch.Jumpers {
-			cj.Jumpers[k] = jumperJSON{jp.FromTooth, jp.ToTooth, jp.Span, jp.ReversesSense}
-		}
-		j.Chains[i] = cj
+		j.Chains[i] = chainJSON{Phase: l.PhaseNames[ch.Phase], Path: ch.Path, Start: ch.Start, Finish: ch.Finish,
+			Teeth: ch.Teeth, Jumpers: ch.Jumpers}
 	}
 	return json.Marshal(j)
 }

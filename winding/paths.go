@@ -75,9 +75,10 @@ type Chain struct {
 // jumpers run round the lead end. Span is the count of tooth pitches it
 // covers going counter-clockwise (up the tooth numbers).
 type Jumper struct {
-	FromTooth, ToTooth int
-	Span               int
-	ReversesSense      bool // the next coil is wound the other way round
+	FromTooth     int  `json:"from_tooth"`
+	ToTooth       int  `json:"to_tooth"`
+	Span          int  `json:"span_teeth"`
+	ReversesSense bool `json:"reverses_sense"` // the next coil is wound the other way round
 }
 
 // buildChains groups the coils by phase and path. Coils are in tooth order and
