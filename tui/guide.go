@@ -90,6 +90,18 @@ func (g guideModel) resize() guideModel {
 
 // update handles a key on the guide screen.
 func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
+	// Keys typed fast (or sent by a terminal multiplexer) can arrive as one
+	// message of several runes; outside a text field take them one by one,
+	// so "18" typed quickly sets the count to 18.
+	if g.mode != modeNote && g.mode != modeReadings && msg.Type == tea.KeyRunes && len(msg.Runes) > 1 {
+		var cmds []tea.Cmd
+		for _, r := range msg.Runes {
+			var cmd tea.Cmd
+			g, cmd = g.update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{r}})
+			cmds = append(cmds, cmd)
+		}
+		return g, tea.Batch(cmds...)
+	}
 	k := g.c.keys
 	cur := g.c.prog.current()
 	s, ok := g.c.step(cur)
