@@ -55,6 +55,24 @@ const (
 		"A turning generator makes voltage at its leads even when nothing is connected."
 )
 
+// ResistanceBand is the band, in per cent about the plan's value, within
+// which the resistance of a correct winding lies. The tolerance δ on the bare
+// diameter d puts R between (d/(d+δ))² and (d/(d−δ))² of nominal (IEC
+// 60317-0-1 tolerances; R ∝ 1/d²); the length estimate widens it by
+// ±LengthUncertaintyPercent, multiplied in (worst case). check judges by the
+// same band.
+func ResistanceBand(w Wire) (lowPct, highPct float64) {
+	d, tol := w.BareDiameterMM, w.DiameterTolMM
+	lo, hi := 1.0, 1.0
+	if d > 0 && tol > 0 && tol < d {
+		lo, hi = (d/(d+tol))*(d/(d+tol)), (d/(d-tol))*(d/(d-tol))
+	}
+	u := LengthUncertaintyPercent / 100
+	return 100 * (lo*(1-u) - 1), 100 * (hi*(1+u) - 1)
+}
+
+func round1(x float64) float64 { return math.Round(x*10) / 10 }
+
 func (b *builder) tests() error {
 	p := b.p
 	names := p.Layout.PhaseNames
@@ -65,7 +83,8 @@ func (b *builder) tests() error {
 	}
 	pathAmb := wire.ResistanceAt(pathR, p.AmbientC)
 	tolPct := 100 * 2 * p.Wire.DiameterTolMM / p.Wire.BareDiameterMM
-	band := math.Round((tolPct+LengthUncertaintyPercent)*10) / 10
+	lowPct, highPct := ResistanceBand(p.Wire)
+	band := math.Round(math.Max(-lowPct, highPct)*10) / 10
 	hv := HVTestVolts(p.RatedPowerW, p.RatedVoltageV)
 	var pathWord string
 	if b.j.Winding.Paths > 1 {
@@ -94,9 +113,9 @@ func (b *builder) tests() error {
 	ts = append(ts, Test{Name: TestResistance,
 		What: fmt.Sprintf("Resistance of each phase with a four-wire (Kelvin) meter, the winding at room temperature; refer the readings to 20 °C by the copper coefficient. Expected at %g °C: %s (%s at 20 °C).",
 			p.AmbientC, strings.Join(expect, ", "), formatOhm(p.PhaseResistance20C)),
-		Limit: band, Unit: "%", Compare: "band",
-		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band: ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm, plus %.0f %% for the length estimate (common practice)",
-			tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
+		Limit: band, Unit: "%", Compare: "band", LowPercent: round1(lowPct), HighPercent: round1(highPct),
+		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band %+.1f %% .. %+.1f %%: about ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm (R ∝ 1/d²), times ±%.0f %% for the length estimate (common practice)",
+			lowPct, highPct, tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
 		Note: "a star winding is read line to line; check converts the three readings to phase values"})
 	ts = append(ts, Test{Name: TestBalance,
 		What:  "Balance of the three phase resistances: (highest − lowest) / mean.",

@@ -212,8 +212,12 @@ type Test struct {
 	Limit   float64 `json:"limit"`
 	Unit    string  `json:"unit"`
 	Compare string  `json:"compare"` // "max", "min" or "band" (limit is then ± percent)
-	Voltage float64 `json:"test_voltage_v,omitempty"`
-	Source  string  `json:"source"`
-	Caution string  `json:"caution,omitempty"`
-	Note    string  `json:"note,omitempty"`
+	// LowPercent and HighPercent bound a "band" test exactly (Limit is the
+	// larger of the two, rounded).
+	LowPercent  float64 `json:"low_percent,omitempty"`
+	HighPercent float64 `json:"high_percent,omitempty"`
+	Voltage     float64 `json:"test_voltage_v,omitempty"`
+	Source      string  `json:"source"`
+	Caution     string  `json:"caution,omitempty"`
+	Note        string  `json:"note,omitempty"`
 }

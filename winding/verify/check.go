@@ -11,13 +11,14 @@ import (
 
 // ImbalanceLimitPercent is the largest difference between phase resistances,
 // (max − min)/mean, of a random-wound winding (EASA AR100-2020; 1 % for
-// form-wound coils).
-const ImbalanceLimitPercent = 2.0
+// form-wound coils). The plan's test plan states the same limit.
+const ImbalanceLimitPercent = plan.BalanceLimitPercent
 
 // LengthUncertainty is the stated uncertainty of the plan's wire length, a
 // geometric mean-turn estimate of a hand-wound coil (coil build, tension,
-// jumper routing): ±4 % (common practice).
-const LengthUncertainty = 0.04
+// jumper routing), as a fraction; the plan's test plan uses the same figure
+// (common practice).
+const LengthUncertainty = plan.LengthUncertaintyPercent / 100
 
 // ErrUnsupported marks a plan this package cannot judge (not three phases,
 // no expected resistance).
@@ -75,10 +76,9 @@ func (c *checker) add(f Finding) {
 
 func (c *checker) name(i int) string { return c.p.Layout.PhaseNames[i] }
 
-// bandFor is the band of a correct winding about the plan's value. The
-// diameter tolerance δ on the bare diameter d gives R between (d/(d+δ))² and
-// (d/(d−δ))² of nominal (IEC 60317-0-1 tolerances; R ∝ 1/d²). The length
-// uncertainty multiplies it (worst case).
+// bandFor is the band of a correct winding about the plan's value
+// (plan.ResistanceBand: the IEC 60317 diameter tolerance, R ∝ 1/d², times the
+// length uncertainty), with its two parts shown apart.
 func bandFor(p *plan.Plan) Band {
 	d, tol := p.Wire.BareDiameterMM, p.Wire.DiameterTolMM
 	lo, hi := 1.0, 1.0
@@ -87,8 +87,7 @@ func bandFor(p *plan.Plan) Band {
 	}
 	b := Band{DiameterMM: d, DiameterTolMM: tol, LengthPercent: 100 * LengthUncertainty,
 		DiameterPercent: [2]float64{100 * (lo - 1), 100 * (hi - 1)}}
-	b.LowPercent = 100 * (lo*(1-LengthUncertainty) - 1)
-	b.HighPercent = 100 * (hi*(1+LengthUncertainty) - 1)
+	b.LowPercent, b.HighPercent = plan.ResistanceBand(p.Wire)
 	b.Low20C = p.PhaseResistance20C * (1 + b.LowPercent/100)
 	b.High20C = p.PhaseResistance20C * (1 + b.HighPercent/100)
 	return b

@@ -12,11 +12,12 @@ import (
 )
 
 // Back-EMF limits (common practice for hand-built rotors, whose magnets
-// vary): line voltages within 2 % of each other pass, up to 5 % warn, beyond
-// fail; the mean within 10 % of the prediction passes, up to 25 % warns.
+// vary): line voltages within the plan's limit (plan.BackEMFBalancePercent,
+// 3 %) of each other pass, up to twice that warn, beyond fail; the mean
+// within 10 % of the prediction passes, up to 25 % warns.
 const (
-	EMFImbalanceWarnPercent = 2.0
-	EMFImbalanceFailPercent = 5.0
+	EMFImbalanceWarnPercent = plan.BackEMFBalancePercent
+	EMFImbalanceFailPercent = 2 * plan.BackEMFBalancePercent
 	EMFLevelWarnPercent     = 10.0
 	EMFLevelFailPercent     = 25.0
 )
