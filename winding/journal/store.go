@@ -5,6 +5,8 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"path/filepath"
+	"syscall"
 	"time"
 )
 
@@ -41,7 +43,34 @@ type file interface {
 }
 
 func openRecord(path string) (file, error) {
-	return os.OpenFile(path, os.O_RDWR|os.O_CREATE, 0o644)
+	_, statErr := os.Stat(path)
+	f, err := os.OpenFile(path, os.O_RDWR|os.O_CREATE, 0o644)
+	if err != nil {
+		return nil, err
+	}
+	if errors.Is(statErr, os.ErrNotExist) {
+		// A new file: make its name durable too, or a power cut could
+		// leave synced lines in a file no directory points to (fsync(2)).
+		if err := syncDir(filepath.Dir(path)); err != nil {
+			f.Close()
+			return nil, err
+		}
+	}
+	return f, nil
+}
+
+// syncDir flushes a directory's entries to disk. Systems that cannot sync a
+// directory (it is opened read-only and Sync is refused) are let pass.
+func syncDir(dir string) error {
+	d, err := os.Open(dir)
+	if err != nil {
+		return err
+	}
+	defer d.Close()
+	if err := d.Sync(); err != nil && !errors.Is(err, os.ErrInvalid) && !errors.Is(err, syscall.EINVAL) {
+		return err
+	}
+	return nil
 }
 
 // WriteError is an event that could not be written. The event is kept in
