@@ -20,9 +20,14 @@ const (
 	IEEE43ScopeW = 750.0
 )
 
-// RatedPowerW estimates the rated power from the plan: three phases at the
-// rated phase EMF and current. It returns 0 when the plan does not say.
+// ratedPowerW is the plan's rated power (given in the job, or the plan's own
+// estimate), so check and the test plan speak of the same machine; failing
+// that, three phases at the rated phase EMF and current; 0 when the plan
+// does not say.
 func (c *checker) ratedPowerW() float64 {
+	if c.p.RatedPowerW > 0 {
+		return c.p.RatedPowerW
+	}
 	if c.p.EMF == nil || c.p.EMF.PhaseRMSAtRated <= 0 || c.p.RatedCurrentA <= 0 {
 		return 0
 	}
