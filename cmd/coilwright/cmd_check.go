@@ -145,7 +145,7 @@ func runCheck(cmd *cobra.Command, args []string, f *checkFlags) error {
 				return err
 			}
 		}
-		if err := recordCheck(path, r, rep); err != nil {
+		if err := recordCheck(path, p, r, rep); err != nil {
 			return err
 		}
 		fmt.Fprintf(cmd.ErrOrStderr(), "recorded in %s\n", path)
@@ -293,9 +293,11 @@ func (f *checkFlags) readings(cmd *cobra.Command) (verify.Readings, error) {
 	return r, nil
 }
 
-// recordCheck appends the readings and the verdict to the progress record.
+// recordCheck appends the readings and the verdict to the progress record:
+// one event for the whole check, then one per plan test it judged, on that
+// test's step, so the bench guide and the printed test record show them.
 // Events of no step are the check command's: the bench guide shows them apart.
-func recordCheck(path string, r verify.Readings, rep *verify.Report) error {
+func recordCheck(path string, p *plan.Plan, r verify.Readings, rep *verify.Report) error {
 	s, _, _, err := journal.Open(path, "coilwright check")
 	if err != nil {
 		return err
@@ -355,6 +357,14 @@ func recordCheck(path string, r verify.Readings, rep *verify.Report) error {
 	if err := s.Append(ev); err != nil {
 		s.Close()
 		return err
+	}
+	for _, tr := range verify.PerTest(p, r, rep) {
+		e := journal.Event{Kind: journal.Reading, Step: tr.Step, Test: tr.Test, Readings: tr.Values,
+			Verdict: string(tr.Verdict), Note: "recorded by coilwright check"}
+		if err := s.Append(e); err != nil {
+			s.Close()
+			return err
+		}
 	}
 	return s.Close()
 }

@@ -169,22 +169,40 @@ func TestCheckRecord(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	ev, torn, err := journal.Decode(data)
-	if err != nil || torn != nil || len(ev) != 3 {
-		t.Fatalf("record = %d events, %v, %v; want 3", len(ev), torn, err)
+	all, torn, err := journal.Decode(data)
+	if err != nil || torn != nil {
+		t.Fatalf("record: %v, %v", torn, err)
+	}
+	// Each check writes one summary event, then one per plan test it judged,
+	// on that test's step: resistance and balance for the two line checks,
+	// resistance alone for the open phase (no balance of an open winding).
+	var ev []journal.Event
+	perTest := map[string]int{}
+	for _, e := range all {
+		if e.Test == "check" {
+			ev = append(ev, e)
+			continue
+		}
+		perTest[e.Test]++
+		if e.Step == 0 {
+			t.Errorf("per-test event %+v has no step", e)
+		}
+	}
+	if len(ev) != 3 || perTest[plan.TestResistance] != 3 || perTest[plan.TestBalance] != 2 {
+		t.Fatalf("record = %d check events and per-test %v; want 3, resistance 3, balance 2", len(ev), perTest)
 	}
 	e := ev[0]
 	if e.Kind != journal.Reading || e.Test != "check" || e.Verdict != "pass" || e.Readings["temp"] != 21 || e.Readings["uv"] == 0 || len(e.Findings) == 0 {
 		t.Errorf("recorded event = %+v; want a check reading with uv, temp 21, pass and findings", e)
 	}
-	if ev[1].Seq != 2 {
-		t.Errorf("second event seq = %d; want 2", ev[1].Seq)
+	if ev[1].Seq <= ev[0].Seq {
+		t.Errorf("second check event seq = %d; want after %d", ev[1].Seq, ev[0].Seq)
 	}
 	if ev[2].Verdict != "fail" || !strings.Contains(ev[2].Note, "per_phase_w") {
 		t.Errorf("open-phase event = %+v; want fail with the open reading noted", ev[2])
 	}
 	st := journal.Replay(ev)
-	if st.Readings["check"].Seq != 3 {
-		t.Errorf("Replay latest check = seq %d; want 3", st.Readings["check"].Seq)
+	if st.Readings["check"].Seq != ev[2].Seq {
+		t.Errorf("Replay latest check = seq %d; want %d", st.Readings["check"].Seq, ev[2].Seq)
 	}
 }

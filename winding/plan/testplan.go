@@ -114,7 +114,7 @@ func (b *builder) tests() error {
 		What: fmt.Sprintf("Resistance of each phase with a four-wire (Kelvin) meter, the winding at room temperature; refer the readings to 20 °C by the copper coefficient. Expected at %g °C: %s (%s at 20 °C).",
 			p.AmbientC, strings.Join(expect, ", "), formatOhm(p.PhaseResistance20C)),
 		Limit: band, Unit: "%", Compare: "band", LowPercent: round1(lowPct), HighPercent: round1(highPct),
-		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band %+.1f %% .. %+.1f %%: about ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm (R ∝ 1/d²), times ±%.0f %% for the length estimate (common practice)",
+		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band %+.1f %% .. %+.1f %%: about ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm (R goes as 1/d²), times ±%.0f %% for the length estimate (common practice)",
 			lowPct, highPct, tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
 		Note: "a star winding is read line to line; check converts the three readings to phase values"})
 	ts = append(ts, Test{Name: TestBalance,
