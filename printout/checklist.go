@@ -31,10 +31,11 @@ func (b *builder) checklist() {
 	b.checkHeader(f)
 	for _, st := range steps {
 		if st.Kind == plan.StepCoil && st.Coil != nil {
-			if f.need(ckCoilH) {
+			lines := b.fromToLines(st.Coil)
+			if f.need(coilRowHeight(len(lines))) {
 				b.checkHeader(f)
 			}
-			b.coilRow(f, st)
+			b.coilRow(f, st, lines)
 			continue
 		}
 		h := b.stepRowHeight(st)
@@ -104,12 +105,33 @@ func restWords(s string) string {
 
 func (b *builder) colX(i int) float64 { return marginMM + ckCols[i].x*b.width()/186 }
 
-func (b *builder) coilRow(f *flow, st plan.Step) {
+// ckSmall is the size of the from / to and detail text of a checklist row.
+const ckSmall = sizeTiny + 0.5
+
+// fromToLines is the "from / to" cell of a coil row, wrapped to its column.
+func (b *builder) fromToLines(cs *plan.CoilStep) []string {
+	ft := cs.From
+	if cs.To != "" {
+		ft += " → " + cs.To
+	}
+	if ft == "" {
+		ft = fmt.Sprintf("slots %d and %d, %.2f m", cs.SlotBefore, cs.SlotAfter, cs.WireLengthM)
+	}
+	return wrap(clean(Regular, ft), b.colX(8)-b.colX(7)-2, ckSmall, Regular)
+}
+
+// coilRowHeight is the height of a coil row whose from / to cell takes n
+// lines: one row height up to two lines, growing a line step after that.
+func coilRowHeight(n int) float64 {
+	return ckCoilH + float64(max(0, n-2))*lineStep(ckSmall)
+}
+
+func (b *builder) coilRow(f *flow, st plan.Step, ft []string) {
 	c := f.c
 	cs := st.Coil
 	y := f.y
-	h := ckCoilH
-	base := y + h/2 + 1.1
+	h := coilRowHeight(len(ft))
+	base := y + ckCoilH/2 + 1.1
 	ph := b.phaseIndex(cs.Phase)
 	if ph >= 0 {
 		sty := b.phaseStyle(ph)
@@ -120,28 +142,29 @@ func (b *builder) coilRow(f *flow, st plan.Step) {
 	c.text(b.colX(1)+1, base, sizeBody, Bold, Ink, left, of)
 	c.text(b.colX(2)+1, base, sizeBody+1, Bold, Ink, left, fmt.Sprintf("T%d", cs.Tooth))
 	if ph >= 0 {
-		b.phaseMark(c, Point{b.colX(3) + 4, y + h/2}, 2.3, ph)
+		b.phaseMark(c, Point{b.colX(3) + 4, y + ckCoilH/2}, 2.3, ph)
 	} else {
 		c.text(b.colX(3)+1, base, sizeBody, Bold, Ink, left, cs.Phase)
 	}
 	c.text(b.colX(4)+1, base, sizeBody, Regular, Ink, left, fmt.Sprintf("%d·%d", cs.Path, cs.Position))
 	cw := cs.Direction != winding.CCW.String()
-	c.senseArrow(b.colX(5)+3.5, y+h/2, 1.8, cw, Ink, 0.32)
+	c.senseArrow(b.colX(5)+3.5, y+ckCoilH/2, 1.8, cw, Ink, 0.32)
 	word := "cw"
 	if !cw {
 		word = "ccw"
 	}
 	c.text(b.colX(5)+6.5, base, sizeBody, Bold, Ink, left, word)
 	c.text(b.colX(6)+1, base, sizeBody+1, Bold, Ink, left, fmt.Sprint(cs.Turns))
-	ft := cs.From
-	if cs.To != "" {
-		ft += " → " + cs.To
+	// one line sits on the row's baseline, two or more start above it
+	fy := base
+	if len(ft) > 1 {
+		fy = y + 1.2 + 0.75*ckSmall*ptMM
 	}
-	if ft == "" {
-		ft = fmt.Sprintf("slots %d and %d, %.2f m", cs.SlotBefore, cs.SlotAfter, cs.WireLengthM)
+	for _, l := range ft {
+		c.text(b.colX(7)+1, fy, ckSmall, Regular, Ink, left, l)
+		fy += lineStep(ckSmall)
 	}
-	c.text(b.colX(7)+1, base, sizeTiny+0.5, Regular, Ink, left, fit(ft, b.colX(8)-b.colX(7)-2, sizeTiny+0.5, Regular))
-	b.tickBoxes(f, y, h, true)
+	b.tickBoxes(f, y, ckCoilH, true)
 	c.line(marginMM, y+h, marginMM+b.width(), y+h, Pen{Width: 0.15, Colour: Faint})
 	f.y += h
 }
@@ -179,11 +202,19 @@ func (b *builder) stepText(st plan.Step) (title, detail string) {
 	return title, detail
 }
 
+// stepTextW is the width of the title and detail of a step row.
+func (b *builder) stepTextW() float64 { return b.colX(8) - b.colX(2) - 2 }
+
+// titleLines is the step title wrapped to its column.
+func (b *builder) titleLines(title string) []string {
+	return wrap(clean(Bold, title), b.stepTextW(), sizeBody, Bold)
+}
+
 func (b *builder) stepRowHeight(st plan.Step) float64 {
-	_, detail := b.stepText(st)
-	h := 6.5
+	title, detail := b.stepText(st)
+	h := 6.5 + float64(len(b.titleLines(title))-1)*lineStep(sizeBody)
 	if detail != "" {
-		h += paraHeight(b.colX(8)-b.colX(2)-2, sizeTiny+0.5, Regular, detail) + 0.8
+		h += paraHeight(b.stepTextW(), ckSmall, Regular, detail) + 0.8
 	}
 	return math.Max(h, ckCoilH)
 }
@@ -206,9 +237,13 @@ func (b *builder) stepRow(f *flow, st plan.Step, h float64) {
 		kw = string(st.Kind)
 	}
 	c.text(b.colX(1)+1, y+4.3, sizeTiny+0.5, Bold, Colour{90, 90, 90}, left, kw)
-	c.text(b.colX(2)+1, y+4.3, sizeBody, Bold, Ink, left, fit(title, b.colX(8)-b.colX(2)-2, sizeBody, Bold))
+	ty := y + 4.3
+	for _, l := range b.titleLines(title) {
+		c.text(b.colX(2)+1, ty, sizeBody, Bold, Ink, left, l)
+		ty += lineStep(sizeBody)
+	}
 	if detail != "" {
-		c.para(b.colX(2)+1, y+8, b.colX(8)-b.colX(2)-2, sizeTiny+0.5, Regular, Ink, detail)
+		c.para(b.colX(2)+1, ty-lineStep(sizeBody)+3.7, b.stepTextW(), ckSmall, Regular, Ink, detail)
 	}
 	b.tickBoxes(f, y, math.Min(h, 8), false)
 	c.line(marginMM, y+h, marginMM+b.width(), y+h, Pen{Width: 0.15, Colour: Faint})

@@ -1,6 +1,10 @@
 package printout
 
-// column is one column of a table.
+import "math"
+
+// column is one column of a table. Left-aligned columns wrap their text onto
+// as many lines as it needs and the row grows to fit; centred and
+// right-aligned columns (counts, lengths, resistances) keep one line.
 type column struct {
 	head  string
 	w     float64 // mm
@@ -8,10 +12,19 @@ type column struct {
 	face  Face
 }
 
+// wraps reports whether the column's cells wrap onto more lines.
+func (c column) wraps() bool { return c.align == left }
+
 // cellBox in a table row draws an empty tick box; cellLine a write-in line.
 const (
 	cellBox  = "\x00box"
 	cellLine = "\x00line"
+)
+
+// Table cell geometry, mm.
+const (
+	cellPadX = 1.2 // text inset from each side of a cell
+	cellLead = 1.2 // line spacing as a multiple of the font size
 )
 
 // flow is a cursor that moves down the pages of one kind, starting a new
@@ -37,9 +50,13 @@ func (f *flow) need(h float64) bool {
 	if f.y+h <= f.b.bottom() {
 		return false
 	}
+	f.newPage()
+	return true
+}
+
+func (f *flow) newPage() {
 	f.c = f.b.newPage(f.kind, f.title+" (continued)")
 	f.y = f.b.top() + 3
-	return true
 }
 
 // heading writes a section heading.
@@ -50,69 +67,155 @@ func (f *flow) heading(s string) {
 	f.y += 5
 }
 
+// cellLines breaks one cell into the lines it prints: wrapped to the column
+// in a wrapping column, one line shortened to fit otherwise.
+func cellLines(col column, v string, size float64, face Face) []string {
+	if v == "" || v == cellBox || v == cellLine {
+		return nil
+	}
+	inner := col.w - 2*cellPadX
+	if !col.wraps() {
+		return []string{fit(v, inner, size, face)}
+	}
+	return wrap(clean(face, v), inner, size, face)
+}
+
+// lineStep is the distance between baselines of wrapped cell lines.
+func lineStep(size float64) float64 { return size * ptMM * cellLead }
+
+// rowHeight is the height of a row of n lines with a one-line height of rowH.
+func rowHeight(n int, rowH, size float64) float64 {
+	return rowH + float64(max(0, n-1))*lineStep(size)
+}
+
 // table draws a table with a header row, repeating the header on each new
-// page. Each row is one line of text per cell, shortened to fit.
+// page. Text in left-aligned columns wraps and the row grows to hold it; a
+// row that would cross the bottom margin starts a new page, and a row taller
+// than a whole page is split across pages line by line.
 func (f *flow) table(cols []column, rows [][]string, rowH float64) {
+	width := 0.0
+	for _, c := range cols {
+		width += c.w
+	}
+	// header: every column wraps its heading, aligned as its cells
+	head := make([][]string, len(cols))
+	headN := 1
+	for j, col := range cols {
+		head[j] = wrap(clean(Bold, col.head), col.w-2*cellPadX, sizeSmall, Bold)
+		headN = max(headN, len(head[j]))
+	}
+	headH := rowHeight(headN, rowH, sizeSmall)
+	onPage := 0 // rows (or parts of rows) drawn below the current header
 	header := func() {
+		f.c.box(marginMM, f.y, width, headH, Pen{}, &Fill{Colour{215, 215, 215}})
 		x := float64(marginMM)
-		w := 0.0
-		for _, c := range cols {
-			w += c.w
-		}
-		f.c.box(x, f.y, w, rowH, Pen{}, &Fill{Colour{215, 215, 215}})
-		for _, col := range cols {
-			f.cell(x, col, col.head, rowH, Bold, sizeSmall)
+		for j, col := range cols {
+			f.cellText(x, col, head[j], rowH, Bold, sizeSmall)
 			x += col.w
 		}
-		f.y += rowH
+		f.y += headH
+		onPage = 0
 	}
-	f.need(2 * rowH)
+	// a table starts on a new page unless its header and first row fit
+	first := rowH
+	if len(rows) > 0 {
+		first = f.rowH(cols, rows[0], rowH)
+	}
+	f.need(headH + min(first, f.b.bottom()-f.b.top()-3-headH))
 	header()
 	for i, r := range rows {
-		if f.need(rowH) {
-			header()
-		}
-		x := float64(marginMM)
-		w := 0.0
-		for _, c := range cols {
-			w += c.w
-		}
-		if i%2 == 1 {
-			f.c.box(x, f.y, w, rowH, Pen{}, &Fill{Colour{246, 246, 246}})
-		}
+		lines := make([][]string, len(cols))
+		n := 1
 		for j, col := range cols {
-			v := ""
-			if j < len(r) {
-				v = r[j]
-			}
-			f.cell(x, col, v, rowH, col.face, sizeBody)
-			x += col.w
+			lines[j] = cellLines(col, cellAt(r, j), sizeBody, col.face)
+			n = max(n, len(lines[j]))
 		}
-		f.c.line(marginMM, f.y+rowH, x, f.y+rowH, Pen{Width: 0.15, Colour: Faint})
-		f.y += rowH
+		from := 0 // first line still to print
+		for from < n {
+			rest := n - from
+			fits := 0 // lines that fit above the bottom margin
+			for k := rest; k > 0; k-- {
+				if f.y+rowHeight(k, rowH, sizeBody) <= f.b.bottom() {
+					fits = k
+					break
+				}
+			}
+			if fits < rest && onPage > 0 {
+				// keep the row whole: start it on a new page, where one
+				// taller than a page is then split line by line
+				f.newPage()
+				header()
+				continue
+			}
+			fits = max(fits, 1) // a page shorter than one line prints it anyway
+			h := rowHeight(fits, rowH, sizeBody)
+			if i%2 == 1 {
+				f.c.box(marginMM, f.y, width, h, Pen{}, &Fill{Colour{246, 246, 246}})
+			}
+			x := float64(marginMM)
+			for j, col := range cols {
+				v := cellAt(r, j)
+				if from == 0 && (v == cellBox || v == cellLine) {
+					f.cellMark(x, col, v, rowH)
+				}
+				seg := lines[j][min(from, len(lines[j])):min(from+fits, len(lines[j]))]
+				f.cellText(x, col, seg, rowH, col.face, sizeBody)
+				x += col.w
+			}
+			f.c.line(marginMM, f.y+h, marginMM+width, f.y+h, Pen{Width: 0.15, Colour: Faint})
+			f.y += h
+			onPage++
+			from += fits
+			if from < n {
+				f.newPage()
+				header()
+			}
+		}
 	}
 	f.y += 2
 }
 
-func (f *flow) cell(x float64, col column, v string, h float64, face Face, size float64) {
+// rowH is the height row r would take.
+func (f *flow) rowH(cols []column, r []string, rowH float64) float64 {
+	n := 1
+	for j, col := range cols {
+		n = max(n, len(cellLines(col, cellAt(r, j), sizeBody, col.face)))
+	}
+	return rowHeight(n, rowH, sizeBody)
+}
+
+func cellAt(r []string, j int) string {
+	if j < len(r) {
+		return r[j]
+	}
+	return ""
+}
+
+// cellMark draws a tick box or a write-in line in the first line of a cell.
+func (f *flow) cellMark(x float64, col column, v string, h float64) {
 	switch v {
 	case cellBox:
-		s := min(4.2, h-1.6)
+		s := math.Min(4.2, h-1.6)
 		f.c.checkbox(x+col.w/2-s/2, f.y+(h-s)/2, s)
-		return
 	case cellLine:
 		f.c.line(x+1.5, f.y+h-1.3, x+col.w-1.5, f.y+h-1.3, Pen{Width: 0.2, Colour: Ink})
-		return
 	}
-	v = fit(v, col.w-2.4, size, face)
+}
+
+// cellText writes the lines of one cell from the top of the row, the first
+// baseline centred in a one-line row of height h.
+func (f *flow) cellText(x float64, col column, lines []string, h float64, face Face, size float64) {
 	base := f.y + h/2 + 0.36*size*ptMM
-	switch col.align {
-	case right:
-		f.c.text(x+col.w-1.2, base, size, face, Ink, right, v)
-	case centre:
-		f.c.text(x+col.w/2, base, size, face, Ink, centre, v)
-	default:
-		f.c.text(x+1.2, base, size, face, Ink, left, v)
+	for _, l := range lines {
+		switch col.align {
+		case right:
+			f.c.text(x+col.w-cellPadX, base, size, face, Ink, right, l)
+		case centre:
+			f.c.text(x+col.w/2, base, size, face, Ink, centre, l)
+		default:
+			f.c.text(x+cellPadX, base, size, face, Ink, left, l)
+		}
+		base += lineStep(size)
 	}
 }
 

@@ -142,7 +142,15 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	if t.Caution != "" {
 		hText += paraHeight(left0-10, sizeSmall, Bold, t.Caution) + 1
 	}
-	h := max(hText, 30)
+	rw := w - left0
+	accept := wrap(clean(Bold, expectText(t)), rw-4, sizeBody+1, Bold)
+	// the acceptance may take more lines; the reading part moves down
+	dy := float64(max(0, len(accept)-1)) * lineStep(sizeBody+1)
+	h := max(hText, 30+dy)
+	if r, ok := b.o.Readings[t.Name]; ok {
+		// a long reading pushes the pass / fail line down
+		h = max(h, dy+18.5+paraHeight(rw-4, sizeBody, Mono, readingText(r, t.Unit))+6)
+	}
 	f.need(h + 2)
 	c := f.c
 	y := f.y
@@ -157,16 +165,18 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	// right part: acceptance and reading
 	rx := x0 + left0
 	c.line(rx, y, rx, y+h, thin)
-	rw := w - left0
 	c.text(rx+2, y+4, sizeTiny, Regular, Colour{90, 90, 90}, left, "accept when")
-	c.text(rx+2, y+8.5, sizeBody+1, Bold, Ink, left, fit(expectText(t), rw-4, sizeBody+1, Bold))
-	c.line(rx, y+11, rx+rw, y+11, Pen{Width: 0.15, Colour: Faint})
-	c.text(rx+2, y+14, sizeTiny, Regular, Colour{90, 90, 90}, left, "reading")
+	for i, l := range accept {
+		c.text(rx+2, y+8.5+float64(i)*lineStep(sizeBody+1), sizeBody+1, Bold, Ink, left, l)
+	}
+	ry := y + dy // the reading part, below the acceptance
+	c.line(rx, ry+11, rx+rw, ry+11, Pen{Width: 0.15, Colour: Faint})
+	c.text(rx+2, ry+14, sizeTiny, Regular, Colour{90, 90, 90}, left, "reading")
 	if r, ok := b.o.Readings[t.Name]; ok {
-		c.para(rx+2, y+18.5, rw-4, sizeBody, Mono, Ink, readingText(r, t.Unit))
+		c.para(rx+2, ry+18.5, rw-4, sizeBody, Mono, Ink, readingText(r, t.Unit))
 	} else {
-		c.line(rx+2, y+20.5, rx+rw-2, y+20.5, Pen{Width: 0.2, Colour: Ink})
-		c.text(rx+rw-2, y+19.8, sizeSmall, Regular, Faint, right, t.Unit)
+		c.line(rx+2, ry+20.5, rx+rw-2, ry+20.5, Pen{Width: 0.2, Colour: Ink})
+		c.text(rx+rw-2, ry+19.8, sizeSmall, Regular, Faint, right, t.Unit)
 	}
 	// pass / fail
 	py := y + h - 6.5
