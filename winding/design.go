@@ -303,12 +303,11 @@ func harmonicSpectrum(l *Layout, n int, tt trigTable) []Harmonic {
 	im := make([]float64, m)
 	nc := float64(l.CoilsPerPhase)
 	out := make([]Harmonic, n)
-	for nu := 1; nu <= n; nu++ {
-		if nu > q {
-			h := out[nu-q-1]
-			out[nu-1] = Harmonic{Order: nu, WindingFactor: h.WindingFactor, MMFWindingFactor: h.MMFWindingFactor}
-			continue
-		}
+	// Orders 1..Q/2 are summed (the angles advance one order per pass);
+	// the rest follow: order Q-nu has the conjugate phasors of order nu, so
+	// the same magnitudes, order Q+nu repeats nu, and at multiples of Q the
+	// pitch factor sin(nu*pi/Q) is zero.
+	for nu := 1; nu <= min(n, q/2); nu++ {
 		for k := 0; k < m; k++ {
 			var sr, si float64
 			st, an := step[k], ang[k]
@@ -337,6 +336,17 @@ func harmonicSpectrum(l *Layout, n int, tt trigTable) []Harmonic {
 			WindingFactor:    snap(kp * math.Hypot(re[0], im[0]) / nc),
 			MMFWindingFactor: snap(kp * mmf)}
 	}
+	for nu := q/2 + 1; nu <= n; nu++ {
+		h := Harmonic{Order: nu}
+		switch r := nu % q; {
+		case r == 0:
+		case 2*r > q:
+			h.WindingFactor, h.MMFWindingFactor = out[q-r-1].WindingFactor, out[q-r-1].MMFWindingFactor
+		default:
+			h.WindingFactor, h.MMFWindingFactor = out[r-1].WindingFactor, out[r-1].MMFWindingFactor
+		}
+		out[nu-1] = h
+	}
 	return out
 }
 
@@ -352,10 +362,23 @@ func snap(x float64) float64 {
 // trigTable holds cos and sin of k*180/Q degrees for k = 0..2Q-1.
 type trigTable struct{ cos, sin []float64 }
 
+// Only the first quarter is computed; the rest follows exactly from
+// sin(pi-x) = sin x, cos(pi-x) = -cos x and sin(pi+x) = -sin x,
+// cos(pi+x) = -cos x, so mirrored angles give mirrored values.
 func newTrigTable(q int) trigTable {
 	t := trigTable{cos: make([]float64, 2*q), sin: make([]float64, 2*q)}
-	for k := range t.cos {
-		t.sin[k], t.cos[k] = math.Sincos(math.Pi * float64(k) / float64(q))
+	for k := 0; 2*k <= q; k++ {
+		sn, cs := math.Sincos(math.Pi * float64(k) / float64(q))
+		t.sin[k], t.cos[k] = sn, cs
+		if m := q - k; m != k && m < q {
+			t.sin[m], t.cos[m] = sn, -cs
+		}
+	}
+	if q >= 1 {
+		t.sin[q], t.cos[q] = 0, -1
+	}
+	for k := 0; k < q; k++ {
+		t.sin[k+q], t.cos[k+q] = -t.sin[k], -t.cos[k]
 	}
 	return t
 }

@@ -235,7 +235,14 @@ func checkLayout(t *testing.T, l *Layout) {
 	if len(l.Harmonics) != 3*max(q, p) {
 		t.Errorf("%v: %d harmonics; want %d", s, len(l.Harmonics), 3*max(q, p))
 	}
-	for _, nu := range []int{1, 2, 3, p, p + 1, 2*p + 1, 3 * p, len(l.Harmonics)} {
+	orders := []int{1, 2, 3, p, p + 1, 2*p + 1, 3 * p, q / 2, q/2 + 1, q - 1, q, q + 1, len(l.Harmonics)}
+	if q <= 36 {
+		orders = orders[:0]
+		for nu := 1; nu <= len(l.Harmonics); nu++ {
+			orders = append(orders, nu)
+		}
+	}
+	for _, nu := range orders {
 		if nu < 1 || nu > len(l.Harmonics) {
 			continue
 		}
