@@ -150,25 +150,28 @@ func (b *builder) joints(c *canvas, y float64) {
 	}
 	c.text(x0+2, y+5, sizeHead, Bold, Ink, left, title)
 	// drawing on the left
-	cx, cy := x0+36, y+h/2+2
+	cx, cy := x0+36, y+h/2+4
 	m := len(l.PhaseNames)
 	if b.p.Connection == winding.Star {
 		o := Point{cx, cy}
+		// each finish mark beside its own line near the star point, turned
+		// a little towards the next line, as large as the terminal tags
+		lift := math.Min(25, 0.3*360/float64(m))
 		for i, n := range l.PhaseNames {
 			a := 90 + float64(i)*360/float64(m)
 			st := b.phaseStyle(i)
 			pen := Pen{Width: 0.6, Colour: st.Colour, Dash: st.Dash, Round: true}
-			p0, p1 := polar(o, 6, a), polar(o, 15, a)
+			p0, p1 := polar(o, 10, a), polar(o, 18, a)
 			c.line(cx, cy, p0.X, p0.Y, pen)
 			// the phase winding as a narrow box between its finish and start
 			d0, d1 := polar(p0, 1.6, a+90), polar(p0, 1.6, a-90)
 			e0, e1 := polar(p1, 1.6, a+90), polar(p1, 1.6, a-90)
 			c.poly([]Point{d0, e0, e1, d1}, true, pen, &Fill{st.Tint})
-			t := polar(o, 22, a)
+			t := polar(o, 24.5, a)
 			c.line(p1.X, p1.Y, t.X, t.Y, pen)
 			b.terminalTag(c, t.X-5, t.Y, 10, n+"1")
-			lb := polar(o, 4.5, a+32)
-			c.label(lb.X, lb.Y, sizeTiny, Bold, Ink, n+"2")
+			lb := polar(o, 6.2, a-lift)
+			c.label(lb.X, lb.Y, sizeBody+0.5, Bold, Ink, n+"2")
 		}
 		c.circle(cx, cy, 1.6, Pen{}, &Fill{Black})
 	} else {
@@ -204,5 +207,4 @@ func (b *builder) joints(c *canvas, y float64) {
 	}
 	ty += 1
 	c.para(tx, ty, w-74, sizeBody, Regular, Ink, "• sleeve every joint, mark every lead with its terminal mark (IEC 60034-8) and check continuity of each phase before the joints are closed.")
-	_ = math.Pi
 }

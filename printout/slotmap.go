@@ -16,7 +16,8 @@ func toothAngle(k, q int) float64 { return 90 + float64(k-1)*360/float64(q) }
 // ringGeometry is the set of radii the slot map uses, in mm.
 type ringGeometry struct {
 	centre              Point
-	rTag                float64 // first ring of lead tags
+	rMax                float64 // outer limit of the drawing
+	rTag                float64 // inner edge of the lead tags
 	rNum, rArrow, rMark float64 // tooth number, sense arrow, phase mark
 	cell                float64 // size of one label cell
 	stagger             bool    // tooth numbers on two radii, odd teeth outer
@@ -25,9 +26,9 @@ type ringGeometry struct {
 }
 
 func ringFor(q int, centre Point, rMax float64) ringGeometry {
-	g := ringGeometry{centre: centre}
-	g.rTag = rMax - 9
-	g.rNum = rMax - 17.5
+	g := ringGeometry{centre: centre, rMax: rMax}
+	g.rTag = rMax - leadReach
+	g.rNum = rMax - 19.5
 	pitch := 2 * math.Pi * g.rNum / float64(q)
 	g.cell = math.Max(2.6, math.Min(7.5, pitch*0.86))
 	g.stagger = pitch < 6
@@ -51,14 +52,8 @@ func ringFor(q int, centre Point, rMax float64) ringGeometry {
 // then the legend and the title block.
 func (b *builder) slotMap() {
 	c := b.newPage(SlotMapPage, "Slot map")
-	l := b.p.Layout
-	q := l.Spec.Slots
-	titleH := 50.0
-	legendH := 14 + 5.0*float64((len(l.PhaseNames)+2)/3)
-	avail := b.bottom() - b.top() - titleH - legendH - 4
-	rMax := math.Min(avail, b.width()) / 2
-	centre := Point{b.paper.W / 2, b.top() + 2 + rMax}
-	g := ringFor(q, centre, rMax)
+	g := b.slotRing()
+	centre, rMax := g.centre, g.rMax
 
 	c.text(marginMM, b.top()+3, sizeSmall, Regular, Ink, left, "Seen from the connection (lead) end. Teeth numbered counter-clockwise.")
 	b.drawIron(c, g)
@@ -68,7 +63,20 @@ func (b *builder) slotMap() {
 
 	y := centre.Y + rMax + 2
 	y = b.slotMapLegend(c, y)
-	b.titleBlock(c, math.Max(y+2, b.bottom()-titleH), titleH)
+	b.titleBlock(c, math.Max(y+2, b.bottom()-slotMapTitleH), slotMapTitleH)
+}
+
+// slotMapTitleH is the height of the slot map's title block, mm.
+const slotMapTitleH = 50.0
+
+// slotRing sizes the stator drawing to the room the legend and the title
+// block leave on the slot map.
+func (b *builder) slotRing() ringGeometry {
+	l := b.p.Layout
+	legendH := 14 + 5.0*float64((len(l.PhaseNames)+2)/3)
+	avail := b.bottom() - b.top() - slotMapTitleH - legendH - 4
+	rMax := math.Min(avail, b.width()) / 2
+	return ringFor(l.Spec.Slots, Point{b.paper.W / 2, b.top() + 2 + rMax}, rMax)
 }
 
 // drawIron draws yoke, coils and teeth.
@@ -207,48 +215,148 @@ func (b *builder) leads() []leadTag {
 	return out
 }
 
-// drawLeads draws each lead leaving its tooth radially with a terminal tag,
-// stepping a tag outward where it would cover another.
-func (b *builder) drawLeads(c *canvas, g ringGeometry) {
+// Lead tag geometry, mm.
+const (
+	leadTagH   = 4.2 // tag height
+	leadGap    = 0.8 // clearance kept between tags and leader lines
+	leadReach  = 8.0 // tag ring: the inner edge of a tag lies this far inside rMax
+	leadMinLen = 5.0 // shortest radial run of a leader off its tooth number
+)
+
+// tagRect is a lead tag's box on the page.
+type tagRect struct{ x0, y0, x1, y1 float64 }
+
+func (r tagRect) grow(d float64) tagRect { return tagRect{r.x0 - d, r.y0 - d, r.x1 + d, r.y1 + d} }
+
+func (r tagRect) overlaps(o tagRect) bool {
+	return r.x0 < o.x1 && o.x0 < r.x1 && r.y0 < o.y1 && o.y0 < r.y1
+}
+
+// hitsSegment reports whether the segment p-q passes through r.
+func (r tagRect) hitsSegment(p, q Point) bool {
+	// Liang-Barsky clipping of the segment against the box
+	t0, t1 := 0.0, 1.0
+	dx, dy := q.X-p.X, q.Y-p.Y
+	for _, e := range [4][2]float64{{-dx, p.X - r.x0}, {dx, r.x1 - p.X}, {-dy, p.Y - r.y0}, {dy, r.y1 - p.Y}} {
+		if e[0] == 0 {
+			if e[1] < 0 {
+				return false
+			}
+			continue
+		}
+		t := e[1] / e[0]
+		if e[0] < 0 {
+			t0 = math.Max(t0, t)
+		} else {
+			t1 = math.Min(t1, t)
+		}
+		if t0 > t1 {
+			return false
+		}
+	}
+	return true
+}
+
+// segmentsCross reports whether segments a-b and c-d cross.
+func segmentsCross(a, b, c, d Point) bool {
+	side := func(p, q, r Point) float64 { return (q.X-p.X)*(r.Y-p.Y) - (q.Y-p.Y)*(r.X-p.X) }
+	return side(a, b, c)*side(a, b, d) < 0 && side(c, d, a)*side(c, d, b) < 0
+}
+
+// leadPlace is where one lead tag and its leader go.
+type leadPlace struct {
+	leadTag
+	w          float64
+	from, knee Point // leader: radial from the tooth number to the knee...
+	at         Point // ...then on to the tag centre
+	r          tagRect
+}
+
+// placeLeads puts each lead tag on a ring outside the tooth numbers. A
+// leader runs radially out from the tooth number to a knee, then on to its
+// tag; a tag that would cover another, or a leader that would cross another
+// tag or leader, moves round the ring (then out a step) to the nearest clear
+// place.
+func (b *builder) placeLeads(g ringGeometry) []leadPlace {
 	q := b.p.Layout.Spec.Slots
-	type rect struct{ x0, y0, x1, y1 float64 }
-	var placed []rect
 	size := sizeSmall + 0.5
+	rFrom := g.rNum + g.cell*0.5
+	if g.stagger {
+		rFrom = g.rNum + g.cell*1.35
+	}
+	rEdge := math.Max(rFrom+leadMinLen+1.5, g.rTag)
+	var out []leadPlace
 	for _, ld := range b.leads() {
 		a := toothAngle(ld.tooth, q)
 		w := textWidth(Bold, size, ld.mark) + 2.4
-		h := 4.2
-		var r rect
-		var at Point
-		for lvl := 0; lvl < 6; lvl++ {
-			// two radii, then the same radii stepped sideways either way
-			at = polar(g.centre, g.rTag+float64(lvl%2)*5, a)
-			if lvl >= 2 {
-				side := (w + 1.5) * float64(1-2*((lvl/2)%2))
-				at = polar(at, side, a+90)
-			}
-			r = rect{at.X - w/2, at.Y - h/2, at.X + w/2, at.Y + h/2}
-			clash := false
-			for _, p := range placed {
-				if r.x0 < p.x1+0.6 && p.x0 < r.x1+0.6 && r.y0 < p.y1+0.6 && p.y0 < r.y1+0.6 {
-					clash = true
+		from := polar(g.centre, rFrom, a)
+		knee := polar(g.centre, rEdge-1.5, a)
+		best := leadPlace{leadTag: ld, w: w, from: from, knee: knee}
+		found := false
+		// try the tooth's own angle first, then ever further either side,
+		// on the tag ring and a step outside it
+		for step := 0; step <= 60 && !found; step++ {
+			for _, out2 := range []float64{0, leadTagH + 1.2} {
+				d := float64((step+1)/2) * 1.5 * float64(1-2*(step%2)) // 0, +1.5, -1.5, +3, ...
+				ta := a + d*180/(math.Pi*rEdge)
+				dir := polar(Point{}, 1, ta)
+				// centre the tag so its edge nearest the ring centre lies on the ring
+				ext := math.Abs(dir.X)*w/2 + math.Abs(dir.Y)*leadTagH/2
+				at := polar(g.centre, rEdge+out2+ext, ta)
+				r := tagRect{at.X - w/2, at.Y - leadTagH/2, at.X + w/2, at.Y + leadTagH/2}
+				if b.leadClear(out, r, from, knee, at) {
+					best.at, best.r, found = at, r, true
 					break
 				}
-			}
-			if !clash {
-				break
+				if step == 0 && out2 == 0 {
+					best.at, best.r = at, r // fallback when nothing is clear
+				}
 			}
 		}
-		placed = append(placed, r)
-		st := b.phaseStyle(ld.phase)
-		from := polar(g.centre, g.rNum+g.cell*0.45, a)
-		if g.stagger {
-			from = polar(g.centre, g.rNum+g.cell*1.45, a)
+		out = append(out, best)
+	}
+	return out
+}
+
+// leadClear reports whether a tag at r with its leader from-knee-at keeps
+// clear of the tags and leaders already placed.
+func (b *builder) leadClear(placed []leadPlace, r tagRect, from, knee, at Point) bool {
+	for _, p := range placed {
+		if r.grow(leadGap).overlaps(p.r) {
+			return false
 		}
-		// lead line to the tag edge
-		c.line(from.X, from.Y, at.X, at.Y, Pen{Width: 0.45, Colour: st.Colour, Dash: st.Dash, Round: true})
-		c.box(r.x0, r.y0, w, h, Pen{Width: 0.35, Colour: Ink}, &Fill{White})
-		c.label(at.X, at.Y, size, Bold, Ink, ld.mark)
+		if p.r.grow(leadGap).hitsSegment(from, knee) || p.r.grow(leadGap).hitsSegment(knee, at) {
+			return false
+		}
+		if r.grow(leadGap).hitsSegment(p.from, p.knee) || r.grow(leadGap).hitsSegment(p.knee, p.at) {
+			return false
+		}
+		for _, s := range [][2]Point{{p.from, p.knee}, {p.knee, p.at}} {
+			if segmentsCross(from, knee, s[0], s[1]) || segmentsCross(knee, at, s[0], s[1]) {
+				return false
+			}
+		}
+	}
+	return true
+}
+
+// drawLeads draws each lead as a solid leader from a dot at its tooth
+// number out to a terminal tag; leaders first, so tags sit on top.
+func (b *builder) drawLeads(c *canvas, g ringGeometry) {
+	places := b.placeLeads(g)
+	for _, p := range places {
+		col := b.phaseStyle(p.phase).Colour
+		if col == (Colour{128, 128, 128}) {
+			col = Colour{90, 90, 90} // the grey phase a shade darker so its lead reads
+		}
+		pen := Pen{Width: 0.5, Colour: col, Round: true}
+		c.circle(p.from.X, p.from.Y, 0.75, Pen{}, &Fill{col})
+		c.poly([]Point{p.from, p.knee, p.at}, false, pen, nil)
+	}
+	size := sizeSmall + 0.5
+	for _, p := range places {
+		c.box(p.r.x0, p.r.y0, p.w, leadTagH, Pen{Width: 0.35, Colour: Ink}, &Fill{White})
+		c.label(p.at.X, p.at.Y, size, Bold, Ink, p.mark)
 	}
 }
 
