@@ -153,7 +153,7 @@ func (b *builder) coilRow(f *flow, st plan.Step, ft []string) {
 	if !cw {
 		word = "ccw"
 	}
-	c.text(b.colX(5)+6.5, base, sizeBody, Bold, Ink, left, word)
+	c.text(b.colX(5)+7.6, base, sizeBody, Bold, Ink, left, word)
 	c.text(b.colX(6)+1, base, sizeBody+1, Bold, Ink, left, fmt.Sprint(cs.Turns))
 	// one line sits on the row's baseline, two or more start above it
 	fy := base

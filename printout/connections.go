@@ -101,8 +101,13 @@ func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int,
 			cl, _ := l.CoilOn(tooth)
 			c.box(x, mid-conBoxH/2, conBoxW, conBoxH, pen, &Fill{st.Tint})
 			c.label(x+conBoxW/2, mid-3, sizeBody, Bold, Ink, fmt.Sprintf("T%d", tooth))
-			c.senseArrow(x+conBoxW/2-2.6, mid+2.5, 1.5, cl.Direction == winding.CW, Ink, 0.3)
-			c.text(x+conBoxW/2-0.4, mid+3.6, sizeTiny, Regular, Ink, left, cl.Direction.String())
+			// sense arrow and its word centred as a group, a clear gap
+			// between the arrow head and the word
+			word := cl.Direction.String()
+			gw := 2*1.5 + 1.6 + textWidth(Regular, sizeTiny, word)
+			ax := x + (conBoxW-gw)/2 + 1.5
+			c.senseArrow(ax, mid+2.5, 1.5, cl.Direction == winding.CW, Ink, 0.3)
+			c.text(ax+1.5+1.6, mid+3.6, sizeTiny, Regular, Ink, left, word)
 			x += conBoxW
 			if k < len(ch.Jumpers) && (k+1 < end || end < len(ch.Teeth)) {
 				j := ch.Jumpers[k]

@@ -5,6 +5,8 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"unicode"
+	"unicode/utf8"
 
 	"coilwright/winding/plan"
 )
@@ -131,11 +133,12 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	x0 := float64(marginMM)
 	left0 := w * 0.58
 	what := t.What
-	if t.Voltage > 0 {
-		what = strings.TrimSuffix(what, ".") + fmt.Sprintf(". Test voltage %.0f V.", t.Voltage)
+	if v := fmt.Sprintf("%.0f V", t.Voltage); t.Voltage > 0 && !strings.Contains(what, v) {
+		what = strings.TrimSuffix(what, ".") + ". Test voltage " + v + "."
 	}
 	if t.Note != "" {
-		what += " " + t.Note
+		// the note is a sentence of its own
+		what = strings.TrimSuffix(what, ".") + ". " + sentence(t.Note)
 	}
 	src := "source: " + t.Source
 	hText := 11 + paraHeight(left0-4, sizeSmall, Regular, what) + paraHeight(left0-4, sizeTiny, Regular, src)
@@ -197,4 +200,13 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	c.text(rx+36, py+3.3, sizeSmall, Regular, Ink, left, "initials")
 	c.line(rx+47, py+3.8, rx+rw-2, py+3.8, Pen{Width: 0.2, Colour: Ink})
 	f.y += h + 2
+}
+
+// sentence starts s with a capital letter.
+func sentence(s string) string {
+	r, n := utf8.DecodeRuneInString(s)
+	if r == utf8.RuneError {
+		return s
+	}
+	return string(unicode.ToUpper(r)) + s[n:]
 }
