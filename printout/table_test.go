@@ -148,3 +148,21 @@ func TestDemoCellsWhole(t *testing.T) {
 		}
 	}
 }
+
+// TestFixtureTextsApart checks every page of every fixture pack, on both
+// paper sizes, for text laid over text.
+func TestFixtureTextsApart(t *testing.T) {
+	for _, fx := range fixtures {
+		for _, paper := range PaperSizes {
+			pk, err := Build(fixturePlan(t, fx.spec, fx.conn), Options{Paper: paper})
+			if err != nil {
+				t.Fatal(err)
+			}
+			for _, pg := range pk.Pages {
+				if o := overlappingTexts(pg); len(o) > 0 {
+					t.Errorf("%s %s page %q: %d text runs overlap, first %s", fx.name, paper.Name, pg.Title, len(o), o[0])
+				}
+			}
+		}
+	}
+}
