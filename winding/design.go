@@ -3,6 +3,7 @@ package winding
 import (
 	"fmt"
 	"math"
+	"slices"
 )
 
 // Design lays out the winding for a Spec by the star of slots and analyses it.
@@ -203,18 +204,23 @@ func (st *star) renumberFromRunStart() {
 			break
 		}
 	}
-	flip := 1
-	if st.sign[start] < 0 {
-		flip = -1
+	rotateLeft(st.phase, start)
+	rotateLeft(st.sign, start)
+	if st.sign[0] < 0 {
+		for i := range st.sign {
+			st.sign[i] = -st.sign[i]
+		}
 	}
-	ph := make([]int, q)
-	sg := make([]int, q)
-	for i := 0; i < q; i++ {
-		from := (i + start) % q
-		ph[i] = st.phase[from]
-		sg[i] = st.sign[from] * flip
+}
+
+// rotateLeft moves xs[k] to xs[0] in place (three reversals).
+func rotateLeft(xs []int, k int) {
+	if k == 0 {
+		return
 	}
-	st.phase, st.sign = ph, sg
+	slices.Reverse(xs[:k])
+	slices.Reverse(xs[k:])
+	slices.Reverse(xs)
 }
 
 func (st *star) layout() *Layout {

@@ -2,7 +2,7 @@ package winding
 
 import (
 	"runtime"
-	"sort"
+	"slices"
 	"sync"
 	"sync/atomic"
 )
@@ -89,7 +89,15 @@ func Pairs(sw Sweep) ([]Summary, error) {
 	for _, r := range results {
 		out = append(out, r...)
 	}
-	sort.SliceStable(out, func(i, j int) bool { return better(out[i], out[j]) })
+	slices.SortStableFunc(out, func(a, b Summary) int {
+		switch {
+		case better(a, b):
+			return -1
+		case better(b, a):
+			return 1
+		}
+		return 0
+	})
 	return out, nil
 }
 

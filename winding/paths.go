@@ -1,5 +1,9 @@
 package winding
 
+import "sync"
+
+var scratchInts = sync.Pool{New: func() any { return new([]int) }}
+
 // feasiblePaths lists every number of parallel paths a for which the coils of
 // each phase split into a groups of identical make-up: the same count of coils
 // at each signed phasor angle. Such paths have the same EMF phasor at the
@@ -11,7 +15,15 @@ func feasiblePaths(l *Layout) []int {
 	m := l.Spec.Phases
 	n := l.CoilsPerPhase
 	q2 := 2 * l.Spec.Slots
-	counts := make([]int, m*q2) // coils by phase*2Q + signed angle
+	// coils by phase*2Q + signed angle; a scratch slice from a pool, as
+	// sweeps call this thousands of times
+	buf := scratchInts.Get().(*[]int)
+	defer scratchInts.Put(buf)
+	if cap(*buf) < m*q2 {
+		*buf = make([]int, m*q2)
+	}
+	counts := (*buf)[:m*q2]
+	clear(counts)
 	for _, c := range l.Coils {
 		counts[c.Phase*q2+c.angle]++
 	}

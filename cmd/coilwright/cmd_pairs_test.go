@@ -1,9 +1,12 @@
 package main
 
 import (
+	"bytes"
 	"encoding/json"
 	"math"
 	"testing"
+
+	"coilwright/winding"
 )
 
 func gcdTest(a, b int) int {
@@ -90,5 +93,30 @@ func TestPairsFilters(t *testing.T) {
 				t.Errorf("pair lacks %q", k)
 			}
 		}
+	}
+}
+
+// The hand-written encoder of pairs --json must give exactly what
+// encoding/json (the reference) gives for the same values, including the
+// float forms it picks.
+func TestPairsJSONMatchesEncodingJSON(t *testing.T) {
+	ps, err := winding.Pairs(winding.Sweep{MaxSlots: 60, MaxPoles: 60, Layers: []int{1, 2}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	in := pairsJSON(ps)
+	in = append(in, pairJSON{Slots: 1, WindingFactor: 1e-7, Q: "1/2"}, pairJSON{WindingFactor: 0, ParallelPaths: []int{}},
+		pairJSON{WindingFactor: 1e21}, pairJSON{WindingFactor: 0.1 + 0.2}, pairJSON{WindingFactor: 5e-324})
+	var want bytes.Buffer
+	if err := writeJSON(&want, in); err != nil {
+		t.Fatal(err)
+	}
+	if got := string(appendPairsJSON(nil, in)); got != want.String() {
+		t.Errorf("appendPairsJSON differs from encoding/json:\n%s", firstDiff(want.String(), got))
+	}
+	var empty bytes.Buffer
+	_ = writeJSON(&empty, []pairJSON{})
+	if got := string(appendPairsJSON(nil, nil)); got != empty.String() {
+		t.Errorf("appendPairsJSON(nil) = %q; want %q", got, empty.String())
 	}
 }
