@@ -115,6 +115,19 @@ func writeLayoutText(w io.Writer, l *winding.Layout) {
 		fmt.Fprintf(w, "  %s path %d: %s  %s  %s\n", l.PhaseNames[ch.Phase], ch.Path, ch.Start, b.String(), ch.Finish)
 	}
 	fmt.Fprintln(w, "  (-(n)-> is a jumper spanning n teeth)")
+	fmt.Fprintln(w)
+	fmt.Fprintln(w, "Terminals (parallel paths joined first: all path starts at X1, all finishes at X2)")
+	for _, c := range []winding.Connection{winding.Star, winding.Delta} {
+		var parts []string
+		for _, j := range winding.Joints(c, l.PhaseNames) {
+			parts = append(parts, strings.Join(j.Marks, "+"))
+		}
+		line := "star point " + parts[0] + ", line leads " + strings.Join(startMarks(l.PhaseNames), " ")
+		if c == winding.Delta {
+			line = "corners " + strings.Join(parts, ", ") + ", each a line lead"
+		}
+		fmt.Fprintf(w, "  %-6s %s\n", c, line)
+	}
 	if len(l.Warnings) > 0 {
 		fmt.Fprintln(w)
 		fmt.Fprintln(w, "Warnings")
@@ -122,6 +135,14 @@ func writeLayoutText(w io.Writer, l *winding.Layout) {
 			fmt.Fprintf(w, "  ! %s\n", wr.Message)
 		}
 	}
+}
+
+func startMarks(names []string) []string {
+	out := make([]string, len(names))
+	for i, n := range names {
+		out[i] = n + "1"
+	}
+	return out
 }
 
 // strongestHarmonics returns the n orders of largest MMF winding factor, in
