@@ -1,11 +1,10 @@
 package printout
 
 import (
-	"os"
-	"path/filepath"
 	"testing"
 
 	"coilwright/winding/job"
+	"coilwright/winding/job/jobtest"
 	"coilwright/winding/plan"
 )
 
@@ -13,15 +12,7 @@ import (
 // the plan into the page model: any job the plan accepts must lay out without
 // a panic, with every page inside the sheet.
 func FuzzBuildPack(f *testing.F) {
-	seeds, _ := filepath.Glob(filepath.Join("..", "testdata", "job", "*.toml"))
-	if len(seeds) == 0 {
-		f.Fatal("no seed jobs under testdata/job")
-	}
-	for _, s := range seeds {
-		data, err := os.ReadFile(s)
-		if err != nil {
-			f.Fatal(err)
-		}
+	for _, data := range jobtest.Seeds(f) {
 		f.Add(data)
 	}
 	f.Fuzz(func(t *testing.T, data []byte) {

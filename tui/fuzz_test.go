@@ -1,13 +1,12 @@
 package tui
 
 import (
-	"os"
-	"path/filepath"
 	"testing"
 
 	tea "github.com/charmbracelet/bubbletea"
 
 	"coilwright/winding/job"
+	"coilwright/winding/job/jobtest"
 	"coilwright/winding/plan"
 )
 
@@ -15,15 +14,7 @@ import (
 // through the plan into the guide: every screen, at a range of terminal sizes
 // and after a few keys, must render without a panic.
 func FuzzGuideScreens(f *testing.F) {
-	seeds, _ := filepath.Glob(filepath.Join("..", "testdata", "job", "*.toml"))
-	if len(seeds) == 0 {
-		f.Fatal("no seed jobs under testdata/job")
-	}
-	for i, s := range seeds {
-		data, err := os.ReadFile(s)
-		if err != nil {
-			f.Fatal(err)
-		}
+	for i, data := range jobtest.Seeds(f) {
 		f.Add(data, uint8(20+10*i), uint8(5+5*i))
 	}
 	f.Fuzz(func(t *testing.T, data []byte, w, h uint8) {

@@ -2,11 +2,11 @@ package job_test
 
 import (
 	"errors"
-	"os"
 	"path/filepath"
 	"testing"
 
 	"coilwright/winding/job"
+	"coilwright/winding/job/jobtest"
 	"coilwright/winding/plan"
 )
 
@@ -14,15 +14,7 @@ import (
 // testdata/job/. It must never panic: every input is either a valid job (which
 // then builds a plan or is refused with a FieldError) or a *job.FieldError.
 func FuzzParse(f *testing.F) {
-	seeds, err := filepath.Glob(filepath.Join("..", "..", "testdata", "job", "*.toml"))
-	if err != nil || len(seeds) == 0 {
-		f.Fatalf("no seed files under testdata/job (%v)", err)
-	}
-	for _, s := range seeds {
-		data, err := os.ReadFile(s)
-		if err != nil {
-			f.Fatal(err)
-		}
+	for _, data := range jobtest.Seeds(f) {
 		f.Add(data)
 	}
 	f.Fuzz(func(t *testing.T, data []byte) {
@@ -68,7 +60,7 @@ func TestSeedFiles(t *testing.T) {
 		{"mistyped_value.toml", "winding.slots"},
 	}
 	for _, c := range cases {
-		j, err := job.Load(filepath.Join("..", "..", "testdata", "job", c.file))
+		j, err := job.Load(filepath.Join(jobtest.Dir(t), c.file))
 		if c.field == "" {
 			if err != nil {
 				t.Errorf("Load(%s) = %v; want a valid job", c.file, err)

@@ -1,0 +1,43 @@
+// Package jobtest gives tests the job files kept under testdata/job/ (the
+// seed corpus of the fuzz tests that start from a job file), wherever in the
+// tree the test lives. It is for tests only.
+package jobtest
+
+import (
+	"os"
+	"path/filepath"
+	"runtime"
+	"sort"
+	"testing"
+)
+
+// Dir is testdata/job/ of the repository, found from this file's own place.
+func Dir(tb testing.TB) string {
+	tb.Helper()
+	_, file, _, ok := runtime.Caller(0)
+	if !ok {
+		tb.Fatal("jobtest: cannot tell where the source tree is")
+	}
+	// file is .../winding/job/jobtest/jobtest.go
+	return filepath.Join(filepath.Dir(file), "..", "..", "..", "testdata", "job")
+}
+
+// Seeds returns the contents of every testdata/job/*.toml, in name order; it
+// fails the test when there are none.
+func Seeds(tb testing.TB) [][]byte {
+	tb.Helper()
+	names, err := filepath.Glob(filepath.Join(Dir(tb), "*.toml"))
+	if err != nil || len(names) == 0 {
+		tb.Fatalf("jobtest: no job files under %s (%v)", Dir(tb), err)
+	}
+	sort.Strings(names)
+	out := make([][]byte, 0, len(names))
+	for _, n := range names {
+		data, err := os.ReadFile(n)
+		if err != nil {
+			tb.Fatal(err)
+		}
+		out = append(out, data)
+	}
+	return out
+}
