@@ -86,6 +86,12 @@ func EntriesOf(p *plan.Plan, events []journal.Event) []Entry {
 			continue
 		}
 		e := Entry{Step: ev.Step, Turns: ev.Turns, Note: ev.Note, At: ev.Time, Verdict: ev.Verdict}
+		if !fitsPlan(p, ev) {
+			// The job changed since this was recorded (another tooth or
+			// test now stands at that step): keep it out, and let the
+			// guide count it among the entries that do not match.
+			e.Step = 0
+		}
 		switch ev.Kind {
 		case journal.Turns:
 			e.Kind = EntryTurns
@@ -116,6 +122,23 @@ func EntriesOf(p *plan.Plan, events []journal.Event) []Entry {
 		out = append(out, e)
 	}
 	return out
+}
+
+// fitsPlan reports whether an event still belongs to the step it names: a
+// coil event to a coil step on the same tooth, a reading to a test step of
+// the same test. Events that carry neither are taken on trust.
+func fitsPlan(p *plan.Plan, ev journal.Event) bool {
+	if p == nil || ev.Step < 1 || ev.Step > len(p.Steps) {
+		return true // out of range: the guide's own check reports it
+	}
+	s := p.Steps[ev.Step-1]
+	if ev.Tooth != 0 && (s.Coil == nil || s.Coil.Tooth != ev.Tooth) {
+		return false
+	}
+	if ev.Kind == journal.Reading && ev.Test != "" && s.Test != ev.Test {
+		return false
+	}
+	return true
 }
 
 // testNamed finds a test of the plan by name.

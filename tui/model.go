@@ -97,7 +97,7 @@ func New(o Options) *Model {
 		}
 	}
 	if m.ignored > 0 {
-		m.notice = strings.TrimSpace(m.notice + fmt.Sprintf(" %d entries of the record do not match this plan and were left out.", m.ignored))
+		m.notice = strings.TrimSpace(m.notice + fmt.Sprintf(" %d entries of the record do not match this plan (was the job changed?) and were left out.", m.ignored))
 	}
 	m.guide = newGuide(c)
 	m.overview = newOverview(c)

@@ -8,6 +8,7 @@ import (
 
 	tea "github.com/charmbracelet/bubbletea"
 
+	"coilwright/winding/journal"
 	"coilwright/winding/plan"
 )
 
@@ -378,5 +379,35 @@ func TestAllSizesAllScreensNoPanic(t *testing.T) {
 			}
 		}
 		keys(t, m, "esc")
+	}
+}
+
+// A record made for one plan, replayed on a plan whose steps changed (the
+// job was edited: other teeth now stand at those steps), leaves out the coil
+// entries that no longer fit and says so, instead of marking the wrong coils
+// wound.
+func TestRecordOfAChangedJob(t *testing.T) {
+	m, rec := newTest(t, 80, 24)
+	windCoil(t, m)
+	windCoil(t, m)
+	var events []journal.Event
+	for _, e := range rec.all() {
+		events = append(events, EventOf(m.c.plan, e))
+	}
+	// 9/6 winds U on teeth 1, 4, 7: the first coil still fits, the second
+	// (tooth 2 in the record) does not.
+	other := handPlan(t, 9, 6, 2)
+	m2 := New(Options{Plan: other, History: EntriesOf(other, events), Now: fixedNow})
+	drive(t, m2, tea.WindowSizeMsg{Width: 80, Height: 24})
+	if got := m2.c.prog.coilsDone(other.Steps); got != 1 {
+		t.Errorf("coils done on the changed plan = %d; want 1", got)
+	}
+	if m2.ignored == 0 || !strings.Contains(plain(m2), "do not match") {
+		t.Errorf("ignored %d; screen lacks the notice:\n%s", m2.ignored, plain(m2))
+	}
+	// The same record on its own plan still resumes.
+	m3 := New(Options{Plan: m.c.plan, History: EntriesOf(m.c.plan, events), Now: fixedNow})
+	if got := m3.c.prog.coilsDone(m.c.plan.Steps); got != 2 || m3.ignored != 0 {
+		t.Errorf("own plan: coils done %d, ignored %d; want 2, 0", got, m3.ignored)
 	}
 }
