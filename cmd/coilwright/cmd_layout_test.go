@@ -75,6 +75,8 @@ func TestLayoutRefusals(t *testing.T) {
 		{[]string{"pairs", "--max-slots", "12"}, "--max-poles is required"},
 		{[]string{"pairs", "--max-slots", "12", "--max-poles", "12", "--layers", "3"}, "--layers"},
 		{[]string{"pairs", "--max-slots", "0", "--max-poles", "12"}, "max-slots"},
+		{[]string{"layuot", "--slots", "12"}, "unknown command"},
+		{[]string{"layout", "--slots", "12", "--poles", "10", "--colour"}, "unknown flag"},
 	}
 	for _, c := range cases {
 		code, out, errOut := runCLI(t, c.args...)

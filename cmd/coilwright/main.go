@@ -8,6 +8,7 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"strings"
 
 	"github.com/spf13/cobra"
 )
@@ -30,12 +31,24 @@ func run(args []string, stdout, stderr io.Writer) int {
 	if err == nil {
 		return 0
 	}
-	fmt.Fprintf(stderr, "coilwright: %v\n", err)
+	fmt.Fprintf(stderr, "coilwright: %s\n", oneLine(err.Error()))
 	var ue *usageError
-	if errors.As(err, &ue) {
+	// cobra reports a mistyped command name with a plain error
+	if errors.As(err, &ue) || strings.HasPrefix(err.Error(), "unknown command") {
 		return 2
 	}
 	return 1
+}
+
+// oneLine folds a multi-line message (cobra's "Did you mean this?" list)
+// into one line, so every refusal is a single line on stderr.
+func oneLine(msg string) string {
+	msg = strings.TrimSpace(msg)
+	if !strings.Contains(msg, "\n") {
+		return msg
+	}
+	msg = strings.Replace(msg, "\n\nDid you mean this?\n", "; did you mean: ", 1)
+	return strings.Join(strings.Fields(msg), " ")
 }
 
 // usageError marks an error caused by what the user gave (exit status 2).
