@@ -202,3 +202,10 @@ func (c *canvas) warningSign(x, y, s float64) {
 	c.box(x-s*0.045, y+h*0.32, s*0.09, h*0.38, Pen{}, &Fill{Black})
 	c.circle(x, y+h*0.8, s*0.055, Pen{}, &Fill{Black})
 }
+
+// tick draws the mark of a done step in the tick box of side s at x, y: a
+// stroked check mark, since the Go fonts have no check mark glyph.
+func (c *canvas) tick(x, y, s float64) {
+	c.poly([]Point{{x + 0.2*s, y + 0.52*s}, {x + 0.42*s, y + 0.76*s}, {x + 0.8*s, y + 0.22*s}}, false,
+		Pen{Width: 0.16 * s, Colour: Ink, Round: true}, nil)
+}

@@ -12,6 +12,7 @@ import (
 const (
 	ckCoilH = 7.2
 	ckBoxS  = 4.2
+	ckHeadH = 5.5 // the column header
 )
 
 // checklist writes one row per bench step in the plan's order: a coil row
@@ -28,21 +29,13 @@ func (b *builder) checklist() {
 	if len(steps) == 0 {
 		steps = coilSteps(b.p)
 	}
+	rec := matchProgress(b.o.Progress, steps)
+	if rec != nil {
+		b.progressSummary(f, rec, steps)
+	}
 	b.checkHeader(f)
 	for _, st := range steps {
-		if st.Kind == plan.StepCoil && st.Coil != nil {
-			lines := b.fromToLines(st.Coil)
-			if f.need(coilRowHeight(len(lines))) {
-				b.checkHeader(f)
-			}
-			b.coilRow(f, st, lines)
-			continue
-		}
-		h := b.stepRowHeight(st)
-		if f.need(h) {
-			b.checkHeader(f)
-		}
-		b.stepRow(f, st, h)
+		b.checkRow(f, st, rec)
 	}
 	// closing sign-off
 	f.need(22)
@@ -72,7 +65,7 @@ var ckCols = []struct {
 
 func (b *builder) checkHeader(f *flow) {
 	w := b.width()
-	f.c.box(marginMM, f.y, w, 5.5, Pen{}, &Fill{Colour{215, 215, 215}})
+	f.c.box(marginMM, f.y, w, ckHeadH, Pen{}, &Fill{Colour{215, 215, 215}})
 	for _, col := range ckCols {
 		x := marginMM + col.x*w/186
 		if col.x >= 150 {
@@ -82,7 +75,7 @@ func (b *builder) checkHeader(f *flow) {
 		}
 		f.c.text(x+1, f.y+3.8, sizeTiny+0.5, Bold, Ink, left, col.head)
 	}
-	f.y += 5.5
+	f.y += ckHeadH
 }
 
 func firstWord(s string) string {
@@ -126,16 +119,17 @@ func coilRowHeight(n int) float64 {
 	return ckCoilH + float64(max(0, n-2))*lineStep(ckSmall)
 }
 
-func (b *builder) coilRow(f *flow, st plan.Step, ft []string) {
+// coilRow draws a coil row of height h at f.y; band is the height of its
+// phase band (the row and the notes under it on this page). It leaves f.y.
+func (b *builder) coilRow(f *flow, st plan.Step, ft []string, band float64, sp *StepProgress) {
 	c := f.c
 	cs := st.Coil
 	y := f.y
-	h := coilRowHeight(len(ft))
 	base := y + ckCoilH/2 + 1.1
 	ph := b.phaseIndex(cs.Phase)
 	if ph >= 0 {
 		sty := b.phaseStyle(ph)
-		c.box(marginMM, y+0.4, 1.6, h-0.8, Pen{}, &Fill{sty.Colour})
+		c.box(marginMM, y+0.4, 1.6, band-0.8, Pen{}, &Fill{sty.Colour})
 	}
 	c.text(b.colX(0)+2.5, base, sizeSmall, Regular, Ink, left, fmt.Sprint(st.Index))
 	of := fmt.Sprintf("%d of %d", cs.Order, cs.Of)
@@ -164,24 +158,51 @@ func (b *builder) coilRow(f *flow, st plan.Step, ft []string) {
 		c.text(b.colX(7)+1, fy, ckSmall, Regular, Ink, left, l)
 		fy += lineStep(ckSmall)
 	}
-	b.tickBoxes(f, y, ckCoilH, true)
-	c.line(marginMM, y+h, marginMM+b.width(), y+h, Pen{Width: 0.15, Colour: Faint})
-	f.y += h
+	b.tickBoxes(f, y, ckCoilH, cs, sp)
 }
 
-// tickBoxes draws the boxes at the right of a row: two for a coil, one for
-// any other step, and the initials space.
-func (b *builder) tickBoxes(f *flow, y, h float64, coil bool) {
+// tickBoxes draws the boxes at the right of a row: two for a coil (cs not
+// nil), one for any other step, and the initials space. A step the record
+// has done (sp not nil) gets its box ticked and the date above the initials
+// line, and a coil the turns counted written in their box.
+func (b *builder) tickBoxes(f *flow, y, h float64, cs *plan.CoilStep, sp *StepProgress) {
 	c := f.c
 	cy := y + (h-ckBoxS)/2
-	if coil {
-		c.checkbox(b.colX(8)+5-ckBoxS/2, cy, ckBoxS)
-		c.checkbox(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
-	} else {
-		c.checkbox(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
+	if cs != nil {
+		if sp != nil && sp.Turns > 0 {
+			b.countCell(c, y, h, sp.Turns, cs.Turns)
+		} else {
+			c.checkbox(b.colX(8)+5-ckBoxS/2, cy, ckBoxS)
+		}
+	}
+	c.checkbox(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
+	if sp != nil {
+		c.tick(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
 	}
 	x := b.colX(10)
 	c.line(x+1, y+h-1.4, marginMM+b.width()-0.5, y+h-1.4, Pen{Width: 0.2, Colour: Ink})
+	if sp != nil && !sp.When.IsZero() {
+		c.text(x+1, y+2.9, sizeTiny, Regular, Ink, left, dateOf(sp.When))
+	}
+}
+
+// countCell writes the turns counted on a done coil in its box. A count that
+// is not the plan's is printed white on black with the planned count under
+// it, so it stands out on a monochrome printer too.
+func (b *builder) countCell(c *canvas, y, h float64, got, want int) {
+	cx := b.colX(8) + 5
+	s := fmt.Sprint(got)
+	tw := textWidth(Bold, sizeBody+1, s)
+	bw := math.Min(math.Max(ckBoxS, tw+1.6), b.colX(9)-b.colX(8)-0.6)
+	if got == want {
+		c.box(cx-bw/2, y+(h-ckBoxS)/2, bw, ckBoxS, Pen{Width: 0.3, Colour: Ink}, &Fill{White})
+		c.text(cx, y+h/2+1.2, sizeBody+1, Bold, Ink, centre, s)
+		return
+	}
+	const bh = 3.9
+	c.box(cx-bw/2, y+0.6, bw, bh, Pen{Width: 0.3, Colour: Ink}, &Fill{Ink})
+	c.text(cx, y+0.6+bh/2+1.15, sizeBody+1, Bold, White, centre, s)
+	c.text(cx, y+h-0.75, sizeTiny, Bold, Ink, centre, fmt.Sprintf("plan %d", want))
 }
 
 func (b *builder) stepText(st plan.Step) (title, detail string) {
@@ -224,11 +245,14 @@ var kindWords = map[plan.StepKind]string{
 	plan.StepTerminal: "leads", plan.StepJoin: "join", plan.StepTest: "test",
 }
 
-func (b *builder) stepRow(f *flow, st plan.Step, h float64) {
+// stepRow draws the row of a step that is not a coil, of height h at f.y;
+// band is the height of its panel (the row and the notes under it on this
+// page). It leaves f.y.
+func (b *builder) stepRow(f *flow, st plan.Step, h, band float64, sp *StepProgress) {
 	c := f.c
 	y := f.y
 	if st.Kind == plan.StepPrepare || st.Kind == plan.StepSeparator {
-		c.box(marginMM, y, b.width(), h, Pen{}, &Fill{Panel})
+		c.box(marginMM, y, b.width(), band, Pen{}, &Fill{Panel})
 	}
 	title, detail := b.stepText(st)
 	c.text(b.colX(0)+2.5, y+4.3, sizeSmall, Regular, Ink, left, fmt.Sprint(st.Index))
@@ -245,9 +269,7 @@ func (b *builder) stepRow(f *flow, st plan.Step, h float64) {
 	if detail != "" {
 		c.para(b.colX(2)+1, ty-lineStep(sizeBody)+3.7, b.stepTextW(), ckSmall, Regular, Ink, detail)
 	}
-	b.tickBoxes(f, y, math.Min(h, 8), false)
-	c.line(marginMM, y+h, marginMM+b.width(), y+h, Pen{Width: 0.15, Colour: Faint})
-	f.y += h
+	b.tickBoxes(f, y, math.Min(h, 8), nil, sp)
 }
 
 // signOff draws name, date and signature fields across the page.
@@ -265,4 +287,63 @@ func (b *builder) signOff(f *flow, what string) {
 		c.text(x+1.5, f.y+3.5, sizeTiny, Regular, Colour{90, 90, 90}, left, fl)
 	}
 	f.y += 18
+}
+
+// checkRow draws one step's row and the recorded notes under it. A row and
+// its notes are kept on one page when they fit on one; notes longer than a
+// page flow on line by line under a repeated header.
+func (b *builder) checkRow(f *flow, st plan.Step, rec *recorded) {
+	sp := rec.step(st.Index)
+	notes := b.noteLines(rec.notesFor(st.Index))
+	var ft []string
+	var h float64
+	if st.Kind == plan.StepCoil && st.Coil != nil {
+		ft = b.fromToLines(st.Coil)
+		h = coilRowHeight(len(ft))
+	} else {
+		h = b.stepRowHeight(st)
+	}
+	nh := notesHeight(len(notes))
+	whole := f.b.bottom() - f.b.top() - 3 - ckHeadH
+	if f.need(min(h+nh, whole)) {
+		b.checkHeader(f)
+	}
+	band := h
+	if f.y+h+nh <= f.b.bottom() {
+		band = h + nh
+	}
+	if ft != nil {
+		b.coilRow(f, st, ft, band, sp)
+	} else {
+		b.stepRow(f, st, h, band, sp)
+	}
+	f.y += h
+	if len(notes) > 0 {
+		b.noteRows(f, st.Index, notes)
+	}
+	f.c.line(marginMM, f.y, marginMM+b.width(), f.y, Pen{Width: 0.15, Colour: Faint})
+}
+
+// noteRows writes the note lines of a step under its row, starting a new
+// page (with the header and the step's number) where they cross the bottom.
+func (b *builder) noteRows(f *flow, step int, lines []string) {
+	x := b.colX(1) + 1
+	ls := lineStep(ckSmall)
+	top := f.y
+	rule := func() { f.c.line(x-0.6, top, x-0.6, f.y-0.6, Pen{Width: 0.35, Colour: Ink}) }
+	f.y += 0.3
+	for _, l := range lines {
+		if f.y+ls > f.b.bottom() {
+			rule()
+			f.newPage()
+			b.checkHeader(f)
+			top = f.y
+			f.c.text(b.colX(0)+2.5, f.y+0.3+0.75*ckSmall*ptMM, ckSmall, Regular, Faint, left, fmt.Sprint(step))
+			f.y += 0.3
+		}
+		f.c.text(x+0.6, f.y+0.75*ckSmall*ptMM, ckSmall, Regular, Ink, left, l)
+		f.y += ls
+	}
+	f.y += notesPad
+	rule()
 }

@@ -29,8 +29,17 @@
 // deterministic: the PDF dates come from Options.Date or the plan's Date,
 // resources are sorted, so two renders of one plan are byte-identical.
 //
+// Progress. Printed after or during winding the pack is the stator's
+// record: with Options.Progress the checklist ticks the steps done (a
+// stroked tick, not a glyph) with their dates, writes the turns counted on
+// each done coil (a count that differs from the plan white on black, the
+// plan's under it), prints the notes under their rows and sums up the record
+// at the top; the test record prints the readings with their dates. Entries
+// naming a step or tooth the plan no longer has there are left out and
+// counted. Rows not done stay blank, to fill in by hand.
+//
 // What it does not do. It reads plans and never changes them, computes no
-// winding quantity of its own beyond drawing geometry, reads no files
-// (readings from the progress record arrive as plain data in
+// winding quantity of its own beyond drawing geometry, reads no files (the
+// progress record arrives replayed, as plain data in Options.Progress and
 // Options.Readings) and prints nothing but A4 and US Letter portrait sheets.
 package printout

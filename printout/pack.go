@@ -17,6 +17,10 @@ type Options struct {
 	// (from the progress record), by test name. The test record prints them
 	// in the reading column; tests without one get a blank to fill in.
 	Readings map[string]Reading
+	// Progress is the stator's progress record (nil when there is none):
+	// the checklist ticks the steps done and writes the turns counted, the
+	// dates and the notes.
+	Progress *Progress
 }
 
 // Reading is what was recorded for one test.

@@ -55,13 +55,19 @@ func readingText(r Reading, unit string) string {
 	if r.Verdict != "" {
 		parts = append(parts, r.Verdict)
 	}
+	return strings.Join(parts, " · ")
+}
+
+// takenText says when and by whom a reading was taken, "" when unknown.
+func takenText(r Reading) string {
+	var parts []string
 	if !r.Taken.IsZero() {
-		parts = append(parts, r.Taken.UTC().Format("2006-01-02"))
+		parts = append(parts, "taken "+dateOf(r.Taken))
 	}
 	if r.By != "" {
 		parts = append(parts, "by "+r.By)
 	}
-	return strings.Join(parts, " · ")
+	return strings.Join(parts, " ")
 }
 
 // testRecord lists each test with its expected value, acceptance band and a
@@ -152,7 +158,11 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	h := max(hText, 30+dy)
 	if r, ok := b.o.Readings[t.Name]; ok {
 		// a long reading pushes the pass / fail line down
-		h = max(h, dy+18.5+paraHeight(rw-4, sizeBody, Mono, readingText(r, t.Unit))+6)
+		rh := paraHeight(rw-4, sizeBody, Mono, readingText(r, t.Unit))
+		if tk := takenText(r); tk != "" {
+			rh += paraHeight(rw-4, sizeSmall, Regular, tk)
+		}
+		h = max(h, dy+18.5+rh+6)
 	}
 	f.need(h + 2)
 	c := f.c
@@ -176,7 +186,10 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	c.line(rx, ry+11, rx+rw, ry+11, Pen{Width: 0.15, Colour: Faint})
 	c.text(rx+2, ry+14, sizeTiny, Regular, Colour{90, 90, 90}, left, "reading")
 	if r, ok := b.o.Readings[t.Name]; ok {
-		c.para(rx+2, ry+18.5, rw-4, sizeBody, Mono, Ink, readingText(r, t.Unit))
+		ty := c.para(rx+2, ry+18.5, rw-4, sizeBody, Mono, Ink, readingText(r, t.Unit))
+		if tk := takenText(r); tk != "" {
+			c.para(rx+2, ty, rw-4, sizeSmall, Regular, Ink, tk)
+		}
 	} else {
 		c.line(rx+2, ry+20.5, rx+rw-2, ry+20.5, Pen{Width: 0.2, Colour: Ink})
 		c.text(rx+rw-2, ry+19.8, sizeSmall, Regular, Faint, right, t.Unit)
