@@ -84,8 +84,11 @@ func (c *shared) ring(w, h int) *ringGeometry {
 }
 
 // currentTooth is the tooth the current step is about, 0 for none.
-func (c *shared) currentTooth() int {
-	s, ok := c.step(c.prog.current())
+func (c *shared) currentTooth() int { return c.toothOf(c.prog.current()) }
+
+// toothOf is the tooth step i (0-based) is about, 0 for none.
+func (c *shared) toothOf(i int) int {
+	s, ok := c.step(i)
 	if !ok {
 		return 0
 	}

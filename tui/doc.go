@@ -17,7 +17,14 @@
 // tooth's phase letter is upper case when its coil is wound clockwise and
 // lower case when counter-clockwise (seen from the air gap), doubled by a mark:
 // '>' clockwise, '<' counter-clockwise. A wound coil carries '#', the tooth of
-// the current step '@'; colour only repeats what the letters say.
+// the current step '@', the tooth of a step looked at '*'; colour only
+// repeats what the letters say.
+//
+// Looking. Left/right (or [ and ]) move a look to another step, and enter on
+// a line of the overview opens that step: the panel shows it read-only as it
+// was recorded, under a banner saying so, and no key changes progress until
+// esc, home or enter brings back the step in hand. Undo, or any change of
+// progress, ends the look.
 //
 // The models do no I/O of their own: the progress record is a Recorder given
 // by the caller (JournalRecorder over a winding/journal store; Run opens one),

@@ -32,6 +32,15 @@ func TestGoldenScreens(t *testing.T) {
 	firstCoil := func(p *plan.Plan) []Entry {
 		return doneUpTo(p, func(s plan.Step) bool { return s.Kind == plan.StepCoil })
 	}
+	// Coil 1 wound short with a note, coil 2 as planned, coil 3 in hand.
+	lookBack := []Entry{
+		{Kind: EntryDone, Step: 1},
+		{Kind: EntryNote, Step: 2, Note: "last turn loose, pressed down"},
+		{Kind: EntryDone, Step: 2, Turns: 11},
+		{Kind: EntryDone, Step: 3},
+		{Kind: EntryDone, Step: 4, Turns: 12},
+		{Kind: EntryDone, Step: 5},
+	}
 	tests := []struct {
 		name    string
 		p       *plan.Plan
@@ -55,6 +64,11 @@ func TestGoldenScreens(t *testing.T) {
 		{name: "help_80x24", p: small, w: 80, h: 24, keys: []string{"?"}},
 		{name: "tiny_24x7", p: small, w: 24, h: 7},
 		{name: "all_done_80x24", p: small, w: 80, h: 24, history: doneUpTo(small, func(plan.Step) bool { return false })},
+		{name: "look_back_80x24", p: small, w: 80, h: 24, history: lookBack, keys: []string{"left", "left", "[", "["}},
+		{name: "look_back_100x30", p: small, w: 100, h: 30, history: lookBack, keys: []string{"left", "left", "[", "["}},
+		{name: "look_ahead_100x30", p: small, w: 100, h: 30, history: lookBack, keys: []string{"right", "]"}},
+		{name: "overview_pick_80x24", p: small, w: 80, h: 24, history: lookBack, keys: []string{"o", "up", "up"}},
+		{name: "q120_look_strip_80x24", p: big, w: 80, h: 24, history: doneUpTo(big, func(s plan.Step) bool { return s.Coil != nil && s.Coil.Order == 60 }), keys: repeat("left", 9)},
 		{name: "q120_strip_80x24", p: big, w: 80, h: 24, history: doneUpTo(big, func(s plan.Step) bool { return s.Coil != nil && s.Coil.Order == 60 })},
 	}
 	for _, tc := range tests {

@@ -60,6 +60,72 @@ type guideModel struct {
 	inErr   string
 	verdict *Verdict
 	values  []float64
+
+	// A look at another step (0-based at) while the work stays where it
+	// is; it holds only while the progress is unchanged since (atRev).
+	looking bool
+	at      int
+	atRev   int
+}
+
+// lookedAt is the step looked at, when it is not the current one and
+// progress has not changed since the look began.
+func (g guideModel) lookedAt() (int, bool) {
+	if !g.looking || g.atRev != g.c.prog.rev || g.at == g.c.prog.current() {
+		return 0, false
+	}
+	if _, ok := g.c.step(g.at); !ok {
+		return 0, false
+	}
+	return g.at, true
+}
+
+// shown is the step the panel shows: the one looked at, or the current one.
+func (g guideModel) shown() int {
+	if at, ok := g.lookedAt(); ok {
+		return at
+	}
+	return g.c.prog.current()
+}
+
+// lookAt moves the look to step i (0-based), clamped to the plan; reaching
+// the current step ends the look.
+func (g guideModel) lookAt(i int) guideModel {
+	cur := g.c.prog.current()
+	i = min(max(0, i), max(len(g.c.steps())-1, cur))
+	g.looking, g.at, g.atRev, g.typed, g.flash = i != cur, i, g.c.prog.rev, false, ""
+	return g
+}
+
+// backTo says where ending a look returns to.
+func (g guideModel) backTo() string {
+	if cur := g.c.prog.current(); cur < len(g.c.steps()) {
+		return fmt.Sprintf("step %d in hand", cur+1)
+	}
+	return "the finished job"
+}
+
+// lookKey handles a key while another step is looked at: it moves or ends
+// the look and never changes progress, except undo, which ends the look and
+// asks as usual.
+func (g guideModel) lookKey(msg tea.KeyMsg, at int) (guideModel, tea.Cmd, bool) {
+	k := g.c.keys.guide
+	switch {
+	case key.Matches(msg, k.Prev):
+		return g.lookAt(at - 1), nil, true
+	case key.Matches(msg, k.Next):
+		return g.lookAt(at + 1), nil, true
+	case key.Matches(msg, k.Back):
+		g.flash = "back to " + g.backTo()
+		g.looking = false
+		return g, nil, true
+	case key.Matches(msg, k.Undo):
+		g.looking = false
+		return g, nil, false
+	case key.Matches(msg, k.Count), key.Matches(msg, k.Uncount), key.Matches(msg, k.Digits), key.Matches(msg, k.Note):
+		g.flash = fmt.Sprintf("only looking at step %d: esc or home goes back to %s to work", at+1, g.backTo())
+	}
+	return g, nil, true
 }
 
 func newTextInput(prompt string, limit int) textinput.Model {
@@ -167,9 +233,21 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 	}
 
 	// modeWork.
+	if at, looking := g.lookedAt(); looking {
+		var cmd tea.Cmd
+		var handled bool
+		if g, cmd, handled = g.lookKey(msg, at); handled {
+			return g, cmd
+		}
+	}
+	g.looking = false
 	wasTyping := g.typed
 	g.typed = false
 	switch {
+	case key.Matches(msg, k.guide.Prev):
+		return g.lookAt(cur - 1), nil
+	case key.Matches(msg, k.guide.Next):
+		return g.lookAt(cur + 1), nil
 	case key.Matches(msg, k.guide.Undo):
 		if g.c.prog.lastDone() >= 0 {
 			g.mode = modeConfirmUndo
@@ -358,6 +436,11 @@ func (g guideModel) shortHelp() []key.Binding {
 	case modeConfirmUndo:
 		return []key.Binding{withHelp(k.confirm.Yes, "undo it"), withHelp(k.confirm.No, "keep it")}
 	}
+	if _, looking := g.lookedAt(); looking {
+		back := k.guide.Back
+		back.SetHelp("esc", "back to "+strings.TrimSuffix(g.backTo(), " in hand"))
+		return []key.Binding{back, k.guide.Look, k.global.Overview, k.global.Help, k.global.Quit}
+	}
 	s, ok := g.c.step(g.c.prog.current())
 	var out []key.Binding
 	switch {
@@ -369,6 +452,9 @@ func (g guideModel) shortHelp() []key.Binding {
 	default:
 		out = append(out, withHelp(k.guide.Done, "confirm done"))
 	}
+	// The look keys come early: the line is cut at the right on narrow
+	// terminals, and the help screen lists every key anyway.
+	out = append(out, withHelp(k.guide.Look, "look"))
 	if ok {
 		out = append(out, k.guide.Note)
 	}
@@ -386,14 +472,19 @@ func (g guideModel) view(w, h int) string {
 	teeth := c.teeth
 	wound := c.prog.toothWound(c.steps(), len(teeth))
 	cur := c.currentTooth()
+	viewed := 0
+	at, looking := g.lookedAt()
+	if looking {
+		viewed = c.toothOf(at)
+	}
 
 	// The ring beside the step panel when both fit; else the strip above it.
 	const panelMin = 46
 	if rg := c.ring(max(0, w-panelMin-3), max(0, h-3)); rg != nil && len(teeth) > 0 {
-		d := renderRing(c.st, *rg, teeth, wound, cur, c.ringCaption())
+		d := renderRing(c.st, *rg, teeth, wound, cur, viewed, c.ringCaption())
 		left := c.st.drawing.Render(strings.Join(d.lines, "\n"))
 		lw := d.width + 2
-		if leg := legend(lw); leg != "" {
+		for _, leg := range legend(lw, looking) {
 			left += "\n" + c.st.dim.Render(leg)
 		}
 		pw := max(0, w-lw-1)
@@ -401,9 +492,9 @@ func (g guideModel) view(w, h int) string {
 	}
 	var top []string
 	if len(teeth) > 0 {
-		d := renderStrip(c.st, teeth, wound, cur, w)
+		d := renderStrip(c.st, teeth, wound, cur, viewed, w)
 		top = append(top, d.lines...)
-		if leg := legend(w); leg != "" {
+		for _, leg := range legend(w, looking) {
 			top = append(top, c.st.dim.Render(leg))
 		}
 	}

@@ -45,17 +45,51 @@ func (m helpModel) update(msg tea.KeyMsg) (helpModel, tea.Cmd) {
 
 func (m helpModel) view() string { return m.vp.View() }
 
+// keyBlocks lays the key groups side by side as many as fit in w, then
+// starts a new block below, so no group is cut off on a narrow terminal.
+func (m helpModel) keyBlocks(w int) []string {
+	h := m.h
+	h.Width = 0 // measure without cutting
+	var out []string
+	var row [][]key.Binding
+	flush := func() {
+		if len(row) > 0 {
+			out = append(out, strings.Split(h.FullHelpView(row), "\n")...)
+			row = nil
+		}
+	}
+	for _, g := range m.c.keys.fullHelp() {
+		if len(row) > 0 && blockWidth(h.FullHelpView(append(row[:len(row):len(row)], g))) > w {
+			flush()
+			out = append(out, "")
+		}
+		row = append(row, g)
+	}
+	flush()
+	return out
+}
+
+// blockWidth is the width of the widest line of s.
+func blockWidth(s string) int {
+	w := 0
+	for _, l := range strings.Split(s, "\n") {
+		w = max(w, lipglossWidth(l))
+	}
+	return w
+}
+
 func (m helpModel) content() string {
 	c := m.c
 	st := c.st
 	w := max(10, m.vp.Width)
 	b := &lines{st: st, w: w}
 	b.raw(st.title.Render("keys"))
-	b.raw(strings.Split(m.h.FullHelpView(c.keys.fullHelp()), "\n")...)
+	b.raw(m.keyBlocks(w)...)
 	b.raw("")
+	b.text("Looking at another step (left/right or [ ], or enter on a line of all steps) changes nothing: the panel shows that step as it was recorded, '*' marks its tooth, and counting, enter and notes wait until esc, home or enter brings back the step in hand. Undo, or any change, ends the look.", st.dim.Render)
 	b.text("While a note or a reading is typed, every key goes into the field: q, ? and o only work again after enter or esc.", st.dim.Render)
 	b.raw("", st.title.Render("the drawing"))
-	b.text("Each tooth shows its number, its phase letter and a mark. Upper case and '>' mean the coil is wound clockwise, lower case and '<' counter-clockwise, always seen from the air gap looking at the tooth face while following the wire from its start lead. '#' marks a coil already wound, '@' the tooth of the step in hand, '-' a tooth that carries no coil. The ring is seen from the lead end with tooth 1 at the top and the numbers rising counter-clockwise; on a small terminal the teeth are laid out flat in a strip.", st.value.Render)
+	b.text("Each tooth shows its number, its phase letter and a mark. Upper case and '>' mean the coil is wound clockwise, lower case and '<' counter-clockwise, always seen from the air gap looking at the tooth face while following the wire from its start lead. '#' marks a coil already wound, '@' the tooth of the step in hand, '*' (underlined) the tooth of a step looked at, '-' a tooth that carries no coil. The ring is seen from the lead end with tooth 1 at the top and the numbers rising counter-clockwise; on a small terminal the teeth are laid out flat in a strip.", st.value.Render)
 	b.raw("", st.title.Render("progress"))
 	where := c.where
 	if where == "" {

@@ -7,9 +7,12 @@ type globalKeys struct {
 	Help, Overview, Quit, ForceQuit key.Binding
 }
 
-// guideKeys are the keys of the guide screen.
+// guideKeys are the keys of the guide screen. Prev and Next move a look at
+// another step without changing progress; Look only shows them as one pair on
+// the help line; Back ends the look.
 type guideKeys struct {
 	Count, Uncount, Digits, Done, Note, Undo, Readings key.Binding
+	Prev, Next, Look, Back                             key.Binding
 }
 
 // typingKeys work while a note or a reading is being typed.
@@ -22,9 +25,11 @@ type confirmKeys struct {
 	Yes, No key.Binding
 }
 
-// scrollKeys move through the overview and help screens.
+// scrollKeys move through the overview and help screens; Pick opens the
+// step highlighted on the overview in the guide, to look at.
 type scrollKeys struct {
-	Up, Down, PageUp, PageDown, Back key.Binding
+	Up, Down, PageUp, PageDown, Back, Pick key.Binding
+	Choose                                 key.Binding // up and down as one pair on the overview's help line
 }
 
 // keyMaps holds every key binding, built once.
@@ -52,6 +57,10 @@ func newKeyMaps() *keyMaps {
 			Note:     key.NewBinding(key.WithKeys("n"), key.WithHelp("n", "note")),
 			Undo:     key.NewBinding(key.WithKeys("u"), key.WithHelp("u", "undo last step")),
 			Readings: key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "type readings")),
+			Prev:     key.NewBinding(key.WithKeys("left", "["), key.WithHelp("left/[", "look at the step before")),
+			Next:     key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("right/]", "look at the step after")),
+			Look:     key.NewBinding(key.WithKeys("left", "right", "[", "]"), key.WithHelp("[/]", "look back/ahead")),
+			Back:     key.NewBinding(key.WithKeys("esc", "home", "enter"), key.WithHelp("esc/home", "back to the step in hand")),
 		},
 		typing: typingKeys{
 			Accept: key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "accept")),
@@ -68,6 +77,8 @@ func newKeyMaps() *keyMaps {
 			PageUp:   key.NewBinding(key.WithKeys("pgup", "b"), key.WithHelp("pgup", "page up")),
 			PageDown: key.NewBinding(key.WithKeys("pgdown", "f"), key.WithHelp("pgdn", "page down")),
 			Back:     key.NewBinding(key.WithKeys("esc", "o", "tab", "?"), key.WithHelp("esc", "back to the guide")),
+			Pick:     key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "look at this step")),
+			Choose:   key.NewBinding(key.WithKeys("up", "down", "k", "j"), key.WithHelp("up/down", "choose a step")),
 		},
 	}
 }
@@ -77,6 +88,7 @@ func (k *keyMaps) fullHelp() [][]key.Binding {
 	return [][]key.Binding{
 		{k.guide.Count, k.guide.Uncount, k.guide.Digits, k.guide.Done},
 		{k.guide.Note, k.guide.Undo, k.global.Overview, k.global.Help},
+		{k.guide.Prev, k.guide.Next, k.guide.Back, withHelp(k.scroll.Pick, "on all steps: look at it")},
 		{k.typing.Accept, k.typing.Next, k.typing.Cancel},
 		{k.global.Quit, k.global.ForceQuit, k.scroll.Up, k.scroll.Down},
 	}

@@ -159,8 +159,12 @@ func (m *Model) key(msg tea.KeyMsg) tea.Cmd {
 		m.screen = screenHelp
 		return nil
 	case m.screen == screenGuide && key.Matches(msg, k.Overview):
-		m.overview = m.overview.open(bw, bh)
+		m.overview = m.overview.from(m.guide.shown()).open(bw, bh)
 		m.screen = screenOverview
+		return nil
+	case m.screen == screenOverview && key.Matches(msg, m.c.keys.scroll.Pick):
+		m.guide = m.guide.lookAt(m.overview.sel)
+		m.screen = screenGuide
 		return nil
 	case m.screen != screenGuide && key.Matches(msg, m.c.keys.scroll.Back):
 		m.screen = screenGuide
@@ -259,6 +263,8 @@ func (m *Model) helpLine() string {
 	switch m.screen {
 	case screenGuide:
 		b = m.guide.shortHelp()
+	case screenOverview:
+		b = []key.Binding{k.scroll.Choose, k.scroll.Pick, k.scroll.Back, k.global.Quit}
 	default:
 		b = []key.Binding{k.scroll.Up, k.scroll.Down, k.scroll.PageDown, k.scroll.Back, k.global.Quit}
 	}

@@ -14,20 +14,49 @@ import (
 )
 
 // overviewModel lists every step with its status, then the connection order.
+// One step line is highlighted (sel, 0-based); enter opens it in the guide to
+// look at.
 type overviewModel struct {
-	c  *shared
-	vp viewport.Model
+	c   *shared
+	vp  viewport.Model
+	sel int
 }
 
 func newOverview(c *shared) overviewModel {
 	return overviewModel{c: c, vp: viewport.New(0, 0)}
 }
 
-// open refreshes the content and scrolls to the current step.
+// from highlights step i (0-based), clamped to the plan.
+func (o overviewModel) from(i int) overviewModel {
+	o.sel = min(max(0, i), max(0, len(o.c.steps())-1))
+	return o
+}
+
+// open refreshes the content and scrolls to the highlighted step.
 func (o overviewModel) open(w, h int) overviewModel {
 	o.vp.Width, o.vp.Height = max(0, w), max(0, h)
 	o.vp.SetContent(o.content())
-	o.vp.SetYOffset(max(0, o.c.prog.current()-h/3))
+	o.vp.SetYOffset(max(0, o.sel-h/3))
+	return o
+}
+
+// move highlights the step d lines away and keeps it in sight; past the last
+// step it scrolls on, so the connection order below can be read.
+func (o overviewModel) move(d int) overviewModel {
+	n := len(o.c.steps())
+	if d > 0 && o.sel >= n-1 {
+		o.vp.ScrollDown(d)
+		return o
+	}
+	o.sel = min(max(0, o.sel+d), max(0, n-1))
+	o.vp.SetContent(o.content())
+	line := o.sel + 1 // the title comes first
+	switch {
+	case line < o.vp.YOffset:
+		o.vp.SetYOffset(line)
+	case line >= o.vp.YOffset+o.vp.Height:
+		o.vp.SetYOffset(line - o.vp.Height + 1)
+	}
 	return o
 }
 
@@ -35,13 +64,13 @@ func (o overviewModel) update(msg tea.KeyMsg) (overviewModel, tea.Cmd) {
 	k := o.c.keys.scroll
 	switch {
 	case key.Matches(msg, k.Up):
-		o.vp.ScrollUp(1)
+		o = o.move(-1)
 	case key.Matches(msg, k.Down):
-		o.vp.ScrollDown(1)
+		o = o.move(1)
 	case key.Matches(msg, k.PageUp):
-		o.vp.PageUp()
+		o = o.move(-max(1, o.vp.Height-1))
 	case key.Matches(msg, k.PageDown):
-		o.vp.PageDown()
+		o = o.move(max(1, o.vp.Height-1))
 	}
 	return o, nil
 }
@@ -70,8 +99,14 @@ func (o overviewModel) content() string {
 	digits := len(strconv.Itoa(len(steps)))
 	for i, s := range steps {
 		done := c.prog.done[i]
-		line := fmt.Sprintf("%s %*d  %s", statusMark(done, i == cur), digits, s.Index, stepLine(c, s, i))
+		pick := "  "
+		if i == o.sel {
+			pick = "->"
+		}
+		line := fmt.Sprintf("%s%s %*d  %s", pick, statusMark(done, i == cur), digits, s.Index, stepLine(c, s, i))
 		switch {
+		case i == o.sel:
+			line = st.picked.Render(line)
 		case i == cur:
 			line = st.statusNow.Render(line)
 		case done:

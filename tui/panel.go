@@ -123,8 +123,12 @@ func (g guideModel) panel(w, h int) []string {
 func (g guideModel) panelLines(cw int, compact bool) *lines {
 	c := g.c
 	b := &lines{st: c.st, w: cw}
-	cur := c.prog.current()
+	cur := g.shown()
 	s, ok := c.step(cur)
+	if _, looking := g.lookedAt(); looking {
+		b.text(g.lookBanner(s), c.st.banner.Render)
+		b.text("esc or home: back to "+g.backTo(), c.st.banner.Render)
+	}
 	switch {
 	case !ok:
 		g.doneView(b)
@@ -150,6 +154,26 @@ func (g guideModel) panelLines(cw int, compact bool) *lines {
 	return b
 }
 
+// lookBanner says which step is looked at and what was recorded on it.
+func (g guideModel) lookBanner(s plan.Step) string {
+	p := g.c.prog
+	i := s.Index - 1
+	state := "to do"
+	switch {
+	case p.done[i] && s.Coil != nil && p.turns[i] == s.Coil.Turns:
+		state = fmt.Sprintf("done, %d turns counted = plan", p.turns[i])
+	case p.done[i] && s.Coil != nil:
+		state = fmt.Sprintf("done, %d turns counted, plan %d", p.turns[i], s.Coil.Turns)
+	case p.done[i] && p.readings[i] != nil:
+		state = "done, " + strings.ToUpper(p.readings[i].verdict)
+	case p.done[i]:
+		state = "done"
+	case s.Coil != nil && p.turns[i] > 0:
+		state = fmt.Sprintf("to do, %d of %d turns counted so far", p.turns[i], s.Coil.Turns)
+	}
+	return fmt.Sprintf("looking at step %d of %d (%s)", s.Index, len(g.c.steps()), state)
+}
+
 // stepOf is the "step i of n" note.
 func (g guideModel) stepOf(s plan.Step) string {
 	return fmt.Sprintf("step %d of %d", s.Index, len(g.c.steps()))
@@ -167,7 +191,7 @@ func (g guideModel) coilView(b *lines, s plan.Step, compact bool) {
 	if !compact {
 		b.raw("")
 	}
-	g.counter(b, n, cs.Turns, compact)
+	g.counter(b, n, cs.Turns, compact, s.Index-1)
 	if g.mode == modeConfirmTurns {
 		b.text(fmt.Sprintf("%d turns counted, the plan says %d. enter/y records %d; esc goes back to counting.", n, cs.Turns, n), c.st.warn.Render)
 	}
@@ -182,8 +206,9 @@ func (g guideModel) coilView(b *lines, s plan.Step, compact bool) {
 	}
 }
 
-// counter shows the turn count in large figures with a bar against the plan.
-func (g guideModel) counter(b *lines, n, want int, compact bool) {
+// counter shows the turn count of step i in large figures with a bar
+// against the plan.
+func (g guideModel) counter(b *lines, n, want int, compact bool, i int) {
 	st := g.c.st
 	style := st.counter
 	if n == want {
@@ -191,7 +216,16 @@ func (g guideModel) counter(b *lines, n, want int, compact bool) {
 	}
 	big := bigNumber(n)
 	of := fmt.Sprintf("of %d turns", want)
+	_, looking := g.lookedAt()
 	switch {
+	case looking && !g.c.prog.done[i]:
+		of += "  not wound yet"
+	case looking && n == want:
+		of += "  wound as planned"
+	case looking && n > want:
+		of += fmt.Sprintf("  wound %d over", n-want)
+	case looking:
+		of += fmt.Sprintf("  wound %d short", want-n)
 	case n == want:
 		of += "  = plan, enter"
 	case n > want:
@@ -232,6 +266,9 @@ func (g guideModel) checkView(b *lines, s plan.Step) {
 	}
 	for _, r := range s.Reminders {
 		b.kv("mind", r)
+	}
+	if _, looking := g.lookedAt(); looking {
+		return
 	}
 	b.raw("")
 	b.text("Press enter when this is done.", c.st.statusNow.Render)
@@ -285,6 +322,9 @@ func (g guideModel) testView(b *lines, s plan.Step) {
 	default:
 		if r := c.prog.readings[s.Index-1]; r != nil {
 			b.kv("last", fmt.Sprintf("%v -> %s", r.values, strings.ToUpper(r.verdict)))
+		}
+		if _, looking := g.lookedAt(); looking {
+			return
 		}
 		b.raw("")
 		b.text("Press enter to type the readings.", c.st.statusNow.Render)

@@ -18,6 +18,7 @@ type progress struct {
 	notes    []string
 	readings []*reading
 	order    []int // completed steps, most recent last, for undo
+	rev      int   // counts the changes applied, so a look at another step ends on any change
 }
 
 func newProgress(n int) *progress {
@@ -66,6 +67,7 @@ func (p *progress) apply(e Entry) bool {
 	default:
 		return false
 	}
+	p.rev++
 	return true
 }
 

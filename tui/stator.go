@@ -9,7 +9,7 @@ import (
 )
 
 // The stator drawing. Each wound tooth is a token of four parts: a state mark
-// ('#' wound, '@' the current step, ' ' to do), the tooth number, the phase
+// ('#' wound, '@' the current step, '*' the step looked at, ' ' to do), the tooth number, the phase
 // letter (upper case clockwise, lower case counter-clockwise, seen from the
 // air gap) and a direction mark ('>' clockwise, '<' counter-clockwise). An
 // unwound tooth shows its number and '-'. The ring is drawn seen from the lead
@@ -19,6 +19,7 @@ import (
 const (
 	markWound   = "#"
 	markCurrent = "@"
+	markViewed  = "*"
 	markTodo    = " "
 	markCW      = ">"
 	markCCW     = "<"
@@ -137,9 +138,12 @@ type drawing struct {
 	width int
 }
 
-// stateMark is the first character of a token.
-func stateMark(wound, current bool) string {
+// stateMark is the first character of a token. The tooth looked at wins
+// over the current one: it is what the panel shows.
+func stateMark(wound, current, viewed bool) string {
 	switch {
+	case viewed:
+		return markViewed
 	case current:
 		return markCurrent
 	case wound:
@@ -149,11 +153,13 @@ func stateMark(wound, current bool) string {
 }
 
 // styledToken renders one tooth token padded to width tw.
-func styledToken(st *styles, t int, ti toothInfo, wound, current bool, tw int) string {
+func styledToken(st *styles, t int, ti toothInfo, wound, current, viewed bool, tw int) string {
 	text := tokenText(t, ti)
-	mark := stateMark(wound, current)
+	mark := stateMark(wound, current, viewed)
 	pad := strings.Repeat(" ", max(0, tw-1-len(text)))
 	switch {
+	case viewed:
+		return st.viewed.Render(mark+text) + pad
 	case current:
 		return st.current.Render(mark+text) + pad
 	case !ti.wound:
@@ -164,8 +170,9 @@ func styledToken(st *styles, t int, ti toothInfo, wound, current bool, tw int) s
 	return mark + st.phaseStyle(ti.phase).Render(text) + pad
 }
 
-// renderRing draws the ring with a caption in the middle.
-func renderRing(st *styles, g ringGeometry, teeth []toothInfo, wound []bool, current int, caption []string) drawing {
+// renderRing draws the ring with a caption in the middle; viewed is the tooth
+// of a step looked at (0 for none).
+func renderRing(st *styles, g ringGeometry, teeth []toothInfo, wound []bool, current, viewed int, caption []string) drawing {
 	type seg struct {
 		x    int
 		w    int
@@ -177,7 +184,7 @@ func renderRing(st *styles, g ringGeometry, teeth []toothInfo, wound []bool, cur
 			break
 		}
 		w := i < len(wound) && wound[i]
-		rows[g.y[i]] = append(rows[g.y[i]], seg{g.x[i], g.tw, styledToken(st, i+1, ti, w, i+1 == current, g.tw)})
+		rows[g.y[i]] = append(rows[g.y[i]], seg{g.x[i], g.tw, styledToken(st, i+1, ti, w, i+1 == current, i+1 == viewed, g.tw)})
 	}
 	// Caption lines centred in the ring.
 	top := g.cy - len(caption)/2
@@ -230,10 +237,10 @@ func sortSegs[T any](xs []T, less func(a, b T) bool) {
 // stripLabels are the row names of the developed strip.
 var stripLabels = [4]string{"tooth ", "phase ", "wind  ", "done  "}
 
-// renderStrip draws a developed strip of the teeth round the current one in
-// width w: tooth numbers, phase letters, direction marks and state marks in
-// columns.
-func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, w int) drawing {
+// renderStrip draws a developed strip of the teeth round the current one (or
+// round the tooth looked at, viewed, when not 0) in width w: tooth numbers,
+// phase letters, direction marks and state marks in columns.
+func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, viewed, w int) drawing {
 	q := len(teeth)
 	if q == 0 {
 		return drawing{}
@@ -241,9 +248,12 @@ func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, w int) dr
 	cw := len(strconv.Itoa(q)) + 1
 	lw := len(stripLabels[0])
 	n := min(q, max(1, (w-lw)/cw))
-	first := 0
-	if current >= 1 {
-		first = current - 1 - n/2
+	first, centre := 0, current
+	if viewed >= 1 {
+		centre = viewed
+	}
+	if centre >= 1 {
+		first = centre - 1 - n/2
 	}
 	first = min(max(0, first), q-n)
 	var rows [4]strings.Builder
@@ -253,6 +263,7 @@ func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, w int) dr
 	for i := first; i < first+n; i++ {
 		ti := teeth[i]
 		isCur := i+1 == current
+		isViewed := i+1 == viewed
 		isWound := i < len(wound) && wound[i]
 		cells := [4]string{strconv.Itoa(i + 1), markUnwound, " ", " "}
 		if ti.wound {
@@ -265,9 +276,14 @@ func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, w int) dr
 		if isCur {
 			cells[3] = markCurrent
 		}
+		if isViewed {
+			cells[3] = markViewed
+		}
 		for r, c := range cells {
 			cell := strings.Repeat(" ", max(0, cw-len(c))) + c
 			switch {
+			case isViewed:
+				rows[r].WriteString(st.viewed.Render(cell))
 			case isCur:
 				rows[r].WriteString(st.current.Render(cell))
 			case r == 1 && ti.wound && !isWound:
@@ -302,15 +318,23 @@ func stripCaption(a, b, q, w int) string {
 	return s
 }
 
-// legend explains the marks in one line, shortened to fit w.
-func legend(w int) string {
+// legend explains the marks in one line, shortened to fit w; while a step
+// other than the current one is looked at it names the '*' mark too, on a
+// second line when one is too narrow.
+func legend(w int, looking bool) []string {
 	long := "# wound  @ now  U> clockwise  u< counter-clockwise (seen from the air gap)"
 	short := "# wound  @ now  U> cw  u< ccw"
+	if looking {
+		long = "# wound  @ now  * looking  U> clockwise  u< counter-clockwise"
+		short = "# wound  @ now  * looking  U> cw  u< ccw"
+	}
 	switch {
 	case len(long) <= w:
-		return long
+		return []string{long}
 	case len(short) <= w:
-		return short
+		return []string{short}
+	case looking && len("# wound  @ now  * looking") <= w && len("U> cw  u< ccw") <= w:
+		return []string{"# wound  @ now  * looking", "U> cw  u< ccw"}
 	}
-	return ""
+	return nil
 }

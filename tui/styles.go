@@ -35,11 +35,12 @@ type styles struct {
 	title, subtitle, dim, label, value, strong lipgloss.Style
 	coilTitle                                  lipgloss.Style
 	panel, drawing                             lipgloss.Style
-	current, done                              lipgloss.Style
+	current, viewed, done                      lipgloss.Style
 	phase                                      []lipgloss.Style
 	ok, warn, fail, caution, errorBar, notice  lipgloss.Style
 	counter, counterDone                       lipgloss.Style
 	statusDone, statusNow, statusTodo          lipgloss.Style
+	banner, picked                             lipgloss.Style
 }
 
 func newStyles() *styles {
@@ -54,6 +55,8 @@ func newStyles() *styles {
 		panel:       lipgloss.NewStyle().Border(asciiBorder).BorderForeground(palette.dim).Padding(0, 1),
 		drawing:     lipgloss.NewStyle().Border(asciiBorder).BorderForeground(palette.dim),
 		current:     lipgloss.NewStyle().Reverse(true).Bold(true),
+		viewed:      lipgloss.NewStyle().Underline(true).Bold(true).Foreground(palette.warn),
+		banner:      lipgloss.NewStyle().Bold(true).Foreground(palette.warn),
 		done:        lipgloss.NewStyle().Foreground(palette.dim),
 		ok:          lipgloss.NewStyle().Bold(true).Foreground(palette.ok),
 		warn:        lipgloss.NewStyle().Bold(true).Foreground(palette.warn),
@@ -66,6 +69,7 @@ func newStyles() *styles {
 		statusDone:  lipgloss.NewStyle().Foreground(palette.dim),
 		statusNow:   lipgloss.NewStyle().Bold(true).Foreground(palette.accent),
 		statusTodo:  lipgloss.NewStyle().Foreground(palette.text),
+		picked:      lipgloss.NewStyle().Reverse(true),
 	}
 	for _, c := range palette.phases {
 		s.phase = append(s.phase, lipgloss.NewStyle().Bold(true).Foreground(c))
