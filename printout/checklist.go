@@ -199,7 +199,7 @@ func (b *builder) countCell(c *canvas, y, h float64, got, want int) {
 		c.text(cx, y+h/2+1.2, sizeBody+1, Bold, Ink, centre, s)
 		return
 	}
-	const bh = 3.9
+	const bh = 4.1
 	c.box(cx-bw/2, y+0.6, bw, bh, Pen{Width: 0.3, Colour: Ink}, &Fill{Ink})
 	c.text(cx, y+0.6+bh/2+1.15, sizeBody+1, Bold, White, centre, s)
 	c.text(cx, y+h-0.75, sizeTiny, Bold, Ink, centre, fmt.Sprintf("plan %d", want))

@@ -77,7 +77,8 @@ func hasGlyph(f Face, r rune) bool {
 }
 
 // clean replaces runes the face cannot print (and control characters) with
-// '?', so no text run ever asks the font for a missing glyph.
+// the nearest rune it has (a minus sign by a hyphen) or else '?', so no text
+// run ever asks the font for a missing glyph.
 func clean(f Face, s string) string {
 	ok := true
 	for _, r := range s {
@@ -91,13 +92,25 @@ func clean(f Face, s string) string {
 	}
 	b := make([]rune, 0, len(s))
 	for _, r := range s {
-		if hasGlyph(f, r) {
+		switch {
+		case hasGlyph(f, r):
 			b = append(b, r)
-		} else {
+		case stand[r] != 0 && hasGlyph(f, stand[r]):
+			b = append(b, stand[r])
+		default:
 			b = append(b, '?')
 		}
 	}
 	return string(b)
+}
+
+// stand maps runes the Go fonts may lack to the nearest one they have.
+var stand = map[rune]rune{
+	'\u2212': '-',      // minus sign
+	'\u2011': '-',      // non-breaking hyphen
+	'\u2012': '\u2013', // figure dash to en dash
+	'\u202f': ' ',      // narrow no-break space
+	'\u2009': ' ',      // thin space
 }
 
 // textWidth is the advance of s in mm at size pt.

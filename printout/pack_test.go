@@ -297,6 +297,9 @@ func TestWrapAndFit(t *testing.T) {
 			t.Errorf("fit(%s) = %q, %.2f mm; want at most %g", tt.name, f, textWidth(Regular, sizeBody, f), tt.w)
 		}
 	}
+	if got := clean(Regular, "(highest \u2212 lowest) / mean"); got != "(highest - lowest) / mean" {
+		t.Errorf("clean(Regular, minus sign) = %q; want a hyphen for the minus", got)
+	}
 	if got := clean(Regular, "U1 ⚡ 日本"); got != "U1 ? ??" {
 		t.Errorf("clean(Regular, %q) = %q; want %q", "U1 ⚡ 日本", got, "U1 ? ??")
 	}

@@ -201,7 +201,11 @@ func (b *builder) progressSummary(f *flow, r *recorded, steps []plan.Step) {
 	how := "From the progress record: ticked boxes, written counts and dates are recorded work; blank rows are still to do and filled in by hand. " +
 		"A count printed white on black differs from the plan, whose count stands under it."
 	if r.ignored > 0 {
-		how += fmt.Sprintf(" %d entries of the record do not match this plan (was the job changed?) and were left out.", r.ignored)
+		what := "entries of the record do not match this plan (was the job changed?) and were left out"
+		if r.ignored == 1 {
+			what = "entry of the record does not match this plan (was the job changed?) and was left out"
+		}
+		how += fmt.Sprintf(" %d %s.", r.ignored, what)
 	}
 	var general []string
 	for _, n := range r.general {
