@@ -67,7 +67,7 @@ func FuzzDemoVariants(f *testing.F) {
 		}
 		m := New(Options{Plan: p, Now: fixedNow})
 		drive(t, m, tea.WindowSizeMsg{Width: int(w), Height: int(h)})
-		for _, k := range []string{"enter", "enter", "enter", "1", "0", "enter", "o", "?", "esc"} {
+		for _, k := range []string{"enter", "enter", "enter", "1", "0", "enter", "left", "[", " ", "o", "up", "enter", "right", "]", "?", "esc"} {
 			drive(t, m, press(k))
 			_ = m.View()
 		}

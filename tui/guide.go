@@ -123,7 +123,7 @@ func (g guideModel) lookKey(msg tea.KeyMsg, at int) (guideModel, tea.Cmd, bool) 
 		g.looking = false
 		return g, nil, false
 	case key.Matches(msg, k.Count), key.Matches(msg, k.Uncount), key.Matches(msg, k.Digits), key.Matches(msg, k.Note):
-		g.flash = fmt.Sprintf("only looking at step %d: esc or home goes back to %s to work", at+1, g.backTo())
+		g.flash = fmt.Sprintf("only looking at step %d, nothing recorded: esc or home goes back to %s", at+1, g.backTo())
 	}
 	return g, nil, true
 }
