@@ -7,9 +7,16 @@ import (
 	"strings"
 	"testing"
 	"time"
+
+	"coilwright/printout/pdftext"
+	"coilwright/winding/job"
+	"coilwright/winding/journal"
+	"coilwright/winding/plan"
 )
 
 func TestSheetDemo(t *testing.T) {
+	// the demo prints the bench's demo record: keep it out of the home
+	t.Setenv("XDG_STATE_HOME", t.TempDir())
 	dir := t.TempDir()
 	out := filepath.Join(dir, "pack.pdf")
 	start := time.Now()
@@ -45,6 +52,7 @@ func TestSheetDemo(t *testing.T) {
 }
 
 func TestSheetPaperAndDate(t *testing.T) {
+	t.Setenv("XDG_STATE_HOME", t.TempDir())
 	out := filepath.Join(t.TempDir(), "pack.pdf")
 	code, _, stderr := runCLI(t, "sheet", "--demo", "-o", out, "--paper", "letter", "--date", "2025-06-01")
 	if code != 0 {
@@ -61,6 +69,7 @@ func TestSheetPaperAndDate(t *testing.T) {
 }
 
 func TestSheetRefusals(t *testing.T) {
+	t.Setenv("XDG_STATE_HOME", t.TempDir())
 	dir := t.TempDir()
 	tests := []struct {
 		name string
@@ -72,6 +81,7 @@ func TestSheetRefusals(t *testing.T) {
 		{"bad paper", []string{"sheet", "--demo", "-o", filepath.Join(dir, "x.pdf"), "--paper", "a3"}, "a4 or letter"},
 		{"bad date", []string{"sheet", "--demo", "-o", filepath.Join(dir, "x.pdf"), "--date", "14/03/2025"}, "YYYY-MM-DD"},
 		{"no job", []string{"sheet", "-o", filepath.Join(dir, "x.pdf")}, "--demo"},
+		{"missing record", []string{"sheet", "--demo", "-o", filepath.Join(dir, "x.pdf"), "--progress", filepath.Join(dir, "none.progress")}, "none.progress"},
 	}
 	for _, tt := range tests {
 		code, _, stderr := runCLI(t, tt.args...)
@@ -81,5 +91,131 @@ func TestSheetRefusals(t *testing.T) {
 	}
 	if _, err := os.Stat(filepath.Join(dir, "x.pdf")); err == nil {
 		t.Errorf("a refused sheet command left a file behind")
+	}
+}
+
+// pdfText renders the text of a written PDF, one run a line.
+func pdfText(t *testing.T, path string) string {
+	t.Helper()
+	data, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pages, err := pdftext.Pages(data)
+	if err != nil {
+		t.Fatalf("pdftext.Pages(%s) = %v", path, err)
+	}
+	var b strings.Builder
+	for _, pg := range pages {
+		for _, r := range pg {
+			b.WriteString(r)
+			b.WriteByte('\n')
+		}
+	}
+	return b.String()
+}
+
+// A pack printed beside a record is the stator's record: the turns counted
+// on the done coils, the note and the summary come out in the PDF.
+func TestSheetPrintsTheRecord(t *testing.T) {
+	dir := t.TempDir()
+	jobPath := filepath.Join(dir, "leat.toml")
+	if err := os.WriteFile(jobPath, job.DemoTOML(), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		t.Fatal(err)
+	}
+	var coils []plan.Step
+	for _, st := range p.Steps {
+		if st.Coil != nil {
+			coils = append(coils, st)
+		}
+	}
+	a, b := coils[0], coils[1]
+	s, _, _, err := journal.Open(journal.PathFor(jobPath), "sheet test")
+	if err != nil {
+		t.Fatal(err)
+	}
+	at := time.Date(2026, 11, 21, 10, 0, 0, 0, time.FixedZone("bench", 3600))
+	const note = "17 fit on the last layer, not 18"
+	for _, e := range []journal.Event{
+		{Time: at, Kind: journal.Done, Step: 1},
+		{Time: at, Kind: journal.Done, Step: a.Index, Tooth: a.Coil.Tooth, Turns: a.Coil.Turns},
+		{Time: at, Kind: journal.Done, Step: b.Index, Tooth: b.Coil.Tooth, Turns: b.Coil.Turns - 1},
+		{Time: at, Kind: journal.Note, Step: b.Index, Tooth: b.Coil.Tooth, Note: note},
+		// done, then undone: not printed as done
+		{Time: at, Kind: journal.Done, Step: coils[2].Index, Tooth: coils[2].Coil.Tooth, Turns: 99},
+		{Time: at.Add(time.Hour), Kind: journal.Undo, Step: coils[2].Index},
+	} {
+		if err := s.Append(e); err != nil {
+			t.Fatal(err)
+		}
+	}
+	if err := s.Close(); err != nil {
+		t.Fatal(err)
+	}
+	out := filepath.Join(dir, "pack.pdf")
+	if code, _, stderr := runCLI(t, "sheet", jobPath, "-o", out); code != 0 {
+		t.Fatalf("sheet JOB = exit %d (%s); want 0", code, stderr)
+	}
+	text := pdfText(t, out)
+	for _, want := range []string{
+		"3 of 74 steps done, 2 of 24 coils, as recorded on 2026-11-21.",
+		"note 2026-11-21: " + note,
+		"\n17\nplan 18\n",    // coil B: 17 counted against 18
+		"\n18\n2026-11-21\n", // coil A: 18 counted, done that day
+	} {
+		if !strings.Contains(text, want) {
+			t.Errorf("sheet JOB with a record: PDF lacks %q", want)
+		}
+	}
+	if strings.Contains(text, "\n99\n") {
+		t.Errorf("sheet JOB with a record: the undone coil prints its 99 turns")
+	}
+	// the same record named with --progress beside another job file prints the same
+	other := filepath.Join(dir, "copy.toml")
+	os.WriteFile(other, job.DemoTOML(), 0o644)
+	out2 := filepath.Join(dir, "again.pdf")
+	if code, _, stderr := runCLI(t, "sheet", other, "--progress", journal.PathFor(jobPath), "-o", out2); code != 0 {
+		t.Fatalf("sheet --progress = exit %d (%s); want 0", code, stderr)
+	}
+	if got := pdfText(t, out2); got != text {
+		t.Errorf("sheet --progress FILE prints other text than the record beside the job")
+	}
+	// without a record the checklist is a blank form
+	blank := filepath.Join(dir, "blank.toml")
+	os.WriteFile(blank, job.DemoTOML(), 0o644)
+	out3 := filepath.Join(dir, "blank.pdf")
+	runCLI(t, "sheet", blank, "-o", out3)
+	if got := pdfText(t, out3); strings.Contains(got, "steps done") || strings.Contains(got, note) {
+		t.Errorf("sheet of a job without a record prints progress")
+	}
+}
+
+// sheet --demo prints the bench's demo record; a torn last line is left out
+// and said.
+func TestSheetDemoRecord(t *testing.T) {
+	state := t.TempDir()
+	t.Setenv("XDG_STATE_HOME", state)
+	rec, err := demoProgressPath()
+	if err != nil {
+		t.Fatal(err)
+	}
+	line, _ := journal.Line(journal.Event{Seq: 1, Time: time.Date(2026, 11, 22, 9, 0, 0, 0, time.UTC), Kind: journal.Done, Step: 1})
+	if err := os.WriteFile(rec, append(line, []byte(`{"seq":2,"kind":"do`)...), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	out := filepath.Join(t.TempDir(), "pack.pdf")
+	code, _, stderr := runCLI(t, "sheet", "--demo", "-o", out)
+	if code != 0 {
+		t.Fatalf("sheet --demo = exit %d (%s); want 0", code, stderr)
+	}
+	if !strings.Contains(stderr, "cut short") {
+		t.Errorf("sheet --demo over a torn record: stderr %q does not say the last line was left out", stderr)
+	}
+	if text := pdfText(t, out); !strings.Contains(text, "1 of 74 steps done, 0 of 24 coils, as recorded on 2026-11-22.") {
+		t.Errorf("sheet --demo does not print the demo record")
 	}
 }

@@ -1,0 +1,29 @@
+package pdftext_test
+
+import (
+	"bytes"
+	"fmt"
+
+	"coilwright/printout"
+	"coilwright/printout/pdftext"
+	"coilwright/winding/job"
+	"coilwright/winding/plan"
+)
+
+// Pages reads back the text runs of a rendered pack, page by page.
+func ExamplePages() {
+	p, _ := plan.Build(job.Demo())
+	pack, _ := printout.Build(p, printout.Options{})
+	var pdf bytes.Buffer
+	if err := printout.Render(pack, &pdf); err != nil {
+		fmt.Println(err)
+		return
+	}
+	pages, err := pdftext.Pages(pdf.Bytes())
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println(len(pages) == len(pack.Pages), pages[0][0])
+	// Output: true Slot map
+}
