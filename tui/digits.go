@@ -9,7 +9,7 @@ import (
 // count can be read from across the bench on any terminal.
 var bigDigits = [10][3]string{
 	{" _ ", "| |", "|_|"},
-	{"   ", "  |", "  |"},
+	{"   ", " | ", " | "}, // 1 stands in the middle, so 17 and 71 do not read as a box
 	{" _ ", " _|", "|_ "},
 	{" _ ", " _|", " _|"},
 	{"   ", "|_|", "  |"},
