@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"slices"
 	"testing"
+	"time"
 
 	"coilwright/winding/job"
 	"coilwright/winding/plan"
@@ -53,6 +54,33 @@ func BenchmarkDemoPack(b *testing.B) {
 	p := demoPlan(b)
 	for b.Loop() {
 		pk, err := Build(p, Options{})
+		if err != nil {
+			b.Fatal(err)
+		}
+		var buf bytes.Buffer
+		if err := Render(pk, &buf); err != nil {
+			b.Fatal(err)
+		}
+		b.SetBytes(int64(buf.Len()))
+	}
+}
+
+// BenchmarkDemoPackWithRecord prints the demo pack from a record in which
+// every step is done, every coil a turn short and noted.
+func BenchmarkDemoPackWithRecord(b *testing.B) {
+	p := demoPlan(b)
+	when := p.Date.Add(24 * time.Hour)
+	pr := &Progress{Steps: map[int]StepProgress{}, Recorded: when}
+	for _, st := range p.Steps {
+		sp := StepProgress{Done: true, When: when}
+		if st.Coil != nil {
+			sp.Tooth, sp.Turns = st.Coil.Tooth, st.Coil.Turns-1
+			pr.Notes = append(pr.Notes, Note{Step: st.Index, Text: "one turn short: the last layer was full", When: when})
+		}
+		pr.Steps[st.Index] = sp
+	}
+	for b.Loop() {
+		pk, err := Build(p, Options{Progress: pr})
 		if err != nil {
 			b.Fatal(err)
 		}
