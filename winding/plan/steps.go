@@ -120,7 +120,8 @@ func (b *builder) steps() error {
 		for _, name := range l.PhaseNames {
 			b.add(Step{Kind: StepJoin, Title: fmt.Sprintf("Join the paths of phase %s", name),
 				Detail: fmt.Sprintf("Join the %d start leads of phase %s together as %s1, and its %d finish leads as %s2: twist, solder or crimp, sleeve.",
-					l.Spec.Paths, name, name, l.Spec.Paths, name)})
+					l.Spec.Paths, name, name, l.Spec.Paths, name),
+				Reminders: jointReminders()})
 		}
 	}
 	for _, jt := range winding.Joints(p.Connection, l.PhaseNames) {
@@ -128,8 +129,7 @@ func (b *builder) steps() error {
 		if jt.Line != "" {
 			title = fmt.Sprintf("Delta corner: %s, line lead %s", strings.Join(jt.Marks, " + "), jt.Line)
 		}
-		b.add(Step{Kind: StepJoin, Title: title, Detail: capitalise(jt.What) + ".",
-			Reminders: []string{"solder fumes: ventilate", "sleeve the joint and tie it down clear of the rotor"}})
+		b.add(Step{Kind: StepJoin, Title: title, Detail: capitalise(jt.What) + ".", Reminders: jointReminders()})
 	}
 	b.add(Step{Kind: StepTest, Test: TestResistance, Title: "Test: resistance of each phase"})
 	b.add(Step{Kind: StepTest, Test: TestBalance, Title: "Test: resistance balance"})
@@ -214,4 +214,11 @@ func pathSuffix(paths, path int) string {
 		return ""
 	}
 	return fmt.Sprintf(" path %d", path)
+}
+
+// jointReminders go with every joint made at the terminals: parallel paths,
+// the star point, the delta corners (common practice).
+// Each step gets its own slice: plans are plain data a reader may change.
+func jointReminders() []string {
+	return []string{"solder fumes: ventilate", "sleeve the joint and tie it down clear of the rotor"}
 }
