@@ -168,7 +168,11 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	c := f.c
 	y := f.y
 	c.box(x0, y, w, h, Pen{Width: 0.4, Colour: Ink}, nil)
-	c.text(x0+2, y+4.5, sizeBody+1, Bold, Ink, left, fmt.Sprintf("%d. %s", n, t.Name))
+	title := t.Title
+	if title == "" {
+		title = t.Name
+	}
+	c.text(x0+2, y+4.5, sizeBody+1, Bold, Ink, left, fmt.Sprintf("%d. %s", n, title))
 	ty := c.para(x0+2, y+9, left0-4, sizeSmall, Regular, Ink, what)
 	if t.Caution != "" {
 		c.warningSign(x0+4.5, ty-2.4, 4.6)

@@ -91,7 +91,7 @@ func (b *builder) tests() error {
 		pathWord = fmt.Sprintf(" (each of the %d paths of every phase on its own, before they are joined)", b.j.Winding.Paths)
 	}
 	var ts []Test
-	ts = append(ts, Test{Name: TestContinuity,
+	ts = append(ts, Test{Name: TestContinuity, Title: "Continuity of every path",
 		What:  fmt.Sprintf("Continuity of every path from its start lead to its finish lead: %s%s. Each reads near its expected resistance, none open.", endsList(names), pathWord),
 		Limit: round3(ContinuityFactor * pathAmb), Unit: "ohm", Compare: "max",
 		Source: "common practice: an open circuit or a poor joint reads well above the expected resistance",
@@ -100,7 +100,7 @@ func (b *builder) tests() error {
 	if p.Connection.String() == "delta" {
 		beforeJoin = "delta corners"
 	}
-	ts = append(ts, Test{Name: TestPhaseInsulation,
+	ts = append(ts, Test{Name: TestPhaseInsulation, Title: "Insulation between phases",
 		What:  fmt.Sprintf("Insulation between phases, before the %s is made: %s, at %g V DC for 1 min.", beforeJoin, strings.Join(pairs, ", "), InsulationTestVolts),
 		Limit: MinInsulationMOhm, Unit: "Mohm", Compare: "min", Voltage: InsulationTestVolts,
 		Source:  "IEEE 43-2013 minimum for random-wound windings, borrowed here for phase to phase (the standard tests winding to ground)",
@@ -110,14 +110,14 @@ func (b *builder) tests() error {
 	for _, ph := range p.PhaseOhms {
 		expect = append(expect, fmt.Sprintf("%s %s", ph.Phase, formatOhm(ph.OhmAmbient)))
 	}
-	ts = append(ts, Test{Name: TestResistance,
+	ts = append(ts, Test{Name: TestResistance, Title: "Resistance of each phase",
 		What: fmt.Sprintf("Resistance of each phase with a four-wire (Kelvin) meter, the winding at room temperature; refer the readings to 20 °C by the copper coefficient. Expected at %g °C: %s (%s at 20 °C).",
 			p.AmbientC, strings.Join(expect, ", "), formatOhm(p.PhaseResistance20C)),
 		Limit: band, Unit: "%", Compare: "band", LowPercent: round1(lowPct), HighPercent: round1(highPct),
 		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band %+.1f %% .. %+.1f %%: about ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm (R goes as 1/d²), times ±%.0f %% for the length estimate (common practice)",
 			lowPct, highPct, tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
 		Note: "a star winding is read line to line; check converts the three readings to phase values"})
-	ts = append(ts, Test{Name: TestBalance,
+	ts = append(ts, Test{Name: TestBalance, Title: "Resistance balance",
 		What:  "Balance of the three phase resistances: (highest − lowest) / mean.",
 		Limit: BalanceLimitPercent, Unit: "%", Compare: "max",
 		Source: "EASA AR100-2020: random-wound windings within 2 % (1 % for form-wound)",
@@ -126,11 +126,11 @@ func (b *builder) tests() error {
 	if p.RatedPowerW < IEEE43MinPowerW {
 		irNote = fmt.Sprintf("this machine (about %.0f W) is below the scope of IEEE 43, which starts at 750 W: the limit is borrowed; ", p.RatedPowerW) + irNote
 	}
-	ts = append(ts, Test{Name: TestInsulation,
+	ts = append(ts, Test{Name: TestInsulation, Title: "Insulation resistance to the core",
 		What:  fmt.Sprintf("Insulation resistance of the whole winding (all leads joined) to the stator core at %g V DC, read after 1 min; correct the reading to 40 °C.", InsulationTestVolts),
 		Limit: MinInsulationMOhm, Unit: "Mohm", Compare: "min", Voltage: InsulationTestVolts,
 		Source: "IEEE 43-2013: 500 V DC below 1 kV rating; minimum 5 MΩ at 40 °C for random-wound windings", Caution: cautionIR, Note: irNote})
-	ts = append(ts, Test{Name: TestHighVoltage,
+	ts = append(ts, Test{Name: TestHighVoltage, Title: "High-voltage withstand",
 		What: fmt.Sprintf("High-voltage withstand: %.0f V AC 50/60 Hz for 1 min between the winding (all leads joined) and the core, after the insulation resistance has passed. No breakdown.",
 			hv),
 		Limit: 60, Unit: "s", Compare: "min", Voltage: hv,
@@ -138,7 +138,7 @@ func (b *builder) tests() error {
 			hvRule(p.RatedPowerW, p.RatedVoltageV), p.RatedVoltageV, p.RatedPowerW),
 		Caution: cautionHV,
 		Note:    "a repeated test (after rework, or at acceptance) is at 80 % of this voltage; rewound windings: EASA AR100-2020 tables 4-4 and 4-5; a DC test is about 1.7 × the AC value"})
-	bt := Test{Name: TestBackEMF,
+	bt := Test{Name: TestBackEMF, Title: "Back-EMF balance (optional, rotor fitted)",
 		What:  "Optional, with the rotor fitted: spin the rotor at a steady known speed with the leads open and read the three line voltages; they should agree.",
 		Limit: BackEMFBalancePercent, Unit: "%", Compare: "max",
 		Source:  "common practice; expected value from E = √2·π·f·N·k_w·Φ (textbook, e.g. Pyrhönen et al.)",

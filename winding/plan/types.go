@@ -208,6 +208,7 @@ type CoilStep struct {
 // Test is one line of the test plan.
 type Test struct {
 	Name    string  `json:"name"`
+	Title   string  `json:"title"` // in words, for people: "Insulation between phases"
 	What    string  `json:"what"`
 	Limit   float64 `json:"limit"`
 	Unit    string  `json:"unit"`
