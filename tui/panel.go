@@ -5,6 +5,7 @@ import (
 	"strconv"
 	"strings"
 
+	"github.com/charmbracelet/lipgloss"
 	"github.com/charmbracelet/x/ansi"
 
 	"coilwright/winding/plan"
@@ -36,33 +37,19 @@ func (b *lines) text(s string, render func(...string) string) {
 }
 
 // kv adds a labelled value; continuation lines are indented under the value.
-func (b *lines) kv(label, value string) {
-	if value == "" {
-		return
-	}
-	vw := b.w - labelWidth
-	if vw < 8 {
-		b.text(label+" "+value, b.st.value.Render)
-		return
-	}
-	pad := strings.Repeat(" ", labelWidth)
-	for i, ln := range strings.Split(ansi.Wrap(value, vw, " -"), "\n") {
-		lab := pad
-		if i == 0 {
-			lab = b.st.dim.Render(fmt.Sprintf("%-*s", labelWidth, label))
-		}
-		b.l = append(b.l, ansi.Truncate(lab, labelWidth, "")+b.st.value.Render(ln))
-	}
-}
+func (b *lines) kv(label, value string) { b.kvIn(label, value, b.st.value) }
 
 // kvStrong is kv with the value in bold: the words that must not be missed.
-func (b *lines) kvStrong(label, value string) {
-	vw := b.w - labelWidth
+func (b *lines) kvStrong(label, value string) { b.kvIn(label, value, b.st.strong) }
+
+// kvIn adds a labelled value drawn in the given style, wrapped under itself.
+func (b *lines) kvIn(label, value string, style lipgloss.Style) {
 	if value == "" {
 		return
 	}
+	vw := b.w - labelWidth
 	if vw < 8 {
-		b.text(label+" "+value, b.st.strong.Render)
+		b.text(label+" "+value, style.Render)
 		return
 	}
 	pad := strings.Repeat(" ", labelWidth)
@@ -71,7 +58,7 @@ func (b *lines) kvStrong(label, value string) {
 		if i == 0 {
 			lab = b.st.dim.Render(fmt.Sprintf("%-*s", labelWidth, label))
 		}
-		b.l = append(b.l, lab+b.st.strong.Render(ln))
+		b.l = append(b.l, ansi.Truncate(lab, labelWidth, "")+style.Render(ln))
 	}
 }
 
