@@ -54,15 +54,8 @@ func FuzzDemoVariants(f *testing.F) {
 		if slots > 240 || poles > 240 {
 			return
 		}
-		j := job.Demo()
-		j.Winding.Slots, j.Winding.Poles, j.Winding.Layers, j.Winding.Paths, j.Winding.Phases = slots, poles, layers, paths, phases
-		if delta {
-			j.Winding.Connection = "delta"
-		}
-		if inner {
-			j.Stator.Rotor = "inner"
-		}
-		j.Turns = job.Turns{PerCoil: turns}
+		j := jobtest.DemoVariant(jobtest.Variant{Slots: slots, Poles: poles, Layers: layers, Paths: paths,
+			Phases: phases, Delta: delta, InnerRotor: inner, TurnsPerCoil: turns})
 		j.Wire.BareDiameterMM, j.Wire.StrandsInHand = bare, strands
 		p, err := plan.Build(j)
 		if err != nil {

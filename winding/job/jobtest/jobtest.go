@@ -9,6 +9,8 @@ import (
 	"runtime"
 	"sort"
 	"testing"
+
+	"coilwright/winding/job"
 )
 
 // Dir is testdata/job/ of the repository, found from this file's own place.
@@ -40,4 +42,28 @@ func Seeds(tb testing.TB) [][]byte {
 		out = append(out, data)
 	}
 	return out
+}
+
+// Variant is a change to the demo job's winding, for tests that walk many
+// stators through the plan.
+type Variant struct {
+	Slots, Poles, Layers, Paths, Phases int
+	Delta, InnerRotor                   bool
+	TurnsPerCoil                        int // replaces the demo's target
+}
+
+// DemoVariant is the demo job with the variant's winding, connection, rotor
+// side and turns; the job may not validate (that is for the test to see).
+func DemoVariant(v Variant) *job.Job {
+	j := job.Demo()
+	j.Winding.Slots, j.Winding.Poles, j.Winding.Layers = v.Slots, v.Poles, v.Layers
+	j.Winding.Paths, j.Winding.Phases = v.Paths, v.Phases
+	if v.Delta {
+		j.Winding.Connection = "delta"
+	}
+	if v.InnerRotor {
+		j.Stator.Rotor = "inner"
+	}
+	j.Turns = job.Turns{PerCoil: v.TurnsPerCoil}
+	return j
 }
