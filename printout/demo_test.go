@@ -52,17 +52,7 @@ func TestDemoPackReadsBack(t *testing.T) {
 
 func BenchmarkDemoPack(b *testing.B) {
 	p := demoPlan(b)
-	for b.Loop() {
-		pk, err := Build(p, Options{})
-		if err != nil {
-			b.Fatal(err)
-		}
-		var buf bytes.Buffer
-		if err := Render(pk, &buf); err != nil {
-			b.Fatal(err)
-		}
-		b.SetBytes(int64(buf.Len()))
-	}
+	benchPack(b, p, Options{})
 }
 
 // BenchmarkDemoPackWithRecord prints the demo pack from a record in which
@@ -79,8 +69,14 @@ func BenchmarkDemoPackWithRecord(b *testing.B) {
 		}
 		pr.Steps[st.Index] = sp
 	}
+	benchPack(b, p, Options{Progress: pr})
+}
+
+// benchPack builds and renders the pack of p once per benchmark loop.
+func benchPack(b *testing.B, p *plan.Plan, o Options) {
+	b.Helper()
 	for b.Loop() {
-		pk, err := Build(p, Options{Progress: pr})
+		pk, err := Build(p, o)
 		if err != nil {
 			b.Fatal(err)
 		}

@@ -491,30 +491,10 @@ func TestGoldenModel(t *testing.T) {
 
 func BenchmarkBuildAndRender12(b *testing.B) {
 	p := fixturePlan(b, winding.Spec{Slots: 12, Poles: 10}, winding.Star)
-	for b.Loop() {
-		pk, err := Build(p, Options{})
-		if err != nil {
-			b.Fatal(err)
-		}
-		var buf bytes.Buffer
-		if err := Render(pk, &buf); err != nil {
-			b.Fatal(err)
-		}
-		b.SetBytes(int64(buf.Len()))
-	}
+	benchPack(b, p, Options{})
 }
 
 func BenchmarkBuildAndRender120(b *testing.B) {
 	p := fixturePlan(b, winding.Spec{Slots: 120, Poles: 112, Paths: 2}, winding.Star)
-	for b.Loop() {
-		pk, err := Build(p, Options{})
-		if err != nil {
-			b.Fatal(err)
-		}
-		var buf bytes.Buffer
-		if err := Render(pk, &buf); err != nil {
-			b.Fatal(err)
-		}
-		b.SetBytes(int64(buf.Len()))
-	}
+	benchPack(b, p, Options{})
 }
