@@ -78,7 +78,7 @@ func writeLayoutText(w io.Writer, l *winding.Layout) {
 	row("radial forces", map[bool]string{true: "balanced", false: "UNBALANCED (no rotational symmetry)"}[l.RadialForceBalanced])
 	row("LCM(Q, 2p)", fmt.Sprintf("%d cogging periods per revolution", l.LCM))
 	row("cogging factor 2pQ/LCM", fmt.Sprintf("%d  (lower is better)", l.CoggingFactor))
-	row("feasible parallel paths", joinInts(l.ParallelPaths))
+	row("feasible parallel paths", winding.NumberList(l.ParallelPaths))
 	fmt.Fprintln(w)
 
 	fmt.Fprintln(w, "Strongest MMF orders (spatial order = pole pairs of the wave)")
@@ -173,12 +173,4 @@ func strongestHarmonics(l *winding.Layout, n int) []winding.Harmonic {
 		}
 	}
 	return out
-}
-
-func joinInts(xs []int) string {
-	s := make([]string, len(xs))
-	for i, x := range xs {
-		s[i] = fmt.Sprint(x)
-	}
-	return strings.Join(s, ", ")
 }

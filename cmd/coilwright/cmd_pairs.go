@@ -216,6 +216,6 @@ func writePairsText(w io.Writer, ps []winding.Summary) {
 		}
 		fmt.Fprintf(w, "  %4d %4d  %6d  %-6s  %.4f %4d %6d  %7d  %-10s  %s\n",
 			p.Spec.Slots, p.Spec.Poles, p.Spec.Layers, p.Q, p.WindingFactor, p.Periodicity, p.LCM,
-			p.CoggingFactor, bal, joinInts(p.ParallelPaths))
+			p.CoggingFactor, bal, winding.NumberList(p.ParallelPaths))
 	}
 }

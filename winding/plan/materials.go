@@ -22,7 +22,7 @@ func (b *builder) materials() error {
 	if n := sharedSlots(l); n > 0 && b.sides == 2 {
 		p.Materials = append(p.Materials, Material{Item: "phase separator", Count: n,
 			SizeText: fmt.Sprintf("%.1f × %.0f mm, %g mm thick", p.Slot.DepthMM, b.stackPlusCuffs(), j.Stator.SeparatorMM),
-			LengthMM: b.stackPlusCuffs(), Note: "one in every slot that holds two phases: slots " + joinInts(sharedList(l))})
+			LengthMM: b.stackPlusCuffs(), Note: "one in every slot that holds two phases: slots " + winding.NumberList(sharedList(l))})
 	}
 	leads := 2 * len(l.PhaseNames) * l.Spec.Paths
 	p.Materials = append(p.Materials, Material{Item: "lead sleeving", Count: leads,
@@ -60,12 +60,4 @@ func sharedList(l *winding.Layout) []int {
 		}
 	}
 	return out
-}
-
-func joinInts(xs []int) string {
-	s := make([]string, len(xs))
-	for i, x := range xs {
-		s[i] = fmt.Sprint(x)
-	}
-	return strings.Join(s, ", ")
 }

@@ -110,7 +110,7 @@ func (c *checker) openCircuit(open []int) {
 	for _, i := range open {
 		c.add(Finding{Severity: Fail, Phase: c.name(i), Test: "resistance", Teeth: c.teethOf(i), Message: fmt.Sprintf(
 			"phase %s is open: a broken wire, enamel not stripped at a lead or joint, or a joint not made between %s1 and %s2; check continuity coil by coil (teeth %s)",
-			c.name(i), c.name(i), c.name(i), joinInts(c.teethOf(i)))})
+			c.name(i), c.name(i), c.name(i), winding.NumberList(c.teethOf(i)))})
 	}
 }
 
@@ -160,7 +160,7 @@ func (c *checker) outlierFinding(x int, rx, ref float64, atTemp [3]float64) Find
 		coils := k / float64(max(turns, 1))
 		if n := math.Round(coils); n >= 1 && math.Abs(coils-n) <= 0.2 {
 			causes = append(causes, fmt.Sprintf("about %s share (%.0f turns at %d per coil)%s: a coil shorted or bypassed (a jumper touching, start and finish joined, a coil left out); look at teeth %s",
-				plural(int(n), "one coil's", "coils'"), k, turns, inPath, joinInts(c.teethOf(x))))
+				plural(int(n), "one coil's", "coils'"), k, turns, inPath, winding.NumberList(c.teethOf(x))))
 			f.Teeth = c.teethOf(x)
 		} else {
 			causes = append(causes, fmt.Sprintf("about %.0f turns fewer than planned%s: turns miscounted on a coil, or shorted turns (enamel damaged at a slot exit)", k, inPath))
@@ -292,12 +292,4 @@ func (c *checker) teethOf(phase int) []int {
 		}
 	}
 	return t
-}
-
-func joinInts(xs []int) string {
-	s := make([]string, len(xs))
-	for i, x := range xs {
-		s[i] = fmt.Sprint(x)
-	}
-	return strings.Join(s, ", ")
 }
