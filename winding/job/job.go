@@ -119,6 +119,13 @@ type Rating struct {
 	SpeedRPM float64 `toml:"speed_rpm"` // rated speed
 	VoltageV float64 `toml:"voltage_v"` // rated line voltage rms; default the EMF at rated speed
 	PowerW   float64 `toml:"power_w"`   // rated power; default estimated from voltage and current
+	// ThermalClass is the insulation system's thermal class (IEC 60085:
+	// 105, 130, 155 or 180); it sets the working temperature of the copper
+	// loss. Default 130.
+	ThermalClass int `toml:"thermal_class"`
+	// CopperTemperatureC is the working temperature of the copper, when known
+	// better than from the thermal class (a temperature-rise test).
+	CopperTemperatureC float64 `toml:"copper_temperature_c"`
 }
 
 // Build holds the bench allowances and the shop conditions.

@@ -123,6 +123,8 @@ func TestRefusals(t *testing.T) {
 		{"test coil without turns", "per_coil = 40", "per_coil = 40\n[flux.test_coil]\nspeed_rpm = 100\nvolts_rms = 1", "flux.test_coil.turns", 22, "at least 1", false},
 		{"dc bus on five phases", "poles = 10", "poles = 10\nphases = 5", "turns.target", 0, "three-phase", true},
 		{"no current", "current_a = 1", "", "rating.current_a", 0, "missing", false},
+		{"thermal class without a reference temperature", "current_a = 1", "current_a = 1\nthermal_class = 120", "rating.thermal_class", 24, "105, 130, 155 or 180", false},
+		{"copper hotter than any class", "current_a = 1", "current_a = 1\ncopper_temperature_c = 400", "rating.copper_temperature_c", 24, "-40 and 250", false},
 		{"fill beyond range", "lead_length_mm = 250", "lead_length_mm = 250\npractical_fill = 0.9", "build.practical_fill", 27, "0.30 to 0.45", false},
 		{"ambient too hot", "lead_length_mm = 250", "lead_length_mm = 250\nambient_c = 400", "build.ambient_c", 27, "-40 and 150", false},
 		{"no lead", "lead_length_mm = 250", "", "build.lead_length_mm", 0, "missing", false},

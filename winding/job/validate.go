@@ -19,7 +19,16 @@ const (
 	DefaultStrands       = 1
 	DefaultSpoolMargin   = 0.10
 	DefaultPracticalFill = 0.40 // common practice: hand-wound round wire reaches 0.30–0.45
+	// DefaultThermalClass is class 130 (B), the usual class of the polyester
+	// film and varnish of small hand-wound machines (common practice).
+	DefaultThermalClass = 130
 )
+
+// ReferenceTemperatureC gives the reference temperature of IEC 60034-1
+// (clause 8, the temperature to which losses are corrected) for each thermal
+// class of IEC 60085: 75 °C for 105 (A), 95 °C for 130 (B), 115 °C for 155 (F),
+// 135 °C for 180 (H) (from memory).
+var ReferenceTemperatureC = map[int]float64{105: 75, 130: 95, 155: 115, 180: 135}
 
 // Normalize fills the defaults of keys left out. Parse calls it; call it on a
 // Job built in code before Validate.
@@ -352,7 +361,17 @@ func (j *Job) checkRating() *FieldError {
 	if !j.Flux.Given() && r.VoltageV == 0 {
 		return j.Fail("rating.voltage_v", "", "with no flux source the rated voltage cannot be computed, and the high-voltage test needs it", "give the rated line voltage rms")
 	}
-	return j.rangeCheck("rating.power_w", r.PowerW, 0, 1e8, "W", "the rated output")
+	if e := j.rangeCheck("rating.power_w", r.PowerW, 0, 1e8, "W", "the rated output"); e != nil {
+		return e
+	}
+	if _, ok := ReferenceTemperatureC[r.ThermalClass]; r.ThermalClass != 0 && !ok {
+		return j.Fail("rating.thermal_class", fmt.Sprint(r.ThermalClass), "must be a thermal class of IEC 60085 with a reference temperature: 105, 130, 155 or 180",
+			"130 (B) is usual for small hand-wound machines; or give rating.copper_temperature_c")
+	}
+	if r.CopperTemperatureC != 0 {
+		return j.rangeCheck("rating.copper_temperature_c", r.CopperTemperatureC, -40, 250, "°C", "the copper temperature at full load, e.g. 95 for class 130 (B)")
+	}
+	return nil
 }
 
 func (j *Job) checkBuild() *FieldError {

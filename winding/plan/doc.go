@@ -10,7 +10,11 @@
 // practice for a hand-wound coil). The EMF of a phase is E = √2·π·f·N·k_w·Φ
 // with f = p·n/60 and N the series turns per phase (textbook; e.g. Pyrhönen et
 // al., Design of Rotating Electrical Machines). Resistance is ρ·L/A at 20 °C
-// with ρ = 1/58 Ω·mm²/m and the IEC 60028 temperature correction.
+// with ρ = 1/58 Ω·mm²/m and the IEC 60028 temperature correction. A DC-bus
+// target is met when the peak line EMF √2·V_LL reaches the bus plus the
+// diode drops (a diode bridge into a battery conducts only above it); the
+// cut-in reported is that of the whole turns built. The copper loss is at the
+// working temperature of the thermal class (IEC 60034-1) or the job's own.
 //
 // Conventions follow package winding: teeth 1..Q counter-clockwise from the
 // lead end, slot k after tooth k, directions seen from the air gap. Lengths of

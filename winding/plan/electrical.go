@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"coilwright/winding/job"
 	"coilwright/winding/wire"
 )
 
@@ -37,7 +38,7 @@ func (b *builder) electrical() error {
 	p.PhaseResistanceAmbient = wire.ResistanceAt(p.PhaseResistance20C, p.AmbientC)
 	p.PhaseCurrentA = b.phaseCurr
 	p.CurrentDensityAmm2 = b.phaseCurr / (float64(j.Winding.Paths) * area)
-	p.CopperLossW = float64(phases) * b.phaseCurr * b.phaseCurr * p.PhaseResistanceAmbient
+	b.copperLoss()
 	p.CopperMassKg = wire.MassKg(p.CopperLengthM, b.strandArea)
 	p.BuyLengthM *= 1 + j.Build.SpoolMargin
 	p.BuyMassKg = wire.MassKg(p.BuyLengthM, b.strandArea)
@@ -67,6 +68,38 @@ func (b *builder) electrical() error {
 		p.RatedPowerEstimated = true
 	}
 	return nil
+}
+
+// copperLoss gives the copper loss of all phases at rated current, m·I²·R,
+// at the working temperature and at the ambient. It reads the plan's own
+// phase resistance, so it follows whatever that resistance includes.
+func (b *builder) copperLoss() {
+	p, r := b.p, b.j.Rating
+	m := float64(len(p.Layout.PhaseNames))
+	switch {
+	case r.CopperTemperatureC != 0:
+		p.CopperLossTemperatureC = r.CopperTemperatureC
+		p.CopperLossTemperatureBasis = "rating.copper_temperature_c"
+	case r.ThermalClass != 0:
+		p.CopperLossTemperatureC = job.ReferenceTemperatureC[r.ThermalClass]
+		p.CopperLossTemperatureBasis = fmt.Sprintf("IEC 60034-1 reference temperature of thermal class %s", thermalClassName(r.ThermalClass))
+	default:
+		p.CopperLossTemperatureC = job.ReferenceTemperatureC[job.DefaultThermalClass]
+		p.CopperLossTemperatureBasis = fmt.Sprintf("IEC 60034-1 reference temperature of thermal class %s, taken as the class is not given (rating.thermal_class)", thermalClassName(job.DefaultThermalClass))
+	}
+	p.PhaseResistanceHot = wire.ResistanceAt(p.PhaseResistance20C, p.CopperLossTemperatureC)
+	i2 := b.phaseCurr * b.phaseCurr
+	p.CopperLossW = m * i2 * p.PhaseResistanceHot
+	p.CopperLossAmbientW = m * i2 * p.PhaseResistanceAmbient
+}
+
+// thermalClassName gives a class of IEC 60085 with its letter: "130 (B)".
+func thermalClassName(c int) string {
+	letter := map[int]string{105: "A", 130: "B", 155: "F", 180: "H"}[c]
+	if letter == "" {
+		return fmt.Sprint(c)
+	}
+	return fmt.Sprintf("%d (%s)", c, letter)
 }
 
 // HVTestVolts returns the AC withstand voltage of IEC 60034-1 clause 9.2 for a

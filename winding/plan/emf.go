@@ -7,10 +7,21 @@ import (
 	"coilwright/winding/job"
 )
 
-// BridgeFactor is the ratio of the DC output of an ideal six-pulse diode
-// bridge to its line-to-line rms input: 3√2/π ≈ 1.35 (Mohan, Undeland,
-// Robbins, Power Electronics, ch. 5; from memory).
+// BridgeFactor is the ratio of the mean DC output of an ideal six-pulse
+// diode bridge into a resistive load to its line-to-line rms input:
+// 3√2/π ≈ 1.35 (Mohan, Undeland, Robbins, Power Electronics, ch. 5; from
+// memory).
 var BridgeFactor = 3 * math.Sqrt2 / math.Pi
+
+// CutInLineRMS returns the line-to-line rms EMF at which a three-phase diode
+// bridge starts to charge a battery or a capacitor bank of busV, its two
+// conducting diodes dropping diodesV: with a stiff voltage on the DC side no
+// current flows until the peak of the line voltage, √2·V_LL, exceeds the bus
+// plus the drops (peak-conduction of a diode rectifier into a capacitive or
+// battery load; Mohan, Undeland, Robbins, Power Electronics, ch. 5, from
+// memory). The mean 1.35·V_LL of BridgeFactor is the output into a resistor,
+// which a battery is not.
+func CutInLineRMS(busV, diodesV float64) float64 { return (busV + diodesV) / math.Sqrt2 }
 
 // ElectricalHz returns the electrical frequency at a mechanical speed:
 // f = p·n/60.
@@ -84,8 +95,8 @@ func (b *builder) turns() error {
 			phaseV = t.Volts / b.lineFactor
 			what = fmt.Sprintf("line EMF %g V rms at %g rpm", t.Volts, t.SpeedRPM)
 		case job.TargetDCBus:
-			phaseV = (t.Volts + t.BridgeDropV) / BridgeFactor / b.lineFactor
-			what = fmt.Sprintf("DC bus %g V at %g rpm (cut-in) through a three-phase diode bridge", t.Volts, t.SpeedRPM)
+			phaseV = CutInLineRMS(t.Volts, t.BridgeDropV) / b.lineFactor
+			what = fmt.Sprintf("charging a %g V DC bus from %g rpm (cut-in) through a three-phase diode bridge", t.Volts, t.SpeedRPM)
 			if t.BridgeDropV > 0 {
 				what += fmt.Sprintf(" dropping %g V", t.BridgeDropV)
 			}
@@ -131,10 +142,12 @@ func (b *builder) turns() error {
 		case job.TargetLineEMF:
 			e.AtTargetV = ph * b.lineFactor
 		case job.TargetDCBus:
-			e.CutInSpeedRPM = t.SpeedRPM
-			e.LineRMSAtCutIn = ph * b.lineFactor
-			e.DCBusAtCutIn = e.LineRMSAtCutIn * BridgeFactor
-			e.AtTargetV = e.DCBusAtCutIn - t.BridgeDropV
+			// The built winding (whole turns, rounded up) reaches the
+			// cut-in line voltage below the target speed.
+			e.LineRMSAtCutIn = CutInLineRMS(t.Volts, t.BridgeDropV)
+			e.PeakLineAtCutIn = math.Sqrt2 * e.LineRMSAtCutIn
+			e.CutInSpeedRPM = e.LineRMSAtCutIn / (e.VoltsPerRPMPhase * b.lineFactor)
+			e.AtTargetV = math.Sqrt2*ph*b.lineFactor - t.BridgeDropV
 		}
 	}
 	p.EMF = e

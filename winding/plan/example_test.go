@@ -14,11 +14,13 @@ func ExampleBuild() {
 		return
 	}
 	fmt.Printf("%d turns per coil, fill %.2f, mean turn %.1f mm\n", p.TurnsPerCoil, p.SlotFill, p.MeanTurnLengthMM)
-	fmt.Printf("phase %.1f mΩ at 20 °C, DC bus %.1f V at %g rpm\n", 1000*p.PhaseResistance20C, p.EMF.DCBusAtCutIn, p.EMF.CutInSpeedRPM)
+	fmt.Printf("phase %.1f mΩ at 20 °C, charging from %.0f rpm\n", 1000*p.PhaseResistance20C, p.EMF.CutInSpeedRPM)
+	fmt.Printf("copper loss %.1f W at %g °C\n", p.CopperLossW, p.CopperLossTemperatureC)
 	fmt.Println(p.Steps[3].Title)
 	// Output:
 	// 18 turns per coil, fill 0.38, mean turn 84.9 mm
-	// phase 139.2 mΩ at 20 °C, DC bus 27.7 V at 300 rpm
+	// phase 139.2 mΩ at 20 °C, charging from 286 rpm
+	// copper loss 22.8 W at 95 °C
 	// Coil 1 of 24: tooth 1, phase U, cw, 18 turns
 }
 

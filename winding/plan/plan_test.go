@@ -98,7 +98,7 @@ func mustPlan(t testing.TB, j *job.Job) *Plan {
 //	cut        12.62154 + 0.5 + 4·0.030               = 13.24154 m per path
 //	buy        3 · 13.24154 · 1.10                    = 43.69708 m, 0.0762753 kg
 //	J          1 A / 0.1963495 mm²                    = 5.09296 A/mm²
-//	loss       3 · 1² · 1.108293                      = 3.32488 W (at 20 °C)
+//	loss       3 · 1² · 1.108293                      = 3.32488 W (at 20 °C; hot in TestCopperLossHot)
 //	HV test    under 1 kW and 100 V: 500 + 2·24 = 548, rounded up to 550 V
 //	           (IEC 60034-1 clause 9.2)
 func TestWorkedExample(t *testing.T) {
@@ -133,7 +133,7 @@ func TestWorkedExample(t *testing.T) {
 		{"BuyLengthM", p.BuyLengthM, 43.69708, 1e-5},
 		{"BuyMassKg", p.BuyMassKg, 0.0762753, 1e-7},
 		{"CurrentDensityAmm2", p.CurrentDensityAmm2, 5.09296, 1e-5},
-		{"CopperLossW", p.CopperLossW, 3.32488, 1e-5},
+		{"CopperLossAmbientW", p.CopperLossAmbientW, 3.32488, 1e-5},
 		{"hv_withstand voltage", testNamed(p, TestHighVoltage).Voltage, 550, 0},
 	}
 	for _, c := range cases {
@@ -233,29 +233,123 @@ func TestFluxFromAirGap(t *testing.T) {
 }
 
 // The demo solves its turns for a DC bus: the smallest whole number whose
-// ideal bridge output 1.35·V_LL (Mohan et al.) reaches 26 + 1.6 V at 300 rpm.
+// peak line EMF √2·V_LL reaches the battery plus the diodes, 26 + 1.6 V, at
+// 300 rpm (peak conduction into a stiff DC voltage; Mohan, Undeland, Robbins,
+// Power Electronics, ch. 5, from memory). Worked by hand: V_LL = 27.6/√2 =
+// 19.516 V, V_ph = 11.268 V; the test coil gives 0.65683 V per turn per coil
+// at 300 rpm, so 11.268/0.65683 = 17.16 turns, rounded up to 18.
 func TestDemoSolvedTurns(t *testing.T) {
 	p := mustPlan(t, job.Demo())
-	if math.Abs(BridgeFactor-1.3505) > 1e-4 {
-		t.Errorf("BridgeFactor = %.5f; want 1.3505 (3√2/π)", BridgeFactor)
-	}
 	e := p.EMF
 	if !p.TurnsSolved || e == nil {
 		t.Fatalf("Build(demo): turns not solved")
 	}
+	if p.TurnsPerCoil != 18 {
+		t.Errorf("Build(demo).TurnsPerCoil = %d; want 18", p.TurnsPerCoil)
+	}
 	need := 26 + 1.6
-	if e.DCBusAtCutIn < need {
-		t.Errorf("Build(demo).EMF.DCBusAtCutIn = %.3f; want at least %.1f", e.DCBusAtCutIn, need)
+	peak := func(turns float64) float64 {
+		return math.Sqrt2 * math.Sqrt(3) * e.VoltsPerRPMPhase / float64(p.TurnsPerCoil) * turns * 300
 	}
-	fewer := e.DCBusAtCutIn * float64(p.TurnsPerCoil-1) / float64(p.TurnsPerCoil)
-	if fewer >= need {
-		t.Errorf("Build(demo): %d turns give %.3f V; one turn fewer (%.3f V) would do", p.TurnsPerCoil, e.DCBusAtCutIn, fewer)
+	if got := peak(float64(p.TurnsPerCoil)); got < need {
+		t.Errorf("Build(demo): peak line EMF at 300 rpm = %.3f V; want at least %.1f", got, need)
 	}
-	if math.Abs(e.DCBusAtCutIn-BridgeFactor*e.LineRMSAtCutIn) > 1e-9 || math.Abs(e.AtTargetV-(e.DCBusAtCutIn-1.6)) > 1e-9 {
-		t.Errorf("Build(demo).EMF = %+v; DC bus and net value inconsistent", e)
+	if fewer := peak(float64(p.TurnsPerCoil - 1)); fewer >= need {
+		t.Errorf("Build(demo): %d turns; one fewer gives %.3f V peak, enough", p.TurnsPerCoil, fewer)
 	}
-	if r := e.LineRMSAtRated / e.LineRMSAtCutIn; math.Abs(r-500.0/300) > 1e-9 {
-		t.Errorf("EMF rated/cut-in = %.6f; want 500/300 (EMF is proportional to speed)", r)
+	if math.Abs(e.AtTargetV-(peak(float64(p.TurnsPerCoil))-1.6)) > 1e-9 {
+		t.Errorf("Build(demo).EMF.AtTargetV = %.4f; want the peak line EMF less 1.6 V", e.AtTargetV)
+	}
+	if math.Abs(e.PeakLineAtCutIn-need) > 1e-9 || math.Abs(e.LineRMSAtCutIn-need/math.Sqrt2) > 1e-9 {
+		t.Errorf("Build(demo).EMF cut-in line %.4f V rms, peak %.4f V; want %.4f and %.1f", e.LineRMSAtCutIn, e.PeakLineAtCutIn, need/math.Sqrt2, need)
+	}
+	if r := e.LineRMSAtRated / (e.VoltsPerRPMPhase * math.Sqrt(3) * 500); math.Abs(r-1) > 1e-9 {
+		t.Errorf("EMF at 500 rpm / (k·500) = %.6f; want 1 (EMF is proportional to speed)", r)
+	}
+}
+
+// TestCutInBuiltWinding: the cut-in reported is the built winding's, where
+// the peak line EMF √2·k_LL·n reaches V_bus + V_diodes, so n = (V_bus +
+// V_diodes)/(√2·k_LL), below the target speed when the turns were rounded up.
+// The demo by hand: k_LL = √3·0.0394098 = 0.0682597 V/rpm; n = 27.6/(√2·
+// 0.0682597) = 285.9 rpm. With a test coil reading 5.0 V instead of 1.70 V the
+// flux is 2.94 times larger and far fewer turns are needed; the rounding then
+// moves the cut-in more.
+func TestCutInBuiltWinding(t *testing.T) {
+	five := strings.Replace(string(job.DemoTOML()), "volts_rms = 1.70", "volts_rms = 5.0", 1)
+	cases := []struct {
+		name   string
+		src    string
+		byHand float64 // rpm, 0 where not worked by hand
+	}{
+		{"demo", string(job.DemoTOML()), 285.9},
+		{"demo, test coil 5.0 V", five, 0},
+	}
+	for _, c := range cases {
+		p := mustPlan(t, mustJob(t, c.src))
+		e := p.EMF
+		kLL := e.LineRMSAtRated / e.RatedSpeedRPM
+		want := (26 + 1.6) / (math.Sqrt2 * kLL)
+		if math.Abs(e.CutInSpeedRPM-want) > 0.01*want {
+			t.Errorf("%s: EMF.CutInSpeedRPM = %.2f; want (V_bus+V_d)/(√2·k_LL) = %.2f", c.name, e.CutInSpeedRPM, want)
+		}
+		if c.byHand > 0 && math.Abs(e.CutInSpeedRPM-c.byHand) > 0.1 {
+			t.Errorf("%s: EMF.CutInSpeedRPM = %.2f; want %.1f worked by hand", c.name, e.CutInSpeedRPM, c.byHand)
+		}
+		if e.CutInSpeedRPM > 300 {
+			t.Errorf("%s: cut-in %.1f rpm is above the 300 rpm target; the turns were rounded the wrong way", c.name, e.CutInSpeedRPM)
+		}
+		// One turn fewer would cut in above the target.
+		fewer := e.CutInSpeedRPM * float64(p.TurnsPerCoil) / float64(p.TurnsPerCoil-1)
+		if p.TurnsPerCoil > 1 && fewer <= 300 {
+			t.Errorf("%s: %d turns; %d would cut in at %.1f rpm, already within the target", c.name, p.TurnsPerCoil, p.TurnsPerCoil-1, fewer)
+		}
+	}
+}
+
+// TestCopperLossHot: the copper loss is m·I²·R(T) at the working
+// temperature, R(T) = R20·(234.5 + T)/254.5 (IEC 60028), T the reference
+// temperature of IEC 60034-1 for the thermal class (from memory: 105 (A)
+// 75 °C, 130 (B) 95 °C, 155 (F) 115 °C, 180 (H) 135 °C) or the job's own.
+// The worked example (R20 = 1.108293 Ω, 3 phases at 1 A) by hand: at 95 °C
+// 3·1²·1.108293·329.5/254.5 = 4.304699 W; at 20 °C 3.324879 W.
+func TestCopperLossHot(t *testing.T) {
+	cases := []struct {
+		name  string
+		extra string
+		tempC float64
+		lossW float64 // by hand, 0 where not worked
+	}{
+		{"class not given: 130 (B)", "", 95, 4.304699},
+		{"class 155 (F)", "thermal_class = 155\n", 115, 3 * 1.108293 * 349.5 / 254.5},
+		{"class 105 (A)", "thermal_class = 105\n", 75, 3 * 1.108293 * 309.5 / 254.5},
+		{"measured 60 °C", "copper_temperature_c = 60\n", 60, 3 * 1.108293 * 294.5 / 254.5},
+	}
+	for _, c := range cases {
+		src := strings.Replace(handJob, "voltage_v = 24\n", "voltage_v = 24\n"+c.extra, 1)
+		p := mustPlan(t, mustJob(t, src))
+		if p.CopperLossTemperatureC != c.tempC {
+			t.Errorf("%s: CopperLossTemperatureC = %g; want %g", c.name, p.CopperLossTemperatureC, c.tempC)
+		}
+		want := 3 * p.PhaseResistance20C * (234.5 + c.tempC) / 254.5
+		if math.Abs(p.CopperLossW-want) > 1e-9*want {
+			t.Errorf("%s: CopperLossW = %.6f; want m·I²·R(T) = %.6f", c.name, p.CopperLossW, want)
+		}
+		if math.Abs(p.CopperLossW-c.lossW) > 2e-5 {
+			t.Errorf("%s: CopperLossW = %.6f; want %.6f by hand", c.name, p.CopperLossW, c.lossW)
+		}
+		if math.Abs(p.CopperLossAmbientW-3*p.PhaseResistance20C) > 1e-9 {
+			t.Errorf("%s: CopperLossAmbientW = %.6f; want 3·R20 = %.6f at 20 °C", c.name, p.CopperLossAmbientW, 3*p.PhaseResistance20C)
+		}
+	}
+	// The demo: 6.5 A in each of 3 phases at 95 °C, the ambient 15 °C.
+	p := mustPlan(t, job.Demo())
+	want := 3 * 6.5 * 6.5 * p.PhaseResistance20C * (234.5 + 95) / 254.5
+	if p.CopperLossTemperatureC < 75 || math.Abs(p.CopperLossW-want) > 1e-9*want {
+		t.Errorf("Build(demo).CopperLossW = %.4f at %g °C; want %.4f at 95 °C", p.CopperLossW, p.CopperLossTemperatureC, want)
+	}
+	if r := p.CopperLossW / p.CopperLossAmbientW; math.Abs(r-329.5/249.5) > 1e-9 {
+		t.Errorf("Build(demo) hot/ambient copper loss = %.5f; want 329.5/249.5 (95 °C over 15 °C)", r)
 	}
 }
 

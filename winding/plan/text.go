@@ -50,8 +50,9 @@ func (p *Plan) Text() string {
 			row("", "at %g rpm: phase %.2f V, line %.2f V rms (open circuit)", e.RatedSpeedRPM, e.PhaseRMSAtRated, e.LineRMSAtRated)
 		}
 		if e.CutInSpeedRPM > 0 {
-			row("", "at %g rpm cut-in: line %.2f V rms, DC bus %.2f V ideal, %.2f V after the diodes (target %g V)",
-				e.CutInSpeedRPM, e.LineRMSAtCutIn, e.DCBusAtCutIn, e.AtTargetV, e.TargetV)
+			row("", "cut-in at %.1f rpm: line %.2f V rms, its peak %.2f V = bus %.2f V + diodes %.2f V (current flows above it)",
+				e.CutInSpeedRPM, e.LineRMSAtCutIn, e.PeakLineAtCutIn, e.TargetV, e.PeakLineAtCutIn-e.TargetV)
+			row("", "at %g rpm the peak line EMF less the diodes is %.2f V (target %g V)", e.TargetSpeedRPM, e.AtTargetV, e.TargetV)
 		} else if p.TurnsSolved {
 			row("", "at %g rpm the whole turns give %.2f V (target %g V)", e.TargetSpeedRPM, e.AtTargetV, e.TargetV)
 		}
@@ -90,7 +91,8 @@ func (p *Plan) Text() string {
 	} else {
 		row("Resistance", "phase %s at 20 °C, %s at %g °C (IEC 60028)", formatOhm(p.PhaseResistance20C), formatOhm(p.PhaseResistanceAmbient), p.AmbientC)
 	}
-	row("Current", "%.2f A per phase, %.2f A/mm², copper loss %.1f W at %g °C", p.PhaseCurrentA, p.CurrentDensityAmm2, p.CopperLossW, p.AmbientC)
+	row("Current", "%.2f A per phase, %.2f A/mm²", p.PhaseCurrentA, p.CurrentDensityAmm2)
+	row("", "copper loss %.1f W at %g °C working (%s); %.1f W at %g °C", p.CopperLossW, p.CopperLossTemperatureC, p.CopperLossTemperatureBasis, p.CopperLossAmbientW, p.AmbientC)
 	row("Copper", "%.1f m in the winding with leads (%.3f kg); buy %.1f m (%.3f kg)", p.CopperLengthM, p.CopperMassKg, p.BuyLengthM, p.BuyMassKg)
 	tw.Flush()
 

@@ -35,7 +35,14 @@ type Plan struct {
 	AmbientC               float64 `json:"ambient_c"`
 	RatedCurrentA          float64 `json:"rated_current_a"`
 	CurrentDensityAmm2     float64 `json:"current_density_a_per_mm2"`
-	CopperLossW            float64 `json:"copper_loss_w"` // all phases at rated current, at ambient
+	CopperLossW            float64 `json:"copper_loss_w"` // all phases at rated current, at CopperLossTemperatureC
+	// CopperLossTemperatureC is the working temperature of the copper loss:
+	// the job's copper_temperature_c, else the IEC 60034-1 reference
+	// temperature of its thermal class.
+	CopperLossTemperatureC     float64 `json:"copper_loss_temperature_c"`
+	CopperLossTemperatureBasis string  `json:"copper_loss_temperature_basis"` // where the temperature comes from, in words
+	PhaseResistanceHot         float64 `json:"phase_resistance_hot_ohm"`      // at CopperLossTemperatureC
+	CopperLossAmbientW         float64 `json:"copper_loss_ambient_w"`         // all phases at rated current, at AmbientC
 
 	// Added by the plan builder (the fields above are the shared contract).
 	PhaseOhms           []PhaseOhm `json:"phase_ohms"`      // each phase between its terminals, from its own path lengths
@@ -68,19 +75,21 @@ const (
 
 // EMF reports the voltage the chosen turns give.
 type EMF struct {
-	FluxPerPoleWb    float64 `json:"flux_per_pole_wb"`
-	RatedSpeedRPM    float64 `json:"rated_speed_rpm"`
-	PhaseRMSAtRated  float64 `json:"phase_rms_at_rated_v"`
-	LineRMSAtRated   float64 `json:"line_rms_at_rated_v"`
+	FluxPerPoleWb   float64 `json:"flux_per_pole_wb"`
+	RatedSpeedRPM   float64 `json:"rated_speed_rpm"`
+	PhaseRMSAtRated float64 `json:"phase_rms_at_rated_v"`
+	LineRMSAtRated  float64 `json:"line_rms_at_rated_v"`
+	// CutInSpeedRPM is the speed at which the built winding's peak line
+	// EMF reaches the DC bus plus the diode drops (DC-bus targets).
 	CutInSpeedRPM    float64 `json:"cut_in_speed_rpm,omitempty"`
 	LineRMSAtCutIn   float64 `json:"line_rms_at_cut_in_v,omitempty"`
-	DCBusAtCutIn     float64 `json:"dc_bus_at_cut_in_v,omitempty"` // ideal six-pulse diode bridge
-	VoltsPerRPMPhase float64 `json:"phase_rms_v_per_rpm"`          // for back-EMF checks at any speed
-	Target           string  `json:"target,omitempty"`             // what the turns were solved for, in words
+	PeakLineAtCutIn  float64 `json:"peak_line_at_cut_in_v,omitempty"` // √2·V_LL = bus + diode drops
+	VoltsPerRPMPhase float64 `json:"phase_rms_v_per_rpm"`             // for back-EMF checks at any speed
+	Target           string  `json:"target,omitempty"`                // what the turns were solved for, in words
 
 	TargetV        float64 `json:"target_v,omitempty"`         // the target as written
 	TargetSpeedRPM float64 `json:"target_speed_rpm,omitempty"` // the speed it is to be reached at
-	AtTargetV      float64 `json:"at_target_v,omitempty"`      // what the whole turns give there (DC bus: net of the diode drop)
+	AtTargetV      float64 `json:"at_target_v,omitempty"`      // what the whole turns give there (DC bus: the peak line EMF net of the diode drops)
 }
 
 // Wire is the conductor as wound: one or more strands in hand.
