@@ -32,6 +32,6 @@ func ExampleNew() {
 		}
 	}
 	// Output:
-	// coil 1 of 24                                                                        step 4 of 74
+	// coil 1 of 24                                                                        step 4 of 78
 	// from   start lead U1 (300 mm)
 }

@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"fmt"
 	"os"
 	"path/filepath"
 	"strings"
@@ -162,7 +163,7 @@ func TestSheetPrintsTheRecord(t *testing.T) {
 	}
 	text := pdfText(t, out)
 	for _, want := range []string{
-		"3 of 74 steps done, 2 of 24 coils, as recorded on 2026-11-21.",
+		fmt.Sprintf("3 of %d steps done, 2 of 24 coils, as recorded on 2026-11-21.", demoSteps(t)),
 		"note 2026-11-21: " + note,
 		"\n17\nplan 18\n",    // coil B: 17 counted against 18
 		"\n18\n2026-11-21\n", // coil A: 18 counted, done that day
@@ -215,7 +216,17 @@ func TestSheetDemoRecord(t *testing.T) {
 	if !strings.Contains(stderr, "cut short") {
 		t.Errorf("sheet --demo over a torn record: stderr %q does not say the last line was left out", stderr)
 	}
-	if text := pdfText(t, out); !strings.Contains(text, "1 of 74 steps done, 0 of 24 coils, as recorded on 2026-11-22.") {
+	if text := pdfText(t, out); !strings.Contains(text, fmt.Sprintf("1 of %d steps done, 0 of 24 coils, as recorded on 2026-11-22.", demoSteps(t))) {
 		t.Errorf("sheet --demo does not print the demo record")
 	}
+}
+
+// demoSteps is the number of steps of the demo plan.
+func demoSteps(t *testing.T) int {
+	t.Helper()
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		t.Fatal(err)
+	}
+	return len(p.Steps)
 }

@@ -16,6 +16,12 @@
 // cut-in reported is that of the whole turns built. The copper loss is at the
 // working temperature of the thermal class (IEC 60034-1) or the job's own.
 //
+// Polarity: with DC entering a phase at its start terminal, a tooth whose coil
+// is wound clockwise seen from the air gap shows a south pole at its face,
+// counter-clockwise a north pole (right-hand rule). The plan lists the pole of
+// every wound tooth and puts a polarity test after each phase's last coil and
+// before the star point or delta corners.
+//
 // Conventions follow package winding: teeth 1..Q counter-clockwise from the
 // lead end, slot k after tooth k, directions seen from the air gap. Lengths of
 // wire are per strand in metres; geometry in mm.

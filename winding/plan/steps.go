@@ -15,13 +15,15 @@ func (b *builder) add(s Step) {
 
 // steps lays out the bench work in order: preparation, each path coil by coil
 // with its jumpers (and a separator before the second coil side enters a slot
-// shared by two phases), the leads, the tests that need the phases apart, the
-// joints, and the tests of the finished winding.
+// shared by two phases) and the polarity test of each phase once its last
+// coil is in, the leads, the tests that need the phases apart, the joints of
+// parallel paths, the polarity test of the whole stator, the star point or
+// delta corners, and the tests of the finished winding.
 func (b *builder) steps() error {
 	p, j := b.p, b.j
 	l := p.Layout
 	q := l.Spec.Slots
-	b.p.Steps = make([]Step, 0, 3+3*len(p.Coils)+6*len(l.PhaseNames)+12)
+	b.p.Steps = make([]Step, 0, 3+3*len(p.Coils)+7*len(l.PhaseNames)+13)
 	b.add(Step{Kind: StepPrepare, Title: "Deburr and clean the stator",
 		Detail: "File off burrs on the slot edges and tooth tips, round sharp corners at both ends of the stack, blow out the filings and wipe the slots clean. A burr cuts enamel and liner.",
 		Reminders: []string{"eye protection while filing and blowing out",
@@ -42,7 +44,7 @@ func (b *builder) steps() error {
 		"keep the wire tight but do not stretch it; never let it scrape the slot edge"}
 	sepSize := separatorSize(p, b.stackPlusCuffs(), j.Stator.SeparatorMM)
 	ci := 0
-	for _, ch := range l.Chains {
+	for chi, ch := range l.Chains {
 		name := l.PhaseNames[ch.Phase]
 		for i, tooth := range ch.Teeth {
 			c, _ := l.CoilOn(tooth)
@@ -99,6 +101,9 @@ func (b *builder) steps() error {
 						" mm with slack, without cutting it; " + sense + ". Sleeve it where it crosses other coils."})
 			}
 		}
+		if chi == len(l.Chains)-1 || l.Chains[chi+1].Phase != ch.Phase {
+			b.polarityStep(ch.Phase) // the phase's last coil is in
+		}
 	}
 	for _, name := range l.PhaseNames {
 		for _, end := range []struct{ mark, word string }{{name + "1", "start"}, {name + "2", "finish"}} {
@@ -124,6 +129,7 @@ func (b *builder) steps() error {
 				Reminders: jointReminders()})
 		}
 	}
+	b.polarityStep(-1)
 	for _, jt := range winding.Joints(p.Connection, l.PhaseNames) {
 		title := "Star point: " + strings.Join(jt.Marks, " + ")
 		if jt.Line != "" {

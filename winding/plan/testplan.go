@@ -17,6 +17,7 @@ const (
 	TestInsulation      = "insulation_resistance"
 	TestHighVoltage     = "hv_withstand"
 	TestBackEMF         = "back_emf"
+	TestPolarity        = "polarity"
 )
 
 // Test limits with their sources.
@@ -106,6 +107,7 @@ func (b *builder) tests() error {
 		Source:  "IEEE 43-2013 minimum for random-wound windings, borrowed here for phase to phase (the standard tests winding to ground)",
 		Caution: cautionIR,
 		Note:    "a low reading between two phases points to a damaged separator or enamel where their coils share a slot"})
+	ts = append(ts, b.polarityTest())
 	var expect []string
 	for _, ph := range p.PhaseOhms {
 		expect = append(expect, fmt.Sprintf("%s %s", ph.Phase, formatOhm(ph.OhmAmbient)))

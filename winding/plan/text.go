@@ -96,6 +96,11 @@ func (p *Plan) Text() string {
 	row("Copper", "%.1f m in the winding with leads (%.3f kg); buy %.1f m (%.3f kg)", p.CopperLengthM, p.CopperMassKg, p.BuyLengthM, p.BuyMassKg)
 	tw.Flush()
 
+	b.WriteString("\nPolarity (DC into X1 of one phase at a time, all its paths at once; compass at each tooth face)\n")
+	for _, n := range l.PhaseNames {
+		fmt.Fprintf(&b, "  %s  %s\n", n, PoleString(p.PolesOf(n)))
+	}
+
 	b.WriteString("\nCut list\n")
 	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
 	for i, pp := range p.Paths {
@@ -167,6 +172,8 @@ func limitText(t Test) string {
 		unit = "Ω"
 	}
 	switch t.Compare {
+	case "match":
+		return fmt.Sprintf("every tooth shows its %s of the plan", t.Unit)
 	case "min":
 		return fmt.Sprintf("at least %g %s%s", t.Limit, unit, v)
 	case "band":

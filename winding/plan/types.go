@@ -59,10 +59,14 @@ type Plan struct {
 	BuyMassKg     float64 `json:"buy_mass_kg"`
 
 	Materials []Material `json:"materials"`
-	Steps     []Step     `json:"steps"`
-	Tests     []Test     `json:"tests"`
-	Warnings  []string   `json:"warnings"`
-	Cautions  []string   `json:"cautions"`
+	// Polarity is the pole every wound tooth face shows with DC into its
+	// phase at X1, phase by phase in tooth order (polarity.go).
+	Polarity []ToothPole `json:"polarity"`
+
+	Steps    []Step   `json:"steps"`
+	Tests    []Test   `json:"tests"`
+	Warnings []string `json:"warnings"`
+	Cautions []string `json:"cautions"`
 }
 
 // Rotor says where the rotor is, which decides from where the air gap is seen.
@@ -192,6 +196,8 @@ type Step struct {
 	Slot int `json:"slot,omitempty"`
 	// Test steps: the name of the Test in Plan.Tests.
 	Test string `json:"test,omitempty"`
+	// Polarity test steps: the phases tested, one after another.
+	Phases []string `json:"phases,omitempty"`
 	// Reminders shown with the step (insulation, safety).
 	Reminders []string `json:"reminders,omitempty"`
 }
@@ -227,6 +233,8 @@ type Test struct {
 	LowPercent  float64 `json:"low_percent,omitempty"`
 	HighPercent float64 `json:"high_percent,omitempty"`
 	Voltage     float64 `json:"test_voltage_v,omitempty"`
+	Current     float64 `json:"test_current_a,omitempty"` // DC driven through the winding (polarity test)
+	HeatW       float64 `json:"heat_w,omitempty"`         // heat the test current makes in one phase
 	Source      string  `json:"source"`
 	Caution     string  `json:"caution,omitempty"`
 	Note        string  `json:"note,omitempty"`
