@@ -14,11 +14,11 @@
 //
 // Conventions. Teeth are numbered counter-clockwise seen from the lead end;
 // the ring is drawn as seen from the lead end with tooth 1 at the top. A
-// tooth's phase letter is upper case when its coil is wound clockwise and
-// lower case when counter-clockwise (seen from the air gap), doubled by a mark:
-// '>' clockwise, '<' counter-clockwise. A wound coil carries '#', the tooth of
-// the current step '@', the tooth of a step looked at '*'; colour only
-// repeats what the letters say.
+// tooth shows its coil as a signed token: the upper-case phase letter with
+// '+' when the coil is wound clockwise and '-' when counter-clockwise (seen
+// from the air gap), '·' for a tooth without a coil; letter case never carries
+// meaning. A wound coil carries '#', the tooth of the current step '@', the
+// tooth of a step looked at '*'; colour only repeats what the text says.
 //
 // Looking. Left/right (or [ and ]) move a look to another step, and enter on
 // a line of the overview opens that step: the panel shows it read-only as it

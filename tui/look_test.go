@@ -117,8 +117,8 @@ func TestLookAtDoneCoilShowsItsRecord(t *testing.T) {
 		"coil 1 of 12",
 		"wound 1 short",
 		"last turn loose, pressed down",
-		"*1U>", // the tooth looked at
-		"@7u<", // the tooth in hand still shows
+		"*1+U", // the tooth looked at
+		"@7-U", // the tooth in hand still shows
 		"* looking",
 	} {
 		if !strings.Contains(v, want) {
@@ -158,7 +158,7 @@ func TestLookAheadShowsTheStep(t *testing.T) {
 	}
 	keys(t, m, "]")
 	v = plain(m)
-	for _, want := range []string{"coil 2 of 12", "not wound yet", "*2u<", "@1U>"} {
+	for _, want := range []string{"coil 2 of 12", "not wound yet", "*2-U", "@1+U"} {
 		if !strings.Contains(v, want) {
 			t.Errorf("looking ahead at coil 2 the screen lacks %q:\n%s", want, v)
 		}

@@ -4,34 +4,33 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"unicode/utf8"
 
 	"coilwright/winding"
 )
 
-// The stator drawing. Each wound tooth is a token of four parts: a state mark
-// ('#' wound, '@' the current step, '*' the step looked at, ' ' to do), the tooth number, the phase
-// letter (upper case clockwise, lower case counter-clockwise, seen from the
-// air gap) and a direction mark ('>' clockwise, '<' counter-clockwise). An
-// unwound tooth shows its number and '-'. The ring is drawn seen from the lead
-// end, tooth 1 at the top, numbers rising counter-clockwise; when it does not
-// fit, a developed strip shows a window of teeth round the current one.
+// The stator drawing. Each wound tooth is a token of three parts: a state
+// mark ('#' wound, '@' the current step, '*' the step looked at, ' ' to do),
+// the tooth number and, glued to it, the coil's signed token (e.g. "@7-U"):
+// the upper-case phase letter with '+' for a coil wound clockwise and '-' for
+// counter-clockwise, seen from the air gap (winding.SenseToken). An unwound
+// tooth shows its number and '·'. The ring is drawn seen from the lead end,
+// tooth 1 at the top, numbers rising counter-clockwise; when it does not fit,
+// a developed strip shows a window of teeth round the current one.
 
 const (
 	markWound   = "#"
 	markCurrent = "@"
 	markViewed  = "*"
 	markTodo    = " "
-	markCW      = ">"
-	markCCW     = "<"
-	markUnwound = "-"
+	markUnwound = "·" // a middle dot: a '0' glued to the tooth number would read as a digit
 )
 
 // toothInfo is what the drawing needs of one tooth.
 type toothInfo struct {
-	wound  bool // carries a coil
-	phase  int
-	letter string // phase letter, lower case for CCW
-	dir    string // markCW or markCCW
+	wound bool // carries a coil
+	phase int
+	token string // signed phase token: "+U" clockwise, "-U" counter-clockwise
 }
 
 // teethOf lists the teeth of a layout, index 0 = tooth 1.
@@ -46,12 +45,7 @@ func teethOf(l *winding.Layout) []toothInfo {
 		if !ok || c.Phase < 0 || c.Phase >= len(l.PhaseNames) {
 			continue
 		}
-		ti := toothInfo{wound: true, phase: c.Phase, letter: l.PhaseNames[c.Phase], dir: markCW}
-		if c.Direction == winding.CCW {
-			ti.letter = strings.ToLower(ti.letter)
-			ti.dir = markCCW
-		}
-		out[t-1] = ti
+		out[t-1] = toothInfo{wound: true, phase: c.Phase, token: winding.SenseToken(l.PhaseNames[c.Phase], c.Direction)}
 	}
 	return out
 }
@@ -61,7 +55,7 @@ func tokenText(t int, ti toothInfo) string {
 	if !ti.wound {
 		return strconv.Itoa(t) + markUnwound + " "
 	}
-	return strconv.Itoa(t) + ti.letter + ti.dir
+	return strconv.Itoa(t) + ti.token
 }
 
 // ringGeometry is where each token goes in a ring that fits a box.
@@ -156,7 +150,7 @@ func stateMark(wound, current, viewed bool) string {
 func styledToken(st *styles, t int, ti toothInfo, wound, current, viewed bool, tw int) string {
 	text := tokenText(t, ti)
 	mark := stateMark(wound, current, viewed)
-	pad := strings.Repeat(" ", max(0, tw-1-len(text)))
+	pad := strings.Repeat(" ", max(0, tw-1-utf8.RuneCountInString(text)))
 	switch {
 	case viewed:
 		return st.viewed.Render(mark+text) + pad
@@ -235,17 +229,17 @@ func sortSegs[T any](xs []T, less func(a, b T) bool) {
 }
 
 // stripLabels are the row names of the developed strip.
-var stripLabels = [4]string{"tooth ", "phase ", "wind  ", "done  "}
+var stripLabels = [3]string{"tooth ", "coil  ", "done  "}
 
 // renderStrip draws a developed strip of the teeth round the current one (or
 // round the tooth looked at, viewed, when not 0) in width w: tooth numbers,
-// phase letters, direction marks and state marks in columns.
+// signed coil tokens and state marks in columns.
 func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, viewed, w int) drawing {
 	q := len(teeth)
 	if q == 0 {
 		return drawing{}
 	}
-	cw := len(strconv.Itoa(q)) + 1
+	cw := max(len(strconv.Itoa(q)), 2) + 1
 	lw := len(stripLabels[0])
 	n := min(q, max(1, (w-lw)/cw))
 	first, centre := 0, current
@@ -256,7 +250,7 @@ func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, viewed, w
 		first = centre - 1 - n/2
 	}
 	first = min(max(0, first), q-n)
-	var rows [4]strings.Builder
+	var rows [3]strings.Builder
 	for r := range rows {
 		rows[r].WriteString(st.dim.Render(stripLabels[r]))
 	}
@@ -265,22 +259,22 @@ func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, viewed, w
 		isCur := i+1 == current
 		isViewed := i+1 == viewed
 		isWound := i < len(wound) && wound[i]
-		cells := [4]string{strconv.Itoa(i + 1), markUnwound, " ", " "}
+		cells := [3]string{strconv.Itoa(i + 1), markUnwound, " "}
 		if ti.wound {
-			cells[1], cells[2] = ti.letter, ti.dir
-			cells[3] = "."
+			cells[1] = ti.token
+			cells[2] = "."
 			if isWound {
-				cells[3] = markWound
+				cells[2] = markWound
 			}
 		}
 		if isCur {
-			cells[3] = markCurrent
+			cells[2] = markCurrent
 		}
 		if isViewed {
-			cells[3] = markViewed
+			cells[2] = markViewed
 		}
 		for r, c := range cells {
-			cell := strings.Repeat(" ", max(0, cw-len(c))) + c
+			cell := strings.Repeat(" ", max(0, cw-utf8.RuneCountInString(c))) + c
 			switch {
 			case isViewed:
 				rows[r].WriteString(st.viewed.Render(cell))
@@ -322,19 +316,19 @@ func stripCaption(a, b, q, w int) string {
 // other than the current one is looked at it names the '*' mark too, on a
 // second line when one is too narrow.
 func legend(w int, looking bool) []string {
-	long := "# wound  @ now  U> clockwise  u< counter-clockwise (seen from the air gap)"
-	short := "# wound  @ now  U> cw  u< ccw"
+	long := "# wound  @ now  +U clockwise  -U counter-clockwise (seen from the air gap)"
+	short := "# wound  @ now  +U cw  -U ccw"
 	if looking {
-		long = "# wound  @ now  * looking  U> clockwise  u< counter-clockwise"
-		short = "# wound  @ now  * looking  U> cw  u< ccw"
+		long = "# wound  @ now  * looking  +U clockwise  -U counter-clockwise"
+		short = "# wound  @ now  * looking  +U cw  -U ccw"
 	}
 	switch {
 	case len(long) <= w:
 		return []string{long}
 	case len(short) <= w:
 		return []string{short}
-	case looking && len("# wound  @ now  * looking") <= w && len("U> cw  u< ccw") <= w:
-		return []string{"# wound  @ now  * looking", "U> cw  u< ccw"}
+	case looking && len("# wound  @ now  * looking") <= w && len("+U cw  -U ccw") <= w:
+		return []string{"# wound  @ now  * looking", "+U cw  -U ccw"}
 	}
 	return nil
 }

@@ -18,7 +18,11 @@
 // U1/U2...), V lagging U by 360/m electrical degrees. Direction CW means the wire
 // goes clockwise round the tooth seen from the air gap while following the path
 // from its start terminal. A coil whose phasor lies near the phase axis is
-// wound CW, one near the opposite axis is wound CCW, so both add. Tooth 1
+// wound CW, one near the opposite axis is wound CCW, so both add. In text a
+// coil is a signed token, the sign glued to the upper-case phase letter: "+U"
+// CW, "-U" CCW, "0" a tooth without a coil (SequenceTokens, SenseLegend); the
+// signed form of the phase matrix of tooth-coil windings (common practice).
+// Letter case never carries meaning. Tooth 1
 // carries a CW coil of phase U and starts a run of adjacent U coils where the
 // layout has runs.
 //

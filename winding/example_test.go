@@ -17,7 +17,7 @@ func ExampleDesign() {
 	fmt.Printf("k_w = %.3f, q = %s, t = %d, LCM = %d, paths %v\n",
 		l.WindingFactor, l.Q, l.Periodicity, l.LCM, l.ParallelPaths)
 	// Output:
-	// U u v V W w u U V v w W
+	// +U -U -V +V +W -W -U +U +V -V -W +W
 	// k_w = 0.933, q = 2/5, t = 1, LCM = 60, paths [1 2]
 }
 

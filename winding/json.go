@@ -2,7 +2,8 @@ package winding
 
 import "encoding/json"
 
-// layoutJSON is the contract shape of `layout --json` (DESIGN.md).
+// layoutJSON is the contract shape of `layout --json`; "sequence" is the
+// developed layout as signed tokens (SequenceTokens), one per tooth.
 type layoutJSON struct {
 	Slots               int            `json:"slots"`
 	Poles               int            `json:"poles"`
@@ -24,7 +25,7 @@ type layoutJSON struct {
 	Harmonics           []harmonicJSON `json:"harmonics"`
 	ParallelPaths       []int          `json:"parallel_paths"`
 	Paths               int            `json:"paths"`
-	Sequence            string         `json:"sequence"`
+	Sequence            []string       `json:"sequence"`
 	Coils               []coilJSON     `json:"coils"`
 	Chains              []chainJSON    `json:"chains"`
 	Warnings            []Warning      `json:"warnings"`
@@ -62,7 +63,7 @@ func (l *Layout) MarshalJSON() ([]byte, error) {
 		Periodicity: l.Periodicity, Antiperiodic: l.Antiperiodic, Symmetry: l.Symmetry,
 		LCM: l.LCM, CoggingFactor: l.CoggingFactor, RadialForceBalanced: l.RadialForceBalanced,
 		WindingFactor: l.WindingFactor, PitchFactor: l.PitchFactor, DistFactor: l.DistFactor,
-		ParallelPaths: l.ParallelPaths, Paths: l.Spec.Paths, Sequence: l.Sequence(),
+		ParallelPaths: l.ParallelPaths, Paths: l.Spec.Paths, Sequence: l.SequenceTokens(),
 		Harmonics: make([]harmonicJSON, len(l.Harmonics)),
 		Coils:     make([]coilJSON, len(l.Coils)),
 		Chains:    make([]chainJSON, len(l.Chains)),

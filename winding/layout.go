@@ -1,6 +1,9 @@
 package winding
 
-import "fmt"
+import (
+	"fmt"
+	"strings"
+)
 
 // Direction is the sense in which the wire goes round a tooth, seen from the air
 // gap looking at the tooth face, following the path from its start terminal.
@@ -81,37 +84,45 @@ func (l *Layout) CoilOn(tooth int) (Coil, bool) {
 // PhaseName returns the name of phase i ("U", "V", "W" for three phases).
 func (l *Layout) PhaseName(i int) string { return l.PhaseNames[i] }
 
-// Sequence is the developed layout on one line: a letter per tooth, upper case
-// for CW and lower case for CCW, "-" for an unwound tooth.
-func (l *Layout) Sequence() string {
-	b := make([]byte, 0, 2*l.Spec.Slots)
+// Unwound is the token of a tooth that carries no coil (the idle teeth of a
+// single-layer winding) in a developed sequence.
+const Unwound = "0"
+
+// SequenceTokens is the developed layout as signed tokens, one per tooth from
+// tooth 1: the upper-case phase letter with a sign glued to it, "+U" for a coil
+// wound CW and "-U" for one wound CCW, and Unwound for a tooth without a coil.
+// This is the signed form of the phase (winding) matrix of tooth-coil windings,
+// where +1 and -1 mark the sense of each coil of a phase (common practice).
+// Letter case never carries meaning.
+func (l *Layout) SequenceTokens() []string {
+	out := make([]string, 0, l.Spec.Slots)
 	for t := 1; t <= l.Spec.Slots; t++ {
-		if t > 1 {
-			b = append(b, ' ')
-		}
 		c, ok := l.CoilOn(t)
 		if !ok {
-			b = append(b, '-')
+			out = append(out, Unwound)
 			continue
 		}
-		name := l.PhaseNames[c.Phase]
-		if c.Direction == CCW {
-			name = lower(name)
-		}
-		b = append(b, name...)
+		out = append(out, SenseToken(l.PhaseNames[c.Phase], c.Direction))
 	}
-	return string(b)
+	return out
 }
 
-func lower(s string) string {
-	b := []byte(s)
-	for i, c := range b {
-		if c >= 'A' && c <= 'Z' {
-			b[i] = c + 'a' - 'A'
-		}
+// SenseToken writes one coil as a signed token: "+U" for phase U wound CW,
+// "-U" wound CCW (ASCII hyphen-minus).
+func SenseToken(phase string, d Direction) string {
+	if d == CCW {
+		return "-" + phase
 	}
-	return string(b)
+	return "+" + phase
 }
+
+// SenseLegend explains the signed tokens of SequenceTokens in one line, for
+// every text that shows them.
+const SenseLegend = "+ wound clockwise, - counter-clockwise, seen from the air gap following the path from its start terminal; " + Unwound + " no coil"
+
+// Sequence is the developed layout on one line: the SequenceTokens separated
+// by single spaces, e.g. "+U -U -V +V +W -W ..." for 12 slots and 10 poles.
+func (l *Layout) Sequence() string { return strings.Join(l.SequenceTokens(), " ") }
 
 // SlotsOf returns the two slots that hold the sides of the coil on a tooth:
 // the slot before it (between tooth-1 and tooth) and the slot after it.

@@ -93,8 +93,8 @@ func TestRefusals(t *testing.T) {
 }
 
 // 12/10 double layer: the classic developed sequence (Bianchi et al. 2006,
-// figure of the 12-slot 10-pole star; from memory) "A a b B C c a A B b c C"
-// with U, V, W for A, B, C, and its MMF space harmonics: orders 1, 5, 7, 11,
+// figure of the 12-slot 10-pole star; from memory), written in the signed form
+// "+A -A -B +B +C -C -A +A +B -B -C +C" with U, V, W for A, B, C, and its MMF space harmonics: orders 1, 5, 7, 11,
 // 13... (k_w 0.067 at the sub-harmonic 1, 0.933 at 5 and 7; Meier 2008,
 // from memory).
 func TestTwelveTenLayout(t *testing.T) {
@@ -102,7 +102,7 @@ func TestTwelveTenLayout(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if got, want := l.Sequence(), "U u v V W w u U V v w W"; got != want {
+	if got, want := l.Sequence(), "+U -U -V +V +W -W -U +U +V -V -W +W"; got != want {
 		t.Errorf("Sequence() = %q; want %q", got, want)
 	}
 	want := map[int]float64{1: 0.067, 5: 0.933, 7: 0.933, 11: 0.067, 13: 0.067, 3: 0, 9: 0, 2: 0, 4: 0}
@@ -130,7 +130,7 @@ func TestNineEightUnbalanced(t *testing.T) {
 	if l.RadialForceBalanced || l.Symmetry != 1 {
 		t.Errorf("9/8: balanced %v symmetry %d; want false 1", l.RadialForceBalanced, l.Symmetry)
 	}
-	if got, want := l.Sequence(), "U u U V v V W w W"; got != want {
+	if got, want := l.Sequence(), "+U -U +U +V -V +V +W -W +W"; got != want {
 		t.Errorf("9/8 Sequence() = %q; want %q", got, want)
 	}
 	found := false

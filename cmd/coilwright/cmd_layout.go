@@ -25,9 +25,10 @@ wound, and the figures: winding factors by spatial order, q, periodicity,
 LCM(Q, 2p), cogging factor and radial-force balance.
 
 Teeth are numbered 1..Q counter-clockwise seen from the lead end. In the
-developed sequence an upper-case letter is a coil wound clockwise (seen from the
-air gap, following the path from its start terminal), lower case counter-clockwise,
-and "-" an unwound tooth.`,
+developed sequence each tooth shows its phase letter with a sign: "+U" a coil of
+phase U wound clockwise (seen from the air gap, following the path from its start
+terminal), "-U" counter-clockwise, and "0" an unwound tooth of a single-layer
+winding. The --json "sequence" field holds the same tokens as an array.`,
 		Example: `  coilwright layout --slots 12 --poles 10
   coilwright layout --slots 24 --poles 28 --paths 2 --json
   coilwright layout --slots 24 --poles 22 --layers 1`,
@@ -66,7 +67,7 @@ func writeLayoutText(w io.Writer, l *winding.Layout) {
 		layers = "single layer (odd teeth wound)"
 	}
 	fmt.Fprintf(w, "%d slots / %d poles, %d phases, %s, %d path(s) per phase\n\n", s.Slots, s.Poles, s.Phases, layers, s.Paths)
-	fmt.Fprintf(w, "Developed, tooth 1 to %d (capital = cw, small = ccw, - = no coil):\n  %s\n\n", s.Slots, l.Sequence())
+	fmt.Fprintf(w, "Developed, tooth 1 to %d:\n  %s\n  %s\n\n", s.Slots, l.Sequence(), winding.SenseLegend)
 
 	fmt.Fprintln(w, "Figures")
 	row := func(k, v string) { fmt.Fprintf(w, "  %-28s %s\n", k, v) }

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"strings"
 	"text/tabwriter"
+
+	"coilwright/winding"
 )
 
 // Text renders the plan as plain text for a terminal or a printer: the
@@ -36,7 +38,7 @@ func (p *Plan) Text() string {
 		l.Spec.Slots, l.Spec.Poles, l.Spec.Phases, layers, l.Spec.Paths, plural(l.Spec.Paths, "", "s"), p.Connection, p.Rotor)
 	row("", "winding factor %.3f, q = %s, %d coils per phase", l.WindingFactor, l.Q, l.CoilsPerPhase)
 	row("Layout", "%s", l.Sequence())
-	row("", "tooth 1 first; upper case clockwise, lower case counter-clockwise, seen from the air gap")
+	row("", "tooth 1 first; %s", winding.SenseLegend)
 	turns := fmt.Sprintf("%d per coil", p.TurnsPerCoil)
 	if p.TurnsSolved && p.EMF != nil {
 		turns += ", solved for " + p.EMF.Target
