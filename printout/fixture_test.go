@@ -53,7 +53,7 @@ func fixturePlan(t testing.TB, s winding.Spec, conn winding.Connection) *plan.Pl
 			if i < len(ch.Jumpers) {
 				j := ch.Jumpers[i]
 				pp.WireLengthM += float64(j.Span) * 0.012
-				add(plan.Step{Kind: plan.StepJumper, Title: fmt.Sprintf("Jumper from tooth %d to tooth %d", j.FromTooth, j.ToTooth), Jumper: &j})
+				add(plan.Step{Kind: plan.StepJumper, Title: fmt.Sprintf("Jumper from tooth %d to tooth %d", j.FromTooth, j.ToTooth), Jumper: &plan.JumperStep{Jumper: j}})
 			}
 		}
 		pp.CutLengthM = pp.WireLengthM + 0.6

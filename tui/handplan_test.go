@@ -51,11 +51,15 @@ func handPlan(tb testing.TB, slots, poles, layers int) *plan.Plan {
 		for i, t := range ch.Teeth {
 			if i > 0 {
 				j := ch.Jumpers[i-1]
-				add(plan.Step{Kind: plan.StepJumper, Title: fmt.Sprintf("carry the wire from tooth %d to tooth %d", j.FromTooth, j.ToTooth), Jumper: &j})
+				from, _ := l.CoilOn(j.FromTooth)
+				to, _ := l.CoilOn(j.ToTooth)
+				laid := plan.LayJumper(plan.OuterRotor, j, from.Direction, to.Direction, slots, 40, 20)
+				add(plan.Step{Kind: plan.StepJumper, Title: fmt.Sprintf("carry the wire from tooth %d to tooth %d", j.FromTooth, j.ToTooth), Jumper: &laid})
 			}
 			order++
 			c, _ := l.CoilOn(t)
 			before, after := winding.SlotsOf(t, slots)
+			down, up := plan.CoilSlots(plan.OuterRotor, c.Direction, t, slots)
 			from := fmt.Sprintf("start lead %s (300 mm)", ch.Start)
 			if i > 0 {
 				from = fmt.Sprintf("jumper from tooth %d", ch.Teeth[i-1])
@@ -68,6 +72,7 @@ func handPlan(tb testing.TB, slots, poles, layers int) *plan.Plan {
 				Order: order, Of: m, Tooth: t, Phase: l.PhaseNames[c.Phase], Path: c.Path, Position: c.Position,
 				Direction: c.Direction.String(), HowToWind: how[c.Direction], Turns: p.TurnsPerCoil,
 				WireLengthM: 1.5, From: from, To: to, SlotBefore: before, SlotAfter: after,
+				DownSlot: down, UpSlot: up,
 			}})
 		}
 	}

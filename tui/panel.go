@@ -185,8 +185,8 @@ func (g guideModel) coilView(b *lines, s plan.Step, compact bool) {
 	b.kv("wire", c.wireText(cs))
 	b.kv("from", cs.From)
 	b.kv("next", cs.To)
-	if cs.SlotBefore > 0 || cs.SlotAfter > 0 {
-		b.kv("slots", fmt.Sprintf("%d and %d (either side of tooth %d)", cs.SlotBefore, cs.SlotAfter, cs.Tooth))
+	if cs.DownSlot > 0 && cs.UpSlot > 0 {
+		b.kv("slots", plan.SlotWords(cs.DownSlot, cs.UpSlot))
 	}
 	for _, r := range s.Reminders {
 		b.kv("mind", r)
@@ -245,7 +245,7 @@ func (g guideModel) checkView(b *lines, s plan.Step) {
 		b.kv("slot", fmt.Sprintf("%d, between tooth %d and tooth %d", s.Slot, s.Slot, next))
 	}
 	if j := s.Jumper; j != nil && s.Detail == "" {
-		t := fmt.Sprintf("from tooth %d to tooth %d, %d tooth pitches round the lead end", j.FromTooth, j.ToTooth, j.Span)
+		t := fmt.Sprintf("from tooth %d to tooth %d: %s", j.FromTooth, j.ToTooth, j.Words())
 		if j.ReversesSense {
 			t += "; the next coil goes round the other way"
 		}

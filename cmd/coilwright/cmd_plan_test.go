@@ -34,12 +34,16 @@ func TestPlanDemoIndependent(t *testing.T) {
 	}
 	var p struct {
 		Layout struct {
-			Slots  int                   `json:"slots"`
-			Coils  []struct{ Tooth int } `json:"coils"`
+			Slots int `json:"slots"`
+			Coils []struct {
+				Tooth     int    `json:"tooth"`
+				Direction string `json:"direction"`
+			} `json:"coils"`
 			Chains []struct {
 				Phase   string `json:"phase"`
 				Jumpers []struct {
-					Span int `json:"span_teeth"`
+					From int `json:"from_tooth"`
+					To   int `json:"to_tooth"`
 				} `json:"jumpers"`
 			} `json:"chains"`
 		} `json:"layout"`
@@ -111,8 +115,23 @@ func TestPlanDemoIndependent(t *testing.T) {
 	// Mean turn: tooth grown by the liner on each face, plus π times the coil build.
 	build := n * strands * overall * overall / (depth - liner)
 	mlt := 2*(stack+2*liner) + 2*(tooth+2*liner) + math.Pi*build
-	// Outer rotor: jumpers at mid slot depth.
+	// Outer rotor: jumpers at mid slot depth, slot to slot. Facing tooth k from
+	// outside with the lead end up, slot k is on the right: a cw coil goes down
+	// slot k and up slot k-1, a ccw coil down k-1 and up k. A jumper leaves the
+	// up slot of one coil and enters the down slot of the next, the shorter way.
 	pitch := 2 * math.Pi * (dia/2 - depth/2) / q
+	sense := map[int]string{}
+	for _, c := range p.Layout.Coils {
+		sense[c.Tooth] = c.Direction
+	}
+	nq := int(q)
+	slotOf := func(k int) int { return (k-1+nq)%nq + 1 }
+	downUp := func(k int) (int, int) {
+		if sense[k] == "cw" {
+			return slotOf(k), slotOf(k - 1)
+		}
+		return slotOf(k - 1), slotOf(k)
+	}
 	const rho = 1.0 / 58 // IEC 60028, Ω·mm²/m
 	const density = 8.89 // g/cm³, IEC 60028 (from memory)
 
@@ -130,7 +149,10 @@ func TestPlanDemoIndependent(t *testing.T) {
 	for i, path := range p.Paths {
 		var jumpers float64
 		for _, jp := range p.Layout.Chains[i].Jumpers {
-			jumpers += float64(jp.Span)*pitch + slack
+			_, leave := downUp(jp.From)
+			enter, _ := downUp(jp.To)
+			n := ((enter-leave)%nq + nq) % nq
+			jumpers += float64(min(n, nq-n))*pitch + slack
 		}
 		length := (float64(path.Coils)*n*mlt + jumpers) / 1000
 		check("paths["+path.Phase+"].wire_length_m", path.Length, length, 1e-9)

@@ -43,14 +43,14 @@ type builder struct {
 	j *job.Job
 	p *Plan
 
-	strandArea float64 // mm², one strand
-	sides      int     // coil sides per slot: 2 for double layer, 1 for single
-	depthMM    float64 // slot depth (estimated from the area where not given)
-	phiWb      float64 // fundamental flux per pole; 0 when no source
-	emfPerTurn float64 // phase EMF rms per turn per coil per rpm
-	lineFactor float64 // line EMF / phase EMF
-	phaseCurr  float64 // phase current at rated line current
-	jumperM    []float64
+	strandArea float64        // mm², one strand
+	sides      int            // coil sides per slot: 2 for double layer, 1 for single
+	depthMM    float64        // slot depth (estimated from the area where not given)
+	phiWb      float64        // fundamental flux per pole; 0 when no source
+	emfPerTurn float64        // phase EMF rms per turn per coil per rpm
+	lineFactor float64        // line EMF / phase EMF
+	phaseCurr  float64        // phase current at rated line current
+	jumpers    [][]JumperStep // per chain, in the order of Layout.Chains
 }
 
 func (b *builder) warn(format string, a ...any) {

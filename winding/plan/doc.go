@@ -26,6 +26,19 @@
 // lead end, slot k after tooth k, directions seen from the air gap. Lengths of
 // wire are per strand in metres; geometry in mm.
 //
+// Down and up slots. With the lead end up and facing the tooth from the air
+// gap, a clockwise coil goes down the slot on the right and comes up the slot
+// on the left, a counter-clockwise coil the other way round. For an outer
+// rotor (seen from outside) tooth k's right-hand slot is slot k; for an inner
+// rotor (seen from the bore) slot k−1. CoilSlots derives them once; every coil
+// step carries them (CoilStep.DownSlot, UpSlot) and SlotWords says them in
+// the words every screen and page uses: "down slot 1, up slot 24". A jumper
+// (JumperStep, on each jumper step) leaves the up slot of one coil at the lead
+// end and enters the down slot of the next, the shorter way round; its length
+// is the arc between the two slot centres at mid slot depth plus the slack,
+// and JumperStep.Words gives its instruction: "leaves slot 2 at the lead end,
+// enters slot 6: 4 slot pitches, counter-clockwise seen from the lead end".
+//
 // Build does no I/O and keeps no state: a Plan is plain data that screens and
 // printouts only read. The plan does not model saturation, armature reaction,
 // the voltage drop under load or the losses in iron and magnets: the EMFs are

@@ -19,7 +19,7 @@ func ExampleBuild() {
 	fmt.Println(p.Steps[3].Title)
 	// Output:
 	// 18 turns per coil, fill 0.38, mean turn 84.9 mm
-	// phase 139.2 mΩ at 20 °C, charging from 286 rpm
+	// phase 139.1 mΩ at 20 °C, charging from 286 rpm
 	// copper loss 22.8 W at 95 °C
 	// Coil 1 of 24: tooth 1, phase U, cw, 18 turns
 }

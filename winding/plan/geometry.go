@@ -166,7 +166,8 @@ func (b *builder) lengths() error {
 	// corners with radius b/2: 2·(L+2t) + 2·(w+2t) + π·b (REFERENCES.md).
 	p.MeanTurnLengthMM = 2*(j.Stator.StackLengthMM+2*t) + 2*(j.Stator.ToothWidthMM+2*t) + math.Pi*p.Slot.CoilBuildMM
 	coilM := float64(p.TurnsPerCoil) * p.MeanTurnLengthMM / 1000
-	// Jumpers run round the lead end at mid slot depth.
+	// Jumpers run round the lead end at mid slot depth, from the up slot of
+	// one coil to the down slot of the next (LayJumper).
 	r := j.Stator.DiameterMM / 2
 	if j.Stator.Rotor == job.RotorInner {
 		r += b.depthMM / 2
@@ -174,6 +175,7 @@ func (b *builder) lengths() error {
 		r -= b.depthMM / 2
 	}
 	p.JumperPitchMM = 2 * math.Pi * r / float64(j.Winding.Slots)
+	p.JumperRadiusMM = r
 	l := p.Layout
 	lead := j.Build.LeadLengthMM / 1000
 	order := 0
@@ -186,11 +188,15 @@ func (b *builder) lengths() error {
 				Path: c.Path, Position: c.Position, Turns: p.TurnsPerCoil, WireLengthM: coilM, Order: order})
 			pp.WireLengthM += coilM
 		}
+		laid := make([]JumperStep, 0, len(ch.Jumpers))
 		for _, jp := range ch.Jumpers {
-			m := (float64(jp.Span)*p.JumperPitchMM + j.Build.JumperSlackMM) / 1000
-			b.jumperM = append(b.jumperM, m)
-			pp.JumperLengthM += m
+			from, _ := l.CoilOn(jp.FromTooth)
+			to, _ := l.CoilOn(jp.ToTooth)
+			js := LayJumper(p.Rotor, jp, from.Direction, to.Direction, l.Spec.Slots, r, j.Build.JumperSlackMM)
+			laid = append(laid, js)
+			pp.JumperLengthM += js.LengthMM / 1000
 		}
+		b.jumpers = append(b.jumpers, laid)
 		pp.WireLengthM += pp.JumperLengthM
 		pp.CutLengthM = pp.WireLengthM + 2*lead + float64(pp.Coils)*j.Build.ExtraPerCoilMM/1000
 		p.Paths = append(p.Paths, pp)

@@ -19,7 +19,7 @@ func (b *builder) materials() error {
 	p.Materials = append(p.Materials, Material{Item: "slot liner", Count: q,
 		SizeText: fmt.Sprintf("%.1f × %.0f mm, %g mm thick", p.Slot.LinedPerimeterMM, b.stackPlusCuffs(), j.Stator.LinerMM),
 		LengthMM: b.stackPlusCuffs(), Note: fmt.Sprintf("stands out %g mm at each end of the stack", linerCuff)})
-	if n := sharedSlots(l); n > 0 && b.sides == 2 {
+	if n := sharedSlots(l); n > 0 && b.sides == 2 && j.Stator.SeparatorMM > 0 {
 		p.Materials = append(p.Materials, Material{Item: "phase separator", Count: n,
 			SizeText: fmt.Sprintf("%.1f × %.0f mm, %g mm thick", p.Slot.DepthMM, b.stackPlusCuffs(), j.Stator.SeparatorMM),
 			LengthMM: b.stackPlusCuffs(), Note: "one in every slot that holds two phases: slots " + winding.NumberList(sharedList(l))})
@@ -28,7 +28,11 @@ func (b *builder) materials() error {
 	p.Materials = append(p.Materials, Material{Item: "lead sleeving", Count: leads,
 		SizeText: fmt.Sprintf("%g mm long, to fit %d × %.2f mm wire", j.Build.LeadLengthMM, p.Wire.StrandsInHand, p.Wire.OverallDiameterMM),
 		LengthMM: j.Build.LeadLengthMM})
-	if jumpers := len(b.jumperM); jumpers > 0 {
+	jumpers := 0
+	for _, ch := range b.jumpers {
+		jumpers += len(ch)
+	}
+	if jumpers > 0 {
 		p.Materials = append(p.Materials, Material{Item: "jumper sleeving", Count: jumpers,
 			SizeText: "as long as each jumper where it crosses other coils", Note: "optional where jumpers lie clear"})
 	}

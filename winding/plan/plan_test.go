@@ -87,18 +87,26 @@ func mustPlan(t testing.TB, j *job.Job) *Plan {
 //	MLT        2·(30+0.4) + 2·(6+0.4) + π·1.307576     = 77.70787 mm
 //	coil       40 · 77.70787 mm                       = 3.108315 m
 //
-// Jumpers of phase U (teeth 1, 2, 7, 8: spans 1, 5, 1 tooth pitches) at mid
-// slot depth, radius 30 + 10/2 = 35 mm: pitch 2π·35/12 = 18.32596 mm;
-// 7·18.32596 + 3·20 slack = 188.2817 mm.
+// Jumpers run at mid slot depth, radius 30 + 10/2 = 35 mm: slot pitch
+// 2π·35/12 = 18.32596 mm. Inner rotor: facing tooth k from the bore its
+// right-hand slot is k−1, so a cw coil goes down k−1 and up k, a ccw coil down
+// k and up k−1. Layout U u v V W w u U V v w W (capital cw):
 //
-//	path       4·3.108315 + 0.188282                  = 12.62154 m
-//	R20        12.62154 / 58 / 0.1963495              = 1.108293 Ω (IEC 60028)
-//	leads in   3 phases · (12.62154 + 2·0.25)         = 39.36462 m
-//	mass       39.36462 m · 0.1963495 mm² · 8.89 g/cm³ = 0.0687128 kg
-//	cut        12.62154 + 0.5 + 4·0.030               = 13.24154 m per path
-//	buy        3 · 13.24154 · 1.10                    = 43.69708 m, 0.0762753 kg
+//	U  1 cw (up 1) → 2 ccw (down 2, up 1) → 7 ccw (down 7, up 6) → 8 cw (down 7):
+//	   1 + 6 + 1 = 8 slot pitches: 8·18.32596 + 3·20 slack = 206.6077 mm
+//	V  3 ccw (up 2) → 4 cw (down 3, up 4) → 9 cw (down 8, up 9) → 10 ccw (down 10):
+//	   1 + 4 + 1 = 6 slot pitches: 6·18.32596 + 60       = 169.9557 mm
+//	W  as U (5 cw, 6 ccw, 11 ccw, 12 cw)                  = 206.6077 mm
+//
+//	path U     4·3.108315 + 0.2066077                 = 12.63987 m (V 12.60321 m)
+//	R20 U      12.63987 / 58 / 0.1963495              = 1.109902 Ω (IEC 60028); V 1.106684 Ω
+//	phase      (2·1.109902 + 1.106684)/3               = 1.108829 Ω
+//	leads in   2·12.63987 + 12.60321 + 3·2·0.25        = 39.38295 m
+//	mass       39.38295 m · 0.1963495 mm² · 8.89 g/cm³ = 0.0687448 kg
+//	cut        12.63987 + 0.5 + 4·0.030               = 13.25987 m (path U)
+//	buy        (2·13.25987 + 13.22321) · 1.10          = 43.71724 m, 0.0763105 kg
 //	J          1 A / 0.1963495 mm²                    = 5.09296 A/mm²
-//	loss       3 · 1² · 1.108293                      = 3.32488 W (at 20 °C; hot in TestCopperLossHot)
+//	loss       1² · (2·1.109902 + 1.106684)            = 3.326487 W (at 20 °C; hot in TestCopperLossHot)
 //	HV test    under 1 kW and 100 V: 500 + 2·24 = 548, rounded up to 550 V
 //	           (IEC 60034-1 clause 9.2)
 func TestWorkedExample(t *testing.T) {
@@ -122,18 +130,18 @@ func TestWorkedExample(t *testing.T) {
 		{"MeanTurnLengthMM", p.MeanTurnLengthMM, 77.70787, 1e-5},
 		{"Coils[0].WireLengthM", p.Coils[0].WireLengthM, 3.108315, 1e-6},
 		{"JumperPitchMM", p.JumperPitchMM, 18.32596, 1e-5},
-		{"Paths[0].JumperLengthM", p.Paths[0].JumperLengthM, 0.1882817, 1e-7},
-		{"Paths[0].WireLengthM", p.Paths[0].WireLengthM, 12.62154, 1e-5},
-		{"Paths[0].CutLengthM", p.Paths[0].CutLengthM, 13.24154, 1e-5},
-		{"Paths[0].Ohm20C", p.Paths[0].Ohm20C, 1.108293, 1e-6},
-		{"PhaseResistance20C", p.PhaseResistance20C, 1.108293, 1e-6},
-		{"PhaseResistanceAmbient", p.PhaseResistanceAmbient, 1.108293, 1e-6},
-		{"CopperLengthM", p.CopperLengthM, 39.36462, 1e-5},
-		{"CopperMassKg", p.CopperMassKg, 0.0687128, 1e-7},
-		{"BuyLengthM", p.BuyLengthM, 43.69708, 1e-5},
-		{"BuyMassKg", p.BuyMassKg, 0.0762753, 1e-7},
+		{"Paths[0].JumperLengthM", p.Paths[0].JumperLengthM, 0.2066077, 1e-7},
+		{"Paths[0].WireLengthM", p.Paths[0].WireLengthM, 12.63987, 1e-5},
+		{"Paths[0].CutLengthM", p.Paths[0].CutLengthM, 13.25987, 1e-5},
+		{"Paths[0].Ohm20C", p.Paths[0].Ohm20C, 1.109902, 1e-6},
+		{"PhaseResistance20C", p.PhaseResistance20C, 1.108829, 1e-6},
+		{"PhaseResistanceAmbient", p.PhaseResistanceAmbient, 1.108829, 1e-6},
+		{"CopperLengthM", p.CopperLengthM, 39.38295, 1e-5},
+		{"CopperMassKg", p.CopperMassKg, 0.0687448, 1e-7},
+		{"BuyLengthM", p.BuyLengthM, 43.71724, 1e-5},
+		{"BuyMassKg", p.BuyMassKg, 0.0763105, 1e-7},
 		{"CurrentDensityAmm2", p.CurrentDensityAmm2, 5.09296, 1e-5},
-		{"CopperLossAmbientW", p.CopperLossAmbientW, 3.32488, 1e-5},
+		{"CopperLossAmbientW", p.CopperLossAmbientW, 3.326487, 1e-5},
 		{"hv_withstand voltage", testNamed(p, TestHighVoltage).Voltage, 550, 0},
 	}
 	for _, c := range cases {
@@ -311,8 +319,8 @@ func TestCutInBuiltWinding(t *testing.T) {
 // temperature, R(T) = R20·(234.5 + T)/254.5 (IEC 60028), T the reference
 // temperature of IEC 60034-1 for the thermal class (from memory: 105 (A)
 // 75 °C, 130 (B) 95 °C, 155 (F) 115 °C, 180 (H) 135 °C) or the job's own.
-// The worked example (R20 = 1.108293 Ω, 3 phases at 1 A) by hand: at 95 °C
-// 3·1²·1.108293·329.5/254.5 = 4.304699 W; at 20 °C 3.324879 W.
+// The worked example (R20 = 1.108829 Ω, 3 phases at 1 A) by hand: at 95 °C
+// 3·1²·1.108829·329.5/254.5 = 4.306788 W; at 20 °C 3.326487 W.
 func TestCopperLossHot(t *testing.T) {
 	cases := []struct {
 		name  string
@@ -320,10 +328,10 @@ func TestCopperLossHot(t *testing.T) {
 		tempC float64
 		lossW float64 // by hand, 0 where not worked
 	}{
-		{"class not given: 130 (B)", "", 95, 4.304699},
-		{"class 155 (F)", "thermal_class = 155\n", 115, 3 * 1.108293 * 349.5 / 254.5},
-		{"class 105 (A)", "thermal_class = 105\n", 75, 3 * 1.108293 * 309.5 / 254.5},
-		{"measured 60 °C", "copper_temperature_c = 60\n", 60, 3 * 1.108293 * 294.5 / 254.5},
+		{"class not given: 130 (B)", "", 95, 4.306788},
+		{"class 155 (F)", "thermal_class = 155\n", 115, 3 * 1.108829 * 349.5 / 254.5},
+		{"class 105 (A)", "thermal_class = 105\n", 75, 3 * 1.108829 * 309.5 / 254.5},
+		{"measured 60 °C", "copper_temperature_c = 60\n", 60, 3 * 1.108829 * 294.5 / 254.5},
 	}
 	for _, c := range cases {
 		src := strings.Replace(handJob, "voltage_v = 24\n", "voltage_v = 24\n"+c.extra, 1)
@@ -443,7 +451,7 @@ func TestStepJSON(t *testing.T) {
 			t.Fatal(err)
 		}
 		got := string(b)
-		for _, want := range []string{`"kind":"jumper"`, `"jumper":{"from_tooth":1,"to_tooth":2,"span_teeth":1,"reverses_sense":true}`, `"index":5`} {
+		for _, want := range []string{`"kind":"jumper"`, `"jumper":{"from_tooth":1,"to_tooth":2,"span_teeth":1,"reverses_sense":true,"leaves_slot":24,"enters_slot":1,"slot_pitches":1,"way":"ccw",`, `"index":5`} {
 			if !strings.Contains(got, want) {
 				t.Errorf("json.Marshal(first jumper step) = %s; want it to contain %s", got, want)
 			}

@@ -50,7 +50,7 @@ func (b *builder) steps() error {
 			c, _ := l.CoilOn(tooth)
 			before, after := winding.SlotsOf(tooth, q)
 			for _, s := range []int{before, after} {
-				if sidesIn[s] == 1 {
+				if sidesIn[s] == 1 && j.Stator.SeparatorMM > 0 {
 					if pa, pb, differ := slotPhases(l, s); differ {
 						b.add(Step{Kind: StepSeparator, Slot: s,
 							Title: "Phase separator in slot " + itoa(s),
@@ -66,6 +66,7 @@ func (b *builder) steps() error {
 			cs := &CoilStep{Order: cp.Order, Of: total, Tooth: tooth, Phase: name, Path: c.Path, Position: c.Position,
 				Direction: c.Direction.String(), Turns: p.TurnsPerCoil, WireLengthM: cp.WireLengthM,
 				SlotBefore: before, SlotAfter: after}
+			cs.DownSlot, cs.UpSlot = CoilSlots(p.Rotor, c.Direction, tooth, q)
 			if i == 0 {
 				cs.From = "start lead " + ch.Start + leadText
 			} else {
@@ -76,7 +77,7 @@ func (b *builder) steps() error {
 			} else {
 				cs.To = "jumper to tooth " + itoa(ch.Teeth[i+1])
 			}
-			cs.HowToWind = howToWind(p.Rotor, c.Direction, tooth, before, after, p.TurnsPerCoil, p.Wire.StrandsInHand)
+			cs.HowToWind = howToWind(p.Rotor, c.Direction, tooth, cs.DownSlot, cs.UpSlot, p.TurnsPerCoil, p.Wire.StrandsInHand)
 			pathWord := ""
 			if l.Spec.Paths > 1 {
 				pathWord = " path " + itoa(c.Path)
@@ -87,18 +88,16 @@ func (b *builder) steps() error {
 				Detail:    "From " + cs.From + " to " + cs.To + ". " + cs.HowToWind,
 				Reminders: coilReminders})
 			if i < len(ch.Jumpers) {
-				jp := ch.Jumpers[i]
-				jpc := jp
+				jp := b.jumpers[chi][i]
 				sense := "the next coil is wound the same way round"
 				if jp.ReversesSense {
 					sense = "the next coil is wound the other way round"
 				}
-				b.add(Step{Kind: StepJumper, Jumper: &jpc,
+				b.add(Step{Kind: StepJumper, Jumper: &jp,
 					Title: "Jumper: tooth " + itoa(jp.FromTooth) + " to tooth " + itoa(jp.ToTooth),
-					Detail: "Carry the wire round the lead end " + itoa(jp.Span) + " tooth pitch" + plural(jp.Span, "", "es") +
-						" up the tooth numbers (counter-clockwise seen from the lead end), about " +
-						strconv.FormatFloat(float64(jp.Span)*p.JumperPitchMM+j.Build.JumperSlackMM, 'f', 0, 64) +
-						" mm with slack, without cutting it; " + sense + ". Sleeve it where it crosses other coils."})
+					Detail: "Carry the wire round the lead end without cutting it: it " + jp.Words() +
+						", about " + strconv.FormatFloat(jp.LengthMM, 'f', 0, 64) + " mm with slack; " + sense +
+						". Sleeve it where it crosses other coils."})
 			}
 		}
 		if chi == len(l.Chains)-1 || l.Chains[chi+1].Phase != ch.Phase {
@@ -146,26 +145,15 @@ func (b *builder) steps() error {
 }
 
 // howToWind says in plain words which way the wire goes round a tooth, seen
-// from the air gap as DESIGN.md defines it. Facing the tooth from the air gap
-// with the lead end up, the slot on the right is the slot before the tooth
-// for an inner rotor (looking outward from the bore) and the slot after it for
-// an outer rotor (looking inward): clockwise, the wire runs away from the lead
-// end down the right-hand slot.
-func howToWind(r Rotor, d winding.Direction, tooth, before, after, turns, strands int) string {
-	right, left := before, after
-	view := " seen from the bore, facing tooth "
+// from the air gap as the package conventions define it, with the slots from
+// CoilSlots.
+func howToWind(r Rotor, d winding.Direction, tooth, down, up, turns, strands int) string {
+	view := "from the bore"
 	if r == OuterRotor {
-		right, left = after, before
-		view = " seen from outside the stator, facing tooth "
+		view = "from outside the stator"
 	}
-	sense := "clockwise"
-	down, up := right, left
-	if d == winding.CCW {
-		sense = "counter-clockwise"
-		down, up = left, right
-	}
-	s := "Wind " + sense + view + itoa(tooth) + " with the lead end up: from the lead end go down slot " + itoa(down) +
-		" and come back up slot " + itoa(up) + "; " + itoa(turns) + " turns"
+	s := "Wind " + SenseWords(d) + " (" + view + "), facing tooth " + itoa(tooth) + " with the lead end up: " +
+		SlotWords(down, up) + "; " + itoa(turns) + " turns"
 	if strands > 1 {
 		s += ", " + itoa(strands) + " strands in hand laid side by side"
 	}

@@ -27,7 +27,8 @@ func TestStepsDemo(t *testing.T) {
 	// Outer rotor, facing tooth 1 from outside with the lead end up, the
 	// slot after it (slot 1) is on the right: clockwise goes down slot 1.
 	first := p.Steps[index(p, func(s Step) bool { return s.Kind == StepCoil })-1].Coil
-	if first.Tooth != 1 || first.Direction != "cw" || !strings.Contains(first.HowToWind, "go down slot 1 and come back up slot 24") ||
+	if first.Tooth != 1 || first.Direction != "cw" || !strings.Contains(first.HowToWind, "CLOCKWISE seen from the air gap (from outside the stator)") ||
+		!strings.Contains(first.HowToWind, "down slot 1, up slot 24") || first.DownSlot != 1 || first.UpSlot != 24 ||
 		first.From != "start lead U1 (300 mm)" || first.To != "jumper to tooth 2" || first.SlotBefore != 24 || first.SlotAfter != 1 {
 		t.Errorf("first coil step = %+v; want tooth 1 cw, down slot 1, from lead U1, to tooth 2", first)
 	}
@@ -38,7 +39,8 @@ func TestStepsVariants(t *testing.T) {
 	checkSteps(t, "worked example", inner)
 	c := inner.Steps[index(inner, func(s Step) bool { return s.Kind == StepCoil })-1].Coil
 	// Inner rotor: facing tooth 1 from the bore, the slot before (12) is on the right.
-	if !strings.Contains(c.HowToWind, "clockwise seen from the bore") || !strings.Contains(c.HowToWind, "go down slot 12 and come back up slot 1") {
+	if !strings.Contains(c.HowToWind, "CLOCKWISE seen from the air gap (from the bore)") || !strings.Contains(c.HowToWind, "down slot 12, up slot 1;") ||
+		c.DownSlot != 12 || c.UpSlot != 1 {
 		t.Errorf("inner-rotor first coil HowToWind = %q; want clockwise from the bore, down slot 12", c.HowToWind)
 	}
 	delta := strings.Replace(handJob, "poles = 10", "poles = 10\npaths = 2\nconnection = \"delta\"", 1)

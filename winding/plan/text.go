@@ -122,17 +122,18 @@ func (p *Plan) Text() string {
 	for _, st := range p.Steps {
 		switch st.Kind {
 		case StepJumper:
-			continue // shown on its coil's line
+			if jp := st.Jumper; jp != nil {
+				fmt.Fprintf(tw, "  %d\tjumper\ttooth %d to %d\t%s\n", st.Index, jp.FromTooth, jp.ToTooth, jp.Words())
+			}
 		case StepCoil:
 			c := st.Coil
-			fmt.Fprintf(tw, "  %d\tcoil\t%d/%d  tooth %d  %s%s  %s  %d turns\t%s -> %s\n", st.Index, c.Order, c.Of, c.Tooth, c.Phase,
-				pathSuffix(l.Spec.Paths, c.Path), c.Direction, c.Turns, c.From, c.To)
+			fmt.Fprintf(tw, "  %d\tcoil\t%d/%d  tooth %d  %s%s  %s  %s  %d turns\t%s -> %s\n", st.Index, c.Order, c.Of, c.Tooth, c.Phase,
+				pathSuffix(l.Spec.Paths, c.Path), c.Direction, SlotWords(c.DownSlot, c.UpSlot), c.Turns, c.From, c.To)
 		default:
 			fmt.Fprintf(tw, "  %d\t%s\t%s\t\n", st.Index, st.Kind, st.Title)
 		}
 	}
 	tw.Flush()
-	b.WriteString("  (jumpers between coils are steps of their own; see `plan --json` or the bench guide)\n")
 
 	b.WriteString("\nTests\n")
 	for _, t := range p.Tests {

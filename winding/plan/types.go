@@ -51,7 +51,8 @@ type Plan struct {
 	RatedVoltageFromEMF bool       `json:"rated_voltage_from_emf"`
 	RatedPowerW         float64    `json:"rated_power_w"`
 	RatedPowerEstimated bool       `json:"rated_power_estimated"`
-	JumperPitchMM       float64    `json:"jumper_pitch_mm"` // jumper length per tooth pitch round the lead end
+	JumperPitchMM       float64    `json:"jumper_pitch_mm"`  // jumper length per slot pitch round the lead end
+	JumperRadiusMM      float64    `json:"jumper_radius_mm"` // the radius jumpers run at round the lead end (mid slot depth)
 
 	CopperLengthM float64 `json:"copper_length_m"` // all coils, jumpers and leads, one strand counted per strand
 	CopperMassKg  float64 `json:"copper_mass_kg"`
@@ -190,8 +191,8 @@ type Step struct {
 
 	// Coil steps.
 	Coil *CoilStep `json:"coil,omitempty"`
-	// Jumper steps.
-	Jumper *winding.Jumper `json:"jumper,omitempty"`
+	// Jumper steps: the slot it leaves, the slot it enters, its length.
+	Jumper *JumperStep `json:"jumper,omitempty"`
 	// Separator steps: the slot.
 	Slot int `json:"slot,omitempty"`
 	// Test steps: the name of the Test in Plan.Tests.
@@ -218,6 +219,10 @@ type CoilStep struct {
 	To          string  `json:"to"`   // "jumper to tooth 7" or "finish lead U2 (300 mm)"
 	SlotBefore  int     `json:"slot_before"`
 	SlotAfter   int     `json:"slot_after"`
+	// DownSlot and UpSlot: from the lead end the wire goes down DownSlot and
+	// comes back up UpSlot (CoilSlots; SlotWords says it in words).
+	DownSlot int `json:"down_slot"`
+	UpSlot   int `json:"up_slot"`
 }
 
 // Test is one line of the test plan.
