@@ -12,7 +12,7 @@ import (
 const (
 	ckCoilH = 7.2
 	ckBoxS  = 4.2
-	ckHeadH = 5.5 // the column header
+	ckHeadH = 6.6 // the column header
 )
 
 // checklist writes one row per bench step in the plan's order: a coil row
@@ -37,8 +37,10 @@ func (b *builder) checklist() {
 	for _, st := range steps {
 		b.checkRow(f, st, rec)
 	}
-	// closing sign-off
-	f.need(22)
+	// closing sign-off, under the column header on a page of its own
+	if f.need(22) {
+		b.checkHeader(f)
+	}
 	f.y += 4
 	b.signOff(f, "Winding finished")
 }
@@ -59,21 +61,21 @@ var ckCols = []struct {
 	head string
 	x    float64
 }{
-	{"step", 0}, {"coil", 10}, {"tooth", 27}, {"phase", 40}, {"path·pos", 51}, {"sense", 66}, {"turns", 84},
-	{"from / to", 97}, {"turns counted", 150}, {"sense checked", 162}, {"initials", 174},
+	{"step", 0}, {"coil", 9}, {"tooth", 24}, {"phase", 35}, {"path·pos", 43}, {"sense", 56}, {"turns", 73},
+	{"from / to", 83}, {"turns counted", 146}, {"sense checked", 158}, {"initials", 170},
 }
 
 func (b *builder) checkHeader(f *flow) {
 	w := b.width()
 	f.c.box(marginMM, f.y, w, ckHeadH, Pen{}, &Fill{Colour{215, 215, 215}})
-	for _, col := range ckCols {
+	for i, col := range ckCols {
 		x := marginMM + col.x*w/186
-		if col.x >= 150 {
-			f.c.text(x+5, f.y+2.4, sizeTiny, Bold, Ink, centre, firstWord(col.head))
-			f.c.text(x+5, f.y+4.8, sizeTiny, Bold, Ink, centre, restWords(col.head))
+		if i >= 8 {
+			f.c.text(x+5, f.y+2.8, sizeTiny, Bold, Ink, centre, firstWord(col.head))
+			f.c.text(x+5, f.y+5.6, sizeTiny, Bold, Ink, centre, restWords(col.head))
 			continue
 		}
-		f.c.text(x+1, f.y+3.8, sizeTiny+0.5, Bold, Ink, left, col.head)
+		f.c.text(x+1, f.y+4.3, sizeTiny, Bold, Ink, left, col.head)
 	}
 	f.y += ckHeadH
 }
@@ -99,7 +101,7 @@ func restWords(s string) string {
 func (b *builder) colX(i int) float64 { return marginMM + ckCols[i].x*b.width()/186 }
 
 // ckSmall is the size of the from / to and detail text of a checklist row.
-const ckSmall = sizeTiny + 0.5
+const ckSmall = sizeTiny
 
 // fromToLines is the "from / to" cell of a coil row, wrapped to its column.
 func (b *builder) fromToLines(cs *plan.CoilStep) []string {
@@ -260,7 +262,7 @@ func (b *builder) stepRow(f *flow, st plan.Step, h, band float64, sp *StepProgre
 	if kw == "" {
 		kw = string(st.Kind)
 	}
-	c.text(b.colX(1)+1, y+4.3, sizeTiny+0.5, Bold, Colour{90, 90, 90}, left, kw)
+	c.text(b.colX(1)+1, y+4.3, sizeTiny, Bold, Colour{90, 90, 90}, left, kw)
 	ty := y + 4.3
 	for _, l := range b.titleLines(title) {
 		c.text(b.colX(2)+1, ty, sizeBody, Bold, Ink, left, l)

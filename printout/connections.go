@@ -11,7 +11,7 @@ import (
 const (
 	conBoxW = 12
 	conBoxH = 12
-	conGap  = 8
+	conGap  = 10 // holds "reverse" in bold at the smallest size
 	conTagW = 13
 	conLine = 19 // height of one line of coils
 )
@@ -88,7 +88,8 @@ func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int,
 		if i == 0 {
 			b.terminalTag(c, x, mid, conTagW-3, ch.Start)
 		} else {
-			c.text(x+conTagW-3.5, mid+1, sizeTiny, Regular, Faint, right, "from above")
+			c.text(x+conTagW-3.5, mid-0.6, sizeTiny, Regular, Faint, right, "from")
+			c.text(x+conTagW-3.5, mid+2.2, sizeTiny, Regular, Faint, right, "above")
 		}
 		x += conTagW
 		end := min(len(ch.Teeth), i+perLine)
@@ -114,7 +115,7 @@ func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int,
 				c.line(x, mid, x+conGap, mid, wirePen)
 				c.label(x+conGap/2, mid-2, sizeTiny, Regular, Ink, fmt.Sprintf("+%d", j.Span))
 				if j.ReversesSense {
-					c.label(x+conGap/2, mid+2.2, sizeTiny-0.8, Regular, Ink, "reverse")
+					c.label(x+conGap/2, mid+2.4, sizeTiny, Bold, Ink, "reverse")
 				}
 				x += conGap
 			}

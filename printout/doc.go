@@ -1,5 +1,7 @@
 // Package printout lays out and renders the shop pack of a winding plan: the
-// slot map with its title block, the developed layout, the connection sheet,
+// slot map with the plan's warnings and its title block (and, for a stator
+// whose labels would collide on one ring, sector sheets drawn large enough
+// for every tooth's number, phase mark and sense), the developed layout, the connection sheet,
 // the cut list and materials, the winding checklist and the test record.
 //
 // Model. Build turns a *plan.Plan into a Pack: pages of plain shapes (lines,
@@ -9,7 +11,8 @@
 // fonts' own advance widths), so layouts are tested on the model without a
 // PDF. Render is a thin pass that draws the model with fpdf; it does no
 // layout. Fonts are the Go fonts (goregular, gobold, gomono) embedded as
-// subsets; runes they lack are printed as '?'. Glyphs the fonts lack and the
+// subsets; runes they lack are printed as '?' (the tests fail on any). No
+// word is set below 7 pt (sizeMin). Glyphs the fonts lack and the
 // pack needs (the circular arrows of winding sense, the conductor cross and
 // dot, the warning triangle) are vector shapes.
 //

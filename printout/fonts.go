@@ -30,9 +30,11 @@ var (
 	faceMetrics [3]*metrics
 )
 
-// measureRunes lists every rune the pack may print; others are replaced by
-// '?' (see clean). The Go fonts cover Latin, Greek and Cyrillic; the runes
-// here are those the pages use plus ASCII.
+// loadMetrics reads the advance of every rune each face has from U+0020 up
+// to the end of the mathematical operators (U+22FF): Latin, Greek, Cyrillic,
+// punctuation, letter-like symbols (Ω), arrows and the operators the pages
+// use (√, −, ±, ×, ·, ≤, ≥). A rune outside that range or missing from a face
+// is replaced by clean and counted on its page (Page.Replaced).
 func loadMetrics() {
 	for f, data := range faceFonts {
 		fnt, err := sfnt.Parse(data)
@@ -45,7 +47,7 @@ func loadMetrics() {
 		upem := fnt.UnitsPerEm()
 		m.unitsPerEm = float64(upem)
 		ppem := fixed.Int26_6(upem) << 6
-		for r := rune(0x20); r < 0x2200; r++ {
+		for r := rune(0x20); r <= lastRune; r++ {
 			gi, err := fnt.GlyphIndex(&buf, r)
 			if err != nil || gi == 0 {
 				continue
@@ -61,6 +63,9 @@ func loadMetrics() {
 		}
 	}
 }
+
+// lastRune is the last rune whose glyph the faces are searched for.
+const lastRune = 0x22ff
 
 func metricsOf(f Face) *metrics {
 	metricsOnce.Do(loadMetrics)

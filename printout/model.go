@@ -1,6 +1,9 @@
 package printout
 
-import "time"
+import (
+	"math"
+	"time"
+)
 
 // Colour is an RGB colour, 0..255 a channel.
 type Colour struct{ R, G, B uint8 }
@@ -98,7 +101,25 @@ func (l *Line) bounds() (float64, float64, float64, float64) {
 func (b *Box) bounds() (float64, float64, float64, float64) { return b.X, b.Y, b.X + b.W, b.Y + b.H }
 
 func (a *Arc) bounds() (float64, float64, float64, float64) {
-	return a.Centre.X - a.Radius, a.Centre.Y - a.Radius, a.Centre.X + a.Radius, a.Centre.Y + a.Radius
+	if math.Abs(a.Sweep) >= 360 {
+		return a.Centre.X - a.Radius, a.Centre.Y - a.Radius, a.Centre.X + a.Radius, a.Centre.Y + a.Radius
+	}
+	// the ends and every quarter point the arc passes
+	lo, hi := a.Start, a.Start+a.Sweep
+	if hi < lo {
+		lo, hi = hi, lo
+	}
+	p := polar(a.Centre, a.Radius, lo)
+	x0, y0, x1, y1 := p.X, p.Y, p.X, p.Y
+	add := func(ang float64) {
+		q := polar(a.Centre, a.Radius, ang)
+		x0, y0, x1, y1 = min(x0, q.X), min(y0, q.Y), max(x1, q.X), max(y1, q.Y)
+	}
+	add(hi)
+	for k := math.Ceil(lo/90) * 90; k < hi; k += 90 {
+		add(k)
+	}
+	return x0, y0, x1, y1
 }
 
 func (p *Poly) bounds() (float64, float64, float64, float64) {

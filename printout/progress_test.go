@@ -131,7 +131,8 @@ func cellTexts(pages []*Page, x0, x1 float64) []*Text {
 	var out []*Text
 	for _, pg := range pages {
 		for _, s := range pg.Shapes {
-			if tx, ok := s.(*Text); ok && tx.X >= x0 && tx.X < x1 {
+			// the footer (sheet number) is no cell
+			if tx, ok := s.(*Text); ok && tx.X >= x0 && tx.X < x1 && tx.Y < pg.H-marginMM-footerH {
 				out = append(out, tx)
 			}
 		}

@@ -23,8 +23,43 @@ type ringGeometry struct {
 	stagger             bool    // tooth numbers on two radii, odd teeth outer
 	rOut, rIn           float64 // iron band
 	yoke                float64 // yoke thickness
+	// rot turns the whole drawing (degrees, counter-clockwise on the page):
+	// a sector sheet turns its sector to the top.
+	rot float64
+	// first and last bound the teeth drawn, counting counter-clockwise
+	// from first (last may be below first: the window wraps past tooth Q);
+	// zero first draws every tooth.
+	first, last int
+	// sparse draws the whole ring without per-tooth marks: phase tints,
+	// every step-th tooth number and the leads (the overview of a stator
+	// whose labels would collide at the ring's size).
+	sparse bool
+	step   int
 }
 
+// angle is the page angle of tooth k of q in this drawing.
+func (g ringGeometry) angle(k, q int) float64 { return toothAngle(k, q) + g.rot }
+
+// shows reports whether tooth k is drawn.
+func (g ringGeometry) shows(k, q int) bool {
+	if g.first == 0 {
+		return true
+	}
+	return (k-g.first+q)%q <= (g.last-g.first+q)%q
+}
+
+// numbered reports whether tooth k carries its number.
+func (g ringGeometry) numbered(k, q int) bool {
+	if !g.shows(k, q) {
+		return false
+	}
+	return !g.sparse || k == 1 || (k%g.step == 0 && q-k >= g.step/2)
+}
+
+// maxIronDepth is the deepest the stator iron is drawn, mm.
+const maxIronDepth = 40
+
+// ringFor lays out the radii of a ring of q teeth whose drawing reaches rMax.
 func ringFor(q int, centre Point, rMax float64) ringGeometry {
 	g := ringGeometry{centre: centre, rMax: rMax}
 	g.rTag = rMax - leadReach
@@ -43,19 +78,31 @@ func ringFor(q int, centre Point, rMax float64) ringGeometry {
 	g.rMark = g.rArrow - g.cell*1.1
 	g.rOut = g.rMark - g.cell*0.5 - 0.8
 	g.rIn = g.rOut * 0.56
+	if g.rOut-g.rIn > maxIronDepth {
+		// a large ring (the sector sheets) keeps the iron shallow: the
+		// words are what it is drawn large for
+		g.rIn = g.rOut - maxIronDepth
+	}
 	g.yoke = (g.rOut - g.rIn) * 0.26
 	return g
 }
 
 // slotMap draws the stator ring seen from the connection end with every
 // tooth numbered, its coil's phase mark and winding sense, and the leads,
-// then the legend and the title block.
+// then the legend and the title block. Where the labels of every tooth
+// would collide on a ring that fits the sheet, the first sheet shows the
+// whole ring with every few teeth numbered and the leads, and sector sheets
+// follow, each a part of the ring drawn large enough for every label, the
+// teeth at either end repeated from the neighbouring sector.
 func (b *builder) slotMap() {
 	c := b.newPage(SlotMapPage, "Slot map")
 	g := b.slotRing()
 	centre, rMax := g.centre, g.rMax
-
-	c.text(marginMM, b.top()+3, sizeSmall, Regular, Ink, left, "Seen from the connection (lead) end. Teeth numbered counter-clockwise.")
+	note := "Seen from the connection (lead) end. Teeth numbered counter-clockwise."
+	if g.sparse {
+		note = fmt.Sprintf("Seen from the connection (lead) end, teeth numbered counter-clockwise: every %s here, every tooth on the sector sheets.", ordinal(g.step))
+	}
+	c.text(marginMM, b.top()+3, sizeSmall, Regular, Ink, left, fit(note, b.width(), sizeSmall, Regular))
 	b.drawIron(c, g)
 	b.drawToothLabels(c, g)
 	b.drawLeads(c, g)
@@ -63,20 +110,217 @@ func (b *builder) slotMap() {
 
 	y := centre.Y + rMax + 2
 	y = b.slotMapLegend(c, y)
+	if wh := b.warningsHeight(b.width()); wh > 0 {
+		y = b.warningsBox(c, y+2)
+	}
 	b.titleBlock(c, math.Max(y+2, b.bottom()-slotMapTitleH), slotMapTitleH)
+	if g.sparse {
+		b.sectorSheets()
+	}
 }
 
 // slotMapTitleH is the height of the slot map's title block, mm.
 const slotMapTitleH = 50.0
 
 // slotRing sizes the stator drawing to the room the legend and the title
-// block leave on the slot map.
+// block leave on the slot map; when the labels of every tooth would collide
+// at that size the ring is drawn sparse.
 func (b *builder) slotRing() ringGeometry {
 	l := b.p.Layout
 	legendH := 14 + 5.0*float64((len(l.PhaseNames)+2)/3)
-	avail := b.bottom() - b.top() - slotMapTitleH - legendH - 4
+	avail := b.bottom() - b.top() - slotMapTitleH - legendH - 8
+	if wh := b.warningsHeight(b.width()); wh > 0 {
+		avail -= wh + 2
+	}
 	rMax := math.Min(avail, b.width()) / 2
-	return ringFor(l.Spec.Slots, Point{b.paper.W / 2, b.top() + 2 + rMax}, rMax)
+	g := ringFor(l.Spec.Slots, Point{b.paper.W / 2, b.top() + 6 + rMax}, rMax)
+	if !b.labelsFit(g) {
+		g.sparse = true
+		// number every step-th tooth, step a round 2, 5 or 10 times a power
+		// of ten wide enough to clear the widest number
+		need := (textWidth(Bold, sizeBody, fmt.Sprint(l.Spec.Slots)) + 1.5) / (2 * math.Pi * g.rNum / float64(l.Spec.Slots))
+		g.step = roundStep(need)
+		g.stagger = false
+		// no marks on the iron: it grows out to the numbers
+		g.rOut = g.rNum - 5
+		g.rIn = g.rOut * 0.6
+		g.yoke = (g.rOut - g.rIn) * 0.26
+	}
+	return g
+}
+
+// ordinal writes n as "2nd", "5th", "10th".
+func ordinal(n int) string {
+	switch {
+	case n%100/10 == 1:
+		return fmt.Sprintf("%dth", n)
+	case n%10 == 1:
+		return fmt.Sprintf("%dst", n)
+	case n%10 == 2:
+		return fmt.Sprintf("%dnd", n)
+	case n%10 == 3:
+		return fmt.Sprintf("%drd", n)
+	}
+	return fmt.Sprintf("%dth", n)
+}
+
+// roundStep is the smallest of 2, 5, 10, 20, 50... at least n.
+func roundStep(n float64) int {
+	for m := 1; ; m *= 10 {
+		for _, k := range []int{2, 5, 10} {
+			if float64(k*m) >= n {
+				return k * m
+			}
+		}
+	}
+}
+
+// labelsFit reports whether the tooth numbers, phase marks and sense
+// arrows of every tooth keep clear of each other on ring g: it lays them out
+// on a scratch canvas and compares each shape with those of the next two
+// teeth (discs as circles, the rest by their boxes).
+func (b *builder) labelsFit(g ringGeometry) bool {
+	q := b.p.Layout.Spec.Slots
+	g.sparse = false
+	var teeth [][]Shape
+	for k := 1; k <= q; k++ {
+		one := g
+		one.first, one.last = k, k
+		scratch := &canvas{page: &Page{}}
+		b.drawToothLabels(scratch, one)
+		teeth = append(teeth, scratch.page.Shapes)
+	}
+	for k := range teeth {
+		for d := 1; d <= 2 && d < q; d++ {
+			for _, a := range teeth[k] {
+				for _, o := range teeth[(k+d)%q] {
+					if isLabel(a) && isLabel(o) && shapesMeet(a, o, 0.1) {
+						return false
+					}
+				}
+			}
+		}
+	}
+	return true
+}
+
+// circleMeetsBox reports whether circle c comes within gap of the box of s.
+func circleMeetsBox(c *Arc, s Shape, gap float64) bool {
+	x0, y0, x1, y1 := s.bounds()
+	dx := math.Max(0, math.Max(x0-c.Centre.X, c.Centre.X-x1))
+	dy := math.Max(0, math.Max(y0-c.Centre.Y, c.Centre.Y-y1))
+	return math.Hypot(dx, dy) < c.Radius+gap
+}
+
+// isLabel reports whether a shape of the tooth labels is a word or a phase
+// mark's disc (the sense arrows, drawn within their own tooth's pitch, are
+// left out).
+func isLabel(s Shape) bool {
+	switch s := s.(type) {
+	case *Text:
+		return true
+	case *Arc:
+		return math.Abs(s.Sweep) >= 360
+	}
+	return false
+}
+
+// shapesMeet reports whether two shapes come closer than gap: two full
+// circles by their centres and radii, anything else by its box.
+func shapesMeet(a, o Shape, gap float64) bool {
+	ca, okA := a.(*Arc)
+	co, okO := o.(*Arc)
+	okA = okA && math.Abs(ca.Sweep) >= 360
+	okO = okO && math.Abs(co.Sweep) >= 360
+	switch {
+	case okA && okO:
+		return math.Hypot(ca.Centre.X-co.Centre.X, ca.Centre.Y-co.Centre.Y) < ca.Radius+co.Radius+gap
+	case okA:
+		return circleMeetsBox(ca, o, gap)
+	case okO:
+		return circleMeetsBox(co, a, gap)
+	}
+	ax0, ay0, ax1, ay1 := a.bounds()
+	bx0, by0, bx1, by1 := o.bounds()
+	return ax0 < bx1+gap && bx0 < ax1+gap && ay0 < by1+gap && by0 < ay1+gap
+}
+
+// sectorSheets draws the ring in sectors large enough for every label, as
+// many to a sheet as fit one above the other.
+func (b *builder) sectorSheets() {
+	l := b.p.Layout
+	q := l.Spec.Slots
+	w := b.width()
+	// grow the ring until every label fits
+	rMax := w / 2
+	var g ringGeometry
+	for i := 0; i < 40; i++ {
+		g = ringFor(q, Point{}, rMax)
+		if b.labelsFit(g) {
+			break
+		}
+		rMax *= 1.12
+	}
+	reach := rMax + leadTagH + 2 // lead tags stand out beyond rMax
+	// the widest half angle whose chord fits the sheet, less the overlap
+	half := math.Asin(math.Min(1, (w/2-1)/reach)) * 180 / math.Pi
+	pitch := 360 / float64(q)
+	const overlap = 2 // teeth repeated from each neighbouring sector
+	per := int(2*half/pitch) - 2*overlap
+	per = max(1, per)
+	n := (q + per - 1) / per
+	per = (q + n - 1) / n // even out the sectors
+	halfA := (float64(per+2*overlap) / 2) * pitch
+	rLow := math.Min(g.rIn, g.rOut) - 2
+	sectorH := reach - rLow*math.Cos(halfA*math.Pi/180) + 8
+	room := b.bottom() - b.top() - 8
+	perSheet := max(1, int(room/sectorH))
+	sheets := (n + perSheet - 1) / perSheet
+	first := len(b.pages) // index of the overview
+	var c *canvas
+	y := 0.0
+	for i := 0; i < n; i++ {
+		if i%perSheet == 0 {
+			c = b.newPage(SlotMapPage, fmt.Sprintf("Slot map, sectors (sheet %d of %d)", i/perSheet+1, sheets))
+			y = b.top() + 3
+			c.para(marginMM, y, w, sizeSmall, Regular, Ink,
+				"Seen from the connection (lead) end, the ring in parts, each turned so its middle is at the top. "+
+					"Teeth before a dash-dot cut line repeat those of the neighbouring sector.")
+			y += 8
+		}
+		lo := i*per + 1
+		hi := min(q, (i+1)*per)
+		mid := (float64(lo+hi) / 2)
+		sg := ringFor(q, Point{b.paper.W / 2, y + reach + 2}, rMax)
+		sg.rot = -(mid - 1) * pitch
+		sg.first = (lo-1-overlap+q)%q + 1
+		sg.last = (hi-1+overlap)%q + 1
+		if n == 1 {
+			sg.first, sg.last = 0, 0
+		}
+		c.text(marginMM, y+3, sizeBody, Bold, Ink, left, fmt.Sprintf("Teeth %d to %d", lo, hi))
+		b.drawIron(c, sg)
+		b.drawToothLabels(c, sg)
+		b.drawLeads(c, sg)
+		b.cutLines(c, sg, lo, hi, first)
+		y += sectorH
+	}
+}
+
+// cutLines marks where a sector ends: a dash-dot radial line in the slot
+// before tooth lo and after tooth hi, the teeth beyond it being repeats.
+func (b *builder) cutLines(c *canvas, g ringGeometry, lo, hi, overview int) {
+	q := b.p.Layout.Spec.Slots
+	if g.first == 0 {
+		return
+	}
+	pitch := 360 / float64(q)
+	rLow := math.Min(g.rIn, g.rOut) - 1
+	for _, a := range []float64{g.angle(lo, q) - pitch/2, g.angle(hi, q) + pitch/2} {
+		p0, p1 := polar(g.centre, rLow, a), polar(g.centre, g.rMax-2, a)
+		c.line(p0.X, p0.Y, p1.X, p1.Y, Pen{Width: 0.45, Colour: Ink, Dash: Dash{3, 1, 0, 1}, Round: true})
+	}
+	_ = overview
 }
 
 // drawIron draws yoke, coils and teeth.
@@ -94,11 +338,25 @@ func (b *builder) drawIron(c *canvas, g ringGeometry) {
 		yIn, yOut = g.rOut-g.yoke, g.rOut
 		tRoot, tTip = yIn, g.rIn
 	}
-	c.circle(o.X, o.Y, yOut, outline, &Fill{iron})
-	c.circle(o.X, o.Y, yIn, outline, &Fill{White})
 	pitch := 360 / float64(q)
 	sector := func(r0, r1, a0, a1 float64) []Point {
 		return []Point{polar(o, r0, a0), polar(o, r1, a0), polar(o, r1, a1), polar(o, r0, a1)}
+	}
+	a0, a1 := 0.0, 360.0 // the span drawn, page degrees
+	if g.first != 0 {
+		a0 = g.angle(g.first, q) - pitch/2
+		a1 = a0 + float64((g.last-g.first+q)%q+1)*pitch
+		var band []Point
+		for k := 0; k <= 48; k++ {
+			band = append(band, polar(o, yOut, a0+(a1-a0)*float64(k)/48))
+		}
+		for k := 48; k >= 0; k-- {
+			band = append(band, polar(o, yIn, a0+(a1-a0)*float64(k)/48))
+		}
+		c.poly(band, true, outline, &Fill{iron})
+	} else {
+		c.circle(o.X, o.Y, yOut, outline, &Fill{iron})
+		c.circle(o.X, o.Y, yIn, outline, &Fill{White})
 	}
 	// coils under the teeth, so each shows as two sides in its slots
 	coilIn, coilOut := math.Min(tRoot, tTip), math.Max(tRoot, tTip)
@@ -110,14 +368,20 @@ func (b *builder) drawIron(c *canvas, g ringGeometry) {
 		half = 0.8
 	}
 	for _, cl := range l.Coils {
-		a := toothAngle(cl.Tooth, q)
+		if !g.shows(cl.Tooth, q) {
+			continue
+		}
+		a := g.angle(cl.Tooth, q)
 		st := b.phaseStyle(cl.Phase)
 		pen := Pen{Width: math.Min(0.6, 0.05*g.cell+0.2), Colour: st.Colour, Dash: scaleDash(st.Dash, g.cell/6), Round: true}
 		c.poly(sector(coilIn, coilOut, a-half*pitch, a+half*pitch), true, pen, &Fill{st.Tint})
 	}
 	// teeth with tip shoes
 	for k := 1; k <= q; k++ {
-		a := toothAngle(k, q)
+		if !g.shows(k, q) {
+			continue
+		}
+		a := g.angle(k, q)
 		shoe := (tTip - tRoot) * 0.12
 		body := sector(tRoot, tTip-shoe, a-0.17*pitch, a+0.17*pitch)
 		tip := sector(tTip-shoe, tTip, a-0.41*pitch, a+0.41*pitch)
@@ -127,11 +391,11 @@ func (b *builder) drawIron(c *canvas, g ringGeometry) {
 	// rotor outline beyond the air gap
 	gap := math.Max(0.8, (g.rOut-g.rIn)*0.04)
 	rotorPen := Pen{Width: 0.25, Colour: Faint, Dash: Dash{1.5, 1}}
+	rr := g.rIn - gap
 	if b.p.Rotor == plan.OuterRotor {
-		c.circle(o.X, o.Y, g.rOut+gap, rotorPen, nil)
-	} else {
-		c.circle(o.X, o.Y, g.rIn-gap, rotorPen, nil)
+		rr = g.rOut + gap
 	}
+	c.add(&Arc{Centre: o, Radius: rr, Start: a0, Sweep: a1 - a0, Pen: rotorPen})
 }
 
 // scaleDash shrinks a dash pattern for small drawings.
@@ -153,18 +417,29 @@ func scaleDash(d Dash, k float64) Dash {
 func (b *builder) drawToothLabels(c *canvas, g ringGeometry) {
 	l := b.p.Layout
 	q := l.Spec.Slots
-	numSize := math.Max(4.2, math.Min(9, g.cell/ptMM*0.68))
+	numSize := math.Max(sizeMin, math.Min(9, g.cell/ptMM*0.68))
 	if g.stagger {
-		numSize = math.Max(4.2, math.Min(9, g.cell/ptMM*0.75))
+		numSize = math.Max(sizeMin, math.Min(9, g.cell/ptMM*0.75))
+	}
+	if g.sparse {
+		numSize = sizeBody
 	}
 	for k := 1; k <= q; k++ {
-		a := toothAngle(k, q)
+		if !g.shows(k, q) {
+			continue
+		}
+		a := g.angle(k, q)
 		rn := g.rNum
 		if g.stagger && k%2 == 1 {
 			rn += g.cell * 0.85
 		}
-		pn := polar(g.centre, rn, a)
-		c.label(pn.X, pn.Y, numSize, Bold, Ink, fmt.Sprint(k))
+		if g.numbered(k, q) {
+			pn := polar(g.centre, rn, a)
+			c.label(pn.X, pn.Y, numSize, Bold, Ink, fmt.Sprint(k))
+		}
+		if g.sparse {
+			continue
+		}
 		cl, ok := l.CoilOn(k)
 		if !ok {
 			pm := polar(g.centre, g.rMark, a)
@@ -182,7 +457,7 @@ func (b *builder) drawToothLabels(c *canvas, g ringGeometry) {
 func (b *builder) phaseMark(c *canvas, p Point, r float64, phase int) {
 	st := b.phaseStyle(phase)
 	c.circle(p.X, p.Y, r, Pen{Width: math.Max(0.25, r*0.14), Colour: st.Colour, Dash: scaleDash(st.Dash, r/3), Round: true}, &Fill{st.Tint})
-	size := math.Max(4, math.Min(11, r*1.25/ptMM))
+	size := math.Max(sizeMin, math.Min(11, r*1.25/ptMM))
 	col := st.Colour
 	if col == (Colour{128, 128, 128}) {
 		col = Colour{90, 90, 90} // darker grey letter reads better on its tint
@@ -287,7 +562,10 @@ func (b *builder) placeLeads(g ringGeometry) []leadPlace {
 	rEdge := math.Max(rFrom+leadMinLen+1.5, g.rTag)
 	var out []leadPlace
 	for _, ld := range b.leads() {
-		a := toothAngle(ld.tooth, q)
+		if !g.shows(ld.tooth, q) {
+			continue
+		}
+		a := g.angle(ld.tooth, q)
 		w := textWidth(Bold, size, ld.mark) + 2.4
 		from := polar(g.centre, rFrom, a)
 		knee := polar(g.centre, rEdge-1.5, a)
@@ -295,7 +573,7 @@ func (b *builder) placeLeads(g ringGeometry) []leadPlace {
 		found := false
 		// try the tooth's own angle first, then ever further either side,
 		// on the tag ring and a step outside it
-		for step := 0; step <= 60 && !found; step++ {
+		for step := 0; step <= 240 && !found; step++ {
 			for _, out2 := range []float64{0, leadTagH + 1.2} {
 				d := float64((step+1)/2) * 1.5 * float64(1-2*(step%2)) // 0, +1.5, -1.5, +3, ...
 				ta := a + d*180/(math.Pi*rEdge)
@@ -368,7 +646,7 @@ func (b *builder) ringCentre(c *canvas, g ringGeometry) {
 	if b.p.Rotor == plan.OuterRotor {
 		r = g.rIn * 0.85
 	}
-	size := math.Max(5.5, math.Min(sizeHead, r/6/ptMM))
+	size := math.Max(sizeMin, math.Min(sizeHead, r/6/ptMM))
 	lh := size * ptMM * 1.35
 	lines := []string{
 		fmt.Sprintf("%d teeth, %d poles", l.Spec.Slots, l.Spec.Poles),

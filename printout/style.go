@@ -93,13 +93,16 @@ func StyleOf(i int, name string) PhaseStyle {
 	return PhaseStyle{Name: name, Colour: c.c, Tint: c.tint, Pattern: p.name, Dash: p.dash}
 }
 
-// Font sizes in points.
+// Font sizes in points. Nothing on a sheet is set smaller than sizeMin:
+// ISO 3098 lettering starts at a nominal height of 1.8 mm (from memory), and
+// 7 pt is the smallest body size whose capitals in the Go fonts come near it.
 const (
+	sizeMin     = 7
 	sizeTitle   = 15
 	sizeHead    = 10.5
 	sizeBody    = 8.5
 	sizeSmall   = 7
-	sizeTiny    = 5.5
+	sizeTiny    = sizeMin
 	marginMM    = 12
 	lineWidthMM = 0.25
 )

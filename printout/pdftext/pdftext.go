@@ -127,12 +127,41 @@ func unescape(s []byte) []byte {
 	return out
 }
 
-// tjStrings finds the literal string operands of Tj in a content stream.
-func tjStrings(content []byte) [][]byte {
-	var out [][]byte
+// tjRun is the raw string of one Tj with the text state it was shown in.
+type tjRun struct {
+	raw  []byte
+	size float64 // points, from the last Tf
+	x, y float64 // from the Td of its text object, in PDF points
+}
+
+var (
+	tfRe = regexp.MustCompile(`/\S+ ([0-9.]+) Tf`)
+	tdRe = regexp.MustCompile(`(-?[0-9.]+) (-?[0-9.]+) Td`)
+)
+
+// tjStrings finds the literal string operands of Tj in a content stream,
+// each with the font size last set by Tf and the position last set by Td
+// before it.
+func tjStrings(content []byte) []tjRun {
+	tfs := tfRe.FindAllSubmatchIndex(content, -1)
+	tds := tdRe.FindAllSubmatchIndex(content, -1)
+	num := func(m []int, k int) float64 {
+		v, _ := strconv.ParseFloat(string(content[m[2*k]:m[2*k+1]]), 64)
+		return v
+	}
+	var out []tjRun
+	size, x, y := 0.0, 0.0, 0.0
 	for i := 0; i < len(content); i++ {
 		if content[i] != '(' {
 			continue
+		}
+		for len(tfs) > 0 && tfs[0][0] < i {
+			size = num(tfs[0], 1)
+			tfs = tfs[1:]
+		}
+		for len(tds) > 0 && tds[0][0] < i {
+			x, y = num(tds[0], 1), num(tds[0], 2)
+			tds = tds[1:]
 		}
 		depth := 1
 		j := i + 1
@@ -148,15 +177,40 @@ func tjStrings(content []byte) [][]byte {
 		}
 		rest := bytes.TrimLeft(content[j:], " ")
 		if bytes.HasPrefix(rest, []byte("Tj")) {
-			out = append(out, unescape(content[i+1:j-1]))
+			out = append(out, tjRun{raw: unescape(content[i+1 : j-1]), size: size, x: x, y: y})
 		}
 		i = j - 1
 	}
 	return out
 }
 
+// Run is one text run as the PDF shows it: its text, the font size it is set
+// in and the start of its baseline, in PDF points from the bottom left
+// corner of the page.
+type Run struct {
+	Text string
+	Size float64
+	X, Y float64
+}
+
 // Pages returns the text runs of each page content stream, in order.
 func Pages(pdf []byte) ([][]string, error) {
+	runs, err := Runs(pdf)
+	if err != nil {
+		return nil, err
+	}
+	pages := make([][]string, len(runs))
+	for i, pg := range runs {
+		for _, r := range pg {
+			pages[i] = append(pages[i], r.Text)
+		}
+	}
+	return pages, nil
+}
+
+// Runs returns the text runs of each page content stream, in order, with
+// their size and position.
+func Runs(pdf []byte) ([][]Run, error) {
 	streams, err := pdfStreams(pdf)
 	if err != nil {
 		return nil, err
@@ -171,13 +225,14 @@ func Pages(pdf []byte) ([][]string, error) {
 	if cm == nil {
 		return nil, fmt.Errorf("pdftext: no ToUnicode CMap found")
 	}
-	var pages [][]string
+	var pages [][]Run
 	for _, s := range streams {
 		if !bytes.Contains(s.data, []byte(" Tj")) || bytes.Contains(s.data, []byte("begincmap")) {
 			continue
 		}
-		var runs []string
-		for _, raw := range tjStrings(s.data) {
+		var runs []Run
+		for _, tj := range tjStrings(s.data) {
+			raw := tj.raw
 			if len(raw)%2 != 0 {
 				return nil, fmt.Errorf("pdftext: odd-length two-byte string %q", raw)
 			}
@@ -190,7 +245,7 @@ func Pages(pdf []byte) ([][]string, error) {
 				}
 				u = append(u, v)
 			}
-			runs = append(runs, string(utf16.Decode(u)))
+			runs = append(runs, Run{Text: string(utf16.Decode(u)), Size: tj.size, X: tj.x, Y: tj.y})
 		}
 		pages = append(pages, runs)
 	}
