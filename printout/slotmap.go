@@ -276,7 +276,6 @@ func (b *builder) sectorSheets() {
 	room := b.bottom() - b.top() - 8
 	perSheet := max(1, int(room/sectorH))
 	sheets := (n + perSheet - 1) / perSheet
-	first := len(b.pages) // index of the overview
 	var c *canvas
 	y := 0.0
 	for i := 0; i < n; i++ {
@@ -302,14 +301,14 @@ func (b *builder) sectorSheets() {
 		b.drawIron(c, sg)
 		b.drawToothLabels(c, sg)
 		b.drawLeads(c, sg)
-		b.cutLines(c, sg, lo, hi, first)
+		b.cutLines(c, sg, lo, hi)
 		y += sectorH
 	}
 }
 
 // cutLines marks where a sector ends: a dash-dot radial line in the slot
 // before tooth lo and after tooth hi, the teeth beyond it being repeats.
-func (b *builder) cutLines(c *canvas, g ringGeometry, lo, hi, overview int) {
+func (b *builder) cutLines(c *canvas, g ringGeometry, lo, hi int) {
 	q := b.p.Layout.Spec.Slots
 	if g.first == 0 {
 		return
@@ -320,7 +319,6 @@ func (b *builder) cutLines(c *canvas, g ringGeometry, lo, hi, overview int) {
 		p0, p1 := polar(g.centre, rLow, a), polar(g.centre, g.rMax-2, a)
 		c.line(p0.X, p0.Y, p1.X, p1.Y, Pen{Width: 0.45, Colour: Ink, Dash: Dash{3, 1, 0, 1}, Round: true})
 	}
-	_ = overview
 }
 
 // drawIron draws yoke, coils and teeth.
