@@ -3,6 +3,7 @@ package printout
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"coilwright/winding"
 	"coilwright/winding/plan"
@@ -62,7 +63,7 @@ var ckCols = []struct {
 	x    float64
 }{
 	{"step", 0}, {"coil", 9}, {"tooth", 24}, {"phase", 35}, {"path·pos", 43}, {"sense", 56}, {"turns", 73},
-	{"from / to", 83}, {"turns counted", 146}, {"sense checked", 158}, {"initials", 170},
+	{"wind / from → to", 83}, {"turns counted", 146}, {"sense checked", 158}, {"initials", 170},
 }
 
 func (b *builder) checkHeader(f *flow) {
@@ -103,31 +104,48 @@ func (b *builder) colX(i int) float64 { return marginMM + ckCols[i].x*b.width()/
 // ckSmall is the size of the from / to and detail text of a checklist row.
 const ckSmall = sizeTiny
 
-// fromToLines is the "from / to" cell of a coil row, wrapped to its column.
+// fromToLines is the "from / to" part of a coil row's wind cell, wrapped to
+// its column.
 func (b *builder) fromToLines(cs *plan.CoilStep) []string {
 	ft := cs.From
 	if cs.To != "" {
 		ft += " → " + cs.To
 	}
 	if ft == "" {
-		ft = fmt.Sprintf("slots %d and %d, %.2f m", cs.SlotBefore, cs.SlotAfter, cs.WireLengthM)
+		ft = fmt.Sprintf("%.2f m", cs.WireLengthM)
 	}
 	return wrap(clean(Regular, ft), b.colX(8)-b.colX(7)-2, ckSmall, Regular)
 }
 
-// coilRowHeight is the height of a coil row whose from / to cell takes n
-// lines: one row height up to two lines, growing a line step after that.
+// slotWords is the instruction of a coil row in the guide's words ("down
+// slot 1, up slot 24"), "" when the plan gives no slots.
+func slotWords(cs *plan.CoilStep) string {
+	if cs.DownSlot == 0 || cs.UpSlot == 0 {
+		return ""
+	}
+	return plan.SlotWords(cs.DownSlot, cs.UpSlot)
+}
+
+// Coil row text positions, mm from the top of the row.
+const (
+	ckWindBase = 1.3 + 0.75*sizeBody*ptMM // first baseline of the wind cell
+	ckCoilPad  = 1.3                       // below the last line
+)
+
+// coilRowHeight is the height of a coil row whose wind cell holds the
+// instruction and n lines of from / to.
 func coilRowHeight(n int) float64 {
-	return ckCoilH + float64(max(0, n-2))*lineStep(ckSmall)
+	return max(ckCoilH, ckWindBase+lineStep(sizeBody)*0.95+float64(max(0, n-1))*lineStep(ckSmall)+0.25*ckSmall*ptMM+ckCoilPad)
 }
 
 // coilRow draws a coil row of height h at f.y; band is the height of its
 // phase band (the row and the notes under it on this page). It leaves f.y.
-func (b *builder) coilRow(f *flow, st plan.Step, ft []string, band float64, sp *StepProgress) {
+func (b *builder) coilRow(f *flow, st plan.Step, ft []string, h, band float64, sp *StepProgress) {
 	c := f.c
 	cs := st.Coil
 	y := f.y
-	base := y + ckCoilH/2 + 1.1
+	mid := y + h/2
+	base := mid + 1.1
 	ph := b.phaseIndex(cs.Phase)
 	if ph >= 0 {
 		sty := b.phaseStyle(ph)
@@ -138,29 +156,31 @@ func (b *builder) coilRow(f *flow, st plan.Step, ft []string, band float64, sp *
 	c.text(b.colX(1)+1, base, sizeBody, Bold, Ink, left, of)
 	c.text(b.colX(2)+1, base, sizeBody+1, Bold, Ink, left, fmt.Sprintf("T%d", cs.Tooth))
 	if ph >= 0 {
-		b.phaseMark(c, Point{b.colX(3) + 4, y + ckCoilH/2}, 2.3, ph)
+		b.phaseMark(c, Point{b.colX(3) + 4, mid}, 2.3, ph)
 	} else {
 		c.text(b.colX(3)+1, base, sizeBody, Bold, Ink, left, cs.Phase)
 	}
 	c.text(b.colX(4)+1, base, sizeBody, Regular, Ink, left, fmt.Sprintf("%d·%d", cs.Path, cs.Position))
+	// the sense as large as the row allows, with its word
 	cw := cs.Direction != winding.CCW.String()
-	c.senseArrow(b.colX(5)+3.5, y+ckCoilH/2, 1.8, cw, Ink, 0.32)
+	c.senseArrow(b.colX(5)+3.6, mid, 2.6, cw, Ink, 0.45)
 	word := "cw"
 	if !cw {
 		word = "ccw"
 	}
-	c.text(b.colX(5)+7.6, base, sizeBody, Bold, Ink, left, word)
+	c.text(b.colX(5)+9.6, base+0.3, sizeBody+1.5, Bold, Ink, left, word)
 	c.text(b.colX(6)+1, base, sizeBody+1, Bold, Ink, left, fmt.Sprint(cs.Turns))
-	// one line sits on the row's baseline, two or more start above it
-	fy := base
-	if len(ft) > 1 {
-		fy = y + 1.2 + 0.75*ckSmall*ptMM
+	// the instruction in the guide's words, then from / to under it
+	fy := y + ckWindBase
+	if sw := slotWords(cs); sw != "" {
+		c.text(b.colX(7)+1, fy, sizeBody, Bold, Ink, left, fit(sw, b.colX(8)-b.colX(7)-2, sizeBody, Bold))
+		fy += lineStep(sizeBody) * 0.95
 	}
 	for _, l := range ft {
 		c.text(b.colX(7)+1, fy, ckSmall, Regular, Ink, left, l)
 		fy += lineStep(ckSmall)
 	}
-	b.tickBoxes(f, y, ckCoilH, cs, sp)
+	b.tickBoxes(f, y, h, cs, sp)
 }
 
 // tickBoxes draws the boxes at the right of a row: two for a coil (cs not
@@ -215,6 +235,11 @@ func (b *builder) stepText(st plan.Step) (title, detail string) {
 	detail = st.Detail
 	if st.Kind == plan.StepSeparator && st.Slot > 0 && detail == "" {
 		detail = fmt.Sprintf("slot %d", st.Slot)
+	}
+	if j := st.Jumper; j != nil && j.LeavesSlot > 0 && !strings.Contains(detail, j.Words()) {
+		// the row names the slots the jumper leaves and enters, in the
+		// guide's words
+		detail = strings.TrimSpace(sentence(j.Words()) + ". " + detail)
 	}
 	for _, r := range st.Reminders {
 		if detail != "" {
@@ -315,7 +340,7 @@ func (b *builder) checkRow(f *flow, st plan.Step, rec *recorded) {
 		band = h + nh
 	}
 	if ft != nil {
-		b.coilRow(f, st, ft, band, sp)
+		b.coilRow(f, st, ft, h, band, sp)
 	} else {
 		b.stepRow(f, st, h, band, sp)
 	}

@@ -47,9 +47,10 @@ func fixturePlan(t testing.TB, s winding.Spec, conn winding.Connection) *plan.Pl
 			p.Coils = append(p.Coils, plan.CoilPlan{Tooth: tooth, Phase: names[c.Phase], Direction: c.Direction, Path: c.Path, Position: c.Position, Turns: turns, WireLengthM: wl, Order: order})
 			pp.WireLengthM += wl
 			before, after := winding.SlotsOf(tooth, s.Slots)
+			down, up := plan.CoilSlots(plan.InnerRotor, c.Direction, tooth, s.Slots)
 			add(plan.Step{Kind: plan.StepCoil, Title: fmt.Sprintf("Wind tooth %d", tooth), Coil: &plan.CoilStep{
 				Order: order, Of: len(l.Coils), Tooth: tooth, Phase: names[c.Phase], Path: c.Path, Position: c.Position,
-				Direction: c.Direction.String(), Turns: turns, WireLengthM: wl, SlotBefore: before, SlotAfter: after}})
+				Direction: c.Direction.String(), Turns: turns, WireLengthM: wl, SlotBefore: before, SlotAfter: after, DownSlot: down, UpSlot: up}})
 			if i < len(ch.Jumpers) {
 				j := ch.Jumpers[i]
 				pp.WireLengthM += float64(j.Span) * 0.012

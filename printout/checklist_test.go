@@ -1,0 +1,70 @@
+package printout
+
+import (
+	"fmt"
+	"strings"
+	"testing"
+
+	"coilwright/printout/pdftext"
+	"coilwright/winding"
+	"coilwright/winding/plan"
+)
+
+// Every coil row of the demo's checklist carries the guide's instruction,
+// "down slot D, up slot U", with the slots worked out here from the
+// convention (lead end up, facing the tooth from the air gap, a clockwise
+// coil goes down the right-hand slot: slot k for an outer rotor, k-1 for an
+// inner one), and every jumper row names the slots it leaves and enters.
+func TestChecklistCoilRowsSayDownAndUp(t *testing.T) {
+	p := demoPlan(t)
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pages, err := pdftext.Pages(render(t, pk))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var runs []string
+	for k, pg := range pk.Pages {
+		if pg.Kind == ChecklistPage {
+			runs = append(runs, pages[k]...)
+		}
+	}
+	all := strings.Join(runs, "\n")
+	q := p.Layout.Spec.Slots
+	slot := func(k int) int { return (k-1+q)%q + 1 }
+	coils, jumpers := 0, 0
+	for _, st := range p.Steps {
+		if c := st.Coil; c != nil {
+			coils++
+			right, left := slot(c.Tooth-1), slot(c.Tooth) // inner rotor
+			if p.Rotor == plan.OuterRotor {
+				right, left = left, right
+			}
+			down, up := right, left
+			if c.Direction == winding.CCW.String() {
+				down, up = left, right
+			}
+			want := fmt.Sprintf("down slot %d, up slot %d", down, up)
+			// the row: its "N of M", then the instruction on its own line
+			row := fmt.Sprintf("%d of %d\n", c.Order, c.Of)
+			i := strings.Index(all, row)
+			if i < 0 || !strings.Contains(all[i:min(len(all), i+200)], "\n"+want+"\n") {
+				t.Errorf("checklist row of coil %d (tooth %d, %s) lacks %q", c.Order, c.Tooth, c.Direction, want)
+			}
+		}
+		if j := st.Jumper; j != nil {
+			jumpers++
+			if !strings.Contains(strings.ReplaceAll(all, "\n", " "), fmt.Sprintf("leaves slot %d at the lead end, enters slot %d", j.LeavesSlot, j.EntersSlot)) {
+				t.Errorf("checklist jumper row %d lacks the slots %d and %d", st.Index, j.LeavesSlot, j.EntersSlot)
+			}
+		}
+	}
+	if coils != len(p.Layout.Coils) || jumpers == 0 {
+		t.Errorf("demo plan has %d coil steps and %d jumpers; want %d coils and some jumpers", coils, jumpers, len(p.Layout.Coils))
+	}
+	if n := strings.Count(all, "\ncw\n") + strings.Count(all, "\nccw\n"); n != coils {
+		t.Errorf("checklist prints %d sense words; want one per coil, %d", n, coils)
+	}
+}
