@@ -129,7 +129,7 @@ func slotWords(cs *plan.CoilStep) string {
 // Coil row text positions, mm from the top of the row.
 const (
 	ckWindBase = 1.3 + 0.75*sizeBody*ptMM // first baseline of the wind cell
-	ckCoilPad  = 1.3                       // below the last line
+	ckCoilPad  = 1.3                      // below the last line
 )
 
 // coilRowHeight is the height of a coil row whose wind cell holds the
