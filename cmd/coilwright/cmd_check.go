@@ -53,12 +53,13 @@ type checkFlags struct {
 	hvPass, hvFail           bool
 	hvVolts                  readingFlag
 	emfUV, emfVW, emfWU, rpm readingFlag
+	polarity                 []string
 }
 
 func newCheckCmd() *cobra.Command {
 	f := &checkFlags{uv: readingFlag{allowOL: true}, vw: readingFlag{allowOL: true}, wu: readingFlag{allowOL: true}}
 	cmd := &cobra.Command{
-		Use:   "check JOB | --demo  --uv R --vw R --wu R --temp T [more readings]",
+		Use:   "check JOB | --demo  --uv R --vw R --wu R --temp T [more readings] | --polarity PHASE=TOOTHPOLE,...",
 		Short: "Prove a finished stator: resistance, balance, insulation, withstand and back-EMF against the plan",
 		Long: `check compares what you measured on the finished stator with what its plan
 expects, and says pass, warn or fail, with findings that name the phase and the
@@ -76,6 +77,11 @@ Insulation (IEEE 43-2013): --ir1 and --ir10 in MΩ after 1 and 10 minutes at
 --ir-volts V DC. Withstand (IEC 60034-1): --hv-pass or --hv-fail with --hv-volts.
 Back-EMF: --emf-uv --emf-vw --emf-wu in V rms at --rpm.
 
+Polarity: with DC into a phase at its start terminal, the pole a compass
+shows at each wound tooth face, --polarity U=1S,2N,7N,8S (repeat it for each
+phase); a reversed coil is named by its tooth. It can be checked on its own,
+with no resistance readings.
+
 The same readings can be given in a TOML file (--readings FILE); flags
 override it. --record appends the readings and the verdict to the job's
 progress record, where the bench guide and the printed test record show them.
@@ -86,6 +92,7 @@ the output), and 2 for readings that cannot be judged.
 High-voltage and insulation tests can kill: only trained people, following
 local codes and licensed practice.`,
 		Example: "  coilwright check --demo --uv 0.2861 --vw 0.2858 --wu 0.2866 --temp 22.5 --four-wire\n" +
+			"  coilwright check --demo --polarity U=1S,2N,7N,8S,13S,14N,19N,20S\n" +
 			"  coilwright check stator.toml --readings bench.toml --record --json",
 		Args: maxArgs(1),
 		RunE: func(cmd *cobra.Command, args []string) error { return runCheck(cmd, args, f) },
@@ -110,6 +117,7 @@ local codes and licensed practice.`,
 	fl.Var(&f.emfVW, "emf-vw", "back-EMF between lines V and W, V rms")
 	fl.Var(&f.emfWU, "emf-wu", "back-EMF between lines W and U, V rms")
 	fl.Var(&f.rpm, "rpm", "rotor speed during the back-EMF reading, rpm")
+	fl.StringArrayVar(&f.polarity, "polarity", nil, "poles seen with DC into the phase at X1: PHASE=TOOTHPOLE,... e.g. U=1S,2N,7N,8S (repeat per phase)")
 	fl.StringVar(&f.readingsFile, "readings", "", "read the measurements from this TOML file (flags override it)")
 	fl.BoolVar(&f.record, "record", false, "append the readings and the verdict to the job's progress record")
 	fl.StringVar(&f.progress, "progress", "", "the progress record to append to with --record (default: beside the job, JOB.progress)")
@@ -127,7 +135,10 @@ func runCheck(cmd *cobra.Command, args []string, f *checkFlags) error {
 	}
 	rep, err := verify.Check(p, r)
 	var ie *verify.InputError
+	var pe *verify.PolarityError
 	switch {
+	case errors.As(err, &pe):
+		return badInputf("--polarity %s: %s", pe.Token, pe.Reason)
 	case errors.As(err, &ie):
 		return badInputf("--%s %s: %s", flagOf(ie.Field), fmtReading(ie.Value), ie.Reason)
 	case errors.Is(err, verify.ErrUnsupported):
@@ -227,6 +238,36 @@ func (f *checkFlags) readings(cmd *cobra.Command) (verify.Readings, error) {
 			r.PerPhase[i] = rf.v
 		}
 	}
+	if ch("polarity") {
+		var given []verify.PoleReading
+		phases := map[string]bool{}
+		for _, s := range f.polarity {
+			obs, err := verify.ParsePolarity(s)
+			if err != nil {
+				var pe *verify.PolarityError
+				if errors.As(err, &pe) {
+					return r, badInputf("--polarity %s: %s", pe.Token, pe.Reason)
+				}
+				return r, badInput(err)
+			}
+			for _, o := range obs {
+				phases[o.Phase] = true
+			}
+			given = append(given, obs...)
+		}
+		// A phase given by flag replaces that phase from the file.
+		kept := given
+		for _, o := range r.Polarity {
+			if !phases[o.Phase] {
+				kept = append(kept, o)
+			}
+		}
+		r.Polarity = kept
+	}
+	if len(r.Polarity) > 0 && !r.HasResistance() && r.Insulation == nil && r.Withstand == nil && r.EMF == nil &&
+		!anyChanged(ch, "uv", "vw", "wu", "per-phase", "temp", "ir1", "ir10", "ir-volts", "hv-pass", "hv-fail", "hv-volts", "emf-uv", "emf-vw", "emf-wu", "rpm") {
+		return r, nil // a polarity test on its own needs no resistance or temperature
+	}
 	if len(r.PerPhase) == 0 {
 		for _, x := range []struct {
 			name string
@@ -293,6 +334,15 @@ func (f *checkFlags) readings(cmd *cobra.Command) (verify.Readings, error) {
 	return r, nil
 }
 
+func anyChanged(ch func(string) bool, names ...string) bool {
+	for _, n := range names {
+		if ch(n) {
+			return true
+		}
+	}
+	return false
+}
+
 // recordCheck appends the readings and the verdict to the progress record:
 // one event for the whole check, then one per plan test it judged, on that
 // test's step, so the bench guide and the printed test record show them.
@@ -320,7 +370,9 @@ func recordCheck(path string, p *plan.Plan, r verify.Readings, rep *verify.Repor
 		put("vw", r.VW)
 		put("wu", r.WU)
 	}
-	put("temp", r.TempC)
+	if r.HasResistance() || r.Insulation != nil {
+		put("temp", r.TempC)
+	}
 	if r.LeadOhm > 0 {
 		put("lead_ohm", r.LeadOhm)
 	}
@@ -343,6 +395,9 @@ func recordCheck(path string, p *plan.Plan, r verify.Readings, rep *verify.Repor
 		put("emf_vw", e.VW)
 		put("emf_wu", e.WU)
 		put("rpm", e.RPM)
+	}
+	for _, o := range r.Polarity {
+		put(plan.PoleKey(o.Tooth), o.Pole.Value())
 	}
 	if len(open) > 0 {
 		ev.Note = "open (OL): " + strings.Join(open, ", ")

@@ -38,6 +38,34 @@ func (p Pole) Opposite() Pole {
 	return North
 }
 
+// Value is the pole as a reading is stored in the progress record: +1 for
+// north, -1 for south (0 stands for "unsure", no pole read).
+func (p Pole) Value() float64 {
+	switch p {
+	case North:
+		return 1
+	case South:
+		return -1
+	}
+	return 0
+}
+
+// PoleFromValue is the pole a stored reading stands for; false for 0
+// (unsure) or any other value.
+func PoleFromValue(v float64) (Pole, bool) {
+	switch v {
+	case 1:
+		return North, true
+	case -1:
+		return South, true
+	}
+	return "", false
+}
+
+// PoleKey is the key of the pole read at a tooth, in the progress record and
+// the polarity test's readings: "tooth_7".
+func PoleKey(tooth int) string { return "tooth_" + itoa(tooth) }
+
 // ToothPole is the pole one wound tooth shows with DC into its phase at X1
 // (every parallel path of the phase fed at once).
 type ToothPole struct {
@@ -111,9 +139,9 @@ func PolarityCurrent(p *Plan) (amps, watts, volts float64) {
 	return amps, amps * amps * r, amps * r
 }
 
-// cautionPolarity goes with every polarity step and the polarity test
-// (common practice).
-const cautionPolarity = "Use a current-limited DC supply (or a battery with a series resistor), set the limit before connecting. " +
+// PolarityCaution goes with every polarity step, the polarity test and a
+// check of polarity readings (common practice).
+const PolarityCaution = "Use a current-limited DC supply (or a battery with a series resistor), set the limit before connecting. " +
 	"Switch the supply off before breaking the circuit: the winding's inductance kicks back a high voltage when the current is interrupted, " +
 	"which can bite and can damage a meter connected across it. Steel tools near the energised teeth get magnetised; keep the compass " +
 	"away from steel and check it points north before each phase (a strong field can reverse a small compass)."
@@ -143,7 +171,7 @@ func (b *builder) polarityStep(phase int) {
 		detail = "Before the next phase is wound over its slots, while a coil is still easy to reach: scrape the enamel off the ends of the leads for the clips. " + detail
 	}
 	b.add(Step{Kind: StepTest, Test: TestPolarity, Title: title, Phases: names,
-		Detail: detail + what.String(), Reminders: []string{cautionPolarity}})
+		Detail: detail + what.String(), Reminders: []string{PolarityCaution}})
 }
 
 // jointWord names the joints that close the winding: the star point or the
@@ -207,7 +235,7 @@ func (b *builder) polarityTest() Test {
 		Note: fmt.Sprintf("%g A is a fifth of the rated phase current (at most %g A); it needs about %s across the phase and makes %s of heat in it (I²R at %s), "+
 			"so the winding stays cool; a reversed coil shows the opposite pole of the plan, swapped start and finish leads reverse every tooth of the phase (or of the path)",
 			amps, PolarityCurrentMaxA, formatVolts(volts), formatWatts(watts), formatOhm(p.PhaseResistanceAmbient)),
-		Caution: cautionPolarity}
+		Caution: PolarityCaution}
 }
 
 func formatVolts(v float64) string {

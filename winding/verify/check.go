@@ -35,7 +35,12 @@ func Check(p *plan.Plan, r Readings) (*Report, error) {
 	if p == nil || p.Layout == nil {
 		return nil, fmt.Errorf("%w: no plan or no layout", ErrUnsupported)
 	}
-	if n := len(p.Layout.PhaseNames); n != 3 {
+	if len(r.Polarity) > 0 {
+		if err := ValidatePolarity(p, r.Polarity); err != nil {
+			return nil, err
+		}
+	}
+	if n := len(p.Layout.PhaseNames); n != 3 && !r.onlyPolarity() {
 		return nil, fmt.Errorf("%w: %d phases; the check handles three-phase windings", ErrUnsupported, n)
 	}
 	c := &checker{p: p, r: r, rep: &Report{
@@ -58,6 +63,9 @@ func Check(p *plan.Plan, r Readings) (*Report, error) {
 	}
 	if r.EMF != nil {
 		c.backEMF()
+	}
+	if len(r.Polarity) > 0 {
+		c.polarity()
 	}
 	c.cautions()
 	return c.rep, nil

@@ -12,6 +12,12 @@
 // W2–U1 corners, winding.Joints). A resistance of +Inf is an open circuit (the
 // meter reads over range).
 //
+// Polarity: the pole a compass shows at each wound tooth face with DC into
+// its phase at X1 is compared with the plan's (plan.Poles, right-hand rule);
+// a tooth showing the other pole names its coil, and the pattern of reversed
+// teeth says whether it fits one coil, a jumper taken to the wrong tooth or
+// swapped leads.
+//
 // Sources. Copper temperature correction: IEC 60028 (α20 = 0.00393/K,
 // R_T = R_20·(234.5 + T)/254.5). The band about the plan's value: the IEC 60317
 // diameter tolerance (R ∝ 1/d²) and a stated length-estimate uncertainty.

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
+	"sort"
 
 	"github.com/pelletier/go-toml/v2"
 )
@@ -29,7 +30,9 @@ type readingsFile struct {
 		Passed *bool   `toml:"passed"`
 		Volts  float64 `toml:"volts"`
 	} `toml:"withstand"`
-	EMF *struct {
+	// Polarity: the pole seen at each tooth, per phase: U = "1S 2N 7N 8S".
+	Polarity map[string]string `toml:"polarity"`
+	EMF      *struct {
 		UV  float64 `toml:"uv"`
 		VW  float64 `toml:"vw"`
 		WU  float64 `toml:"wu"`
@@ -50,7 +53,8 @@ func (e *FileError) Error() string {
 	return "verify: measurements file: " + e.Reason
 }
 
-// ParseReadings reads a measurements file. Unknown keys are refused (a
+// ParseReadings reads a measurements file. Polarity observations go in a
+// [polarity] table, one key per phase: U = "1S 2N 7N 8S". Unknown keys are refused (a
 // misspelt key must not pass unnoticed). The second result says whether the
 // file gave the temperature. Readings are not validated here: call
 // Readings.Validate (Check does).
@@ -84,6 +88,18 @@ func ParseReadings(data []byte) (Readings, bool, error) {
 	}
 	if e := f.EMF; e != nil {
 		r.EMF = &BackEMF{UV: e.UV, VW: e.VW, WU: e.WU, RPM: e.RPM}
+	}
+	phases := make([]string, 0, len(f.Polarity))
+	for ph := range f.Polarity {
+		phases = append(phases, ph)
+	}
+	sort.Strings(phases)
+	for _, ph := range phases {
+		obs, err := ParsePhasePoles(ph, f.Polarity[ph])
+		if err != nil {
+			return Readings{}, false, err
+		}
+		r.Polarity = append(r.Polarity, obs...)
 	}
 	return r, f.Temp != nil, nil
 }

@@ -27,6 +27,10 @@ type Readings struct {
 	Insulation *Insulation // insulation resistance to core
 	Withstand  *Withstand  // high-voltage (withstand) test
 	EMF        *BackEMF    // back-EMF, line to line, at a measured speed
+
+	// Polarity holds the pole seen at each tooth read with DC into its
+	// phase at X1 (ValidatePolarity checks them against the plan).
+	Polarity []PoleReading
 }
 
 // Insulation is an insulation-resistance test of the winding to the core.
@@ -104,11 +108,19 @@ func (r Readings) HasResistance() bool {
 	return len(r.PerPhase) > 0 || r.UV != 0 || r.VW != 0 || r.WU != 0
 }
 
+// onlyPolarity reports whether the readings are polarity observations alone.
+func (r Readings) onlyPolarity() bool {
+	return len(r.Polarity) > 0 && !r.HasResistance() && r.Insulation == nil && r.Withstand == nil && r.EMF == nil
+}
+
 // Validate refuses readings that are not numbers, negative, zero where a
 // winding cannot read zero, absurd, or one of three missing.
 func (r Readings) Validate() error {
-	if !r.HasResistance() && r.Insulation == nil && r.Withstand == nil && r.EMF == nil {
-		return bad("uv", 0, "no readings given; give the three line-to-line resistances (or per-phase), insulation, withstand or back-EMF readings")
+	if !r.HasResistance() && r.Insulation == nil && r.Withstand == nil && r.EMF == nil && len(r.Polarity) == 0 {
+		return bad("uv", 0, "no readings given; give the three line-to-line resistances (or per-phase), insulation, withstand, back-EMF or polarity readings")
+	}
+	if r.onlyPolarity() {
+		return nil // no temperature is read for a polarity test
 	}
 	if err := tempOK(r.TempC); err != nil {
 		return err

@@ -35,7 +35,9 @@ type Finding struct {
 	Phase    string  `json:"phase"` // "" when it concerns no single phase
 	Test     string  `json:"test"`  // "resistance", "balance", "insulation", "withstand", "back-emf"
 	Message  string  `json:"message"`
-	// Teeth lists candidate coils (by tooth) where the finding points at some.
+	// Tooth names the one coil (by its tooth) a finding points at; Teeth
+	// lists them where it points at more than one, or at candidates.
+	Tooth int   `json:"tooth,omitempty"`
 	Teeth []int `json:"teeth,omitempty"`
 }
 
@@ -60,6 +62,7 @@ type Report struct {
 	Insulation *InsulationResult `json:"insulation,omitempty"`
 	Withstand  *WithstandResult  `json:"withstand,omitempty"`
 	EMF        *EMFResult        `json:"back_emf,omitempty"`
+	Polarity   *PolarityResult   `json:"polarity,omitempty"`
 
 	Verdict  Verdict   `json:"verdict"`
 	Findings []Finding `json:"findings"`

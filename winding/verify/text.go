@@ -81,6 +81,9 @@ func (r *Report) Text() string {
 		}
 		b.WriteString("\n")
 	}
+	if pr := r.Polarity; pr != nil {
+		b.WriteString(pr.text())
+	}
 	b.WriteString("\nFindings\n")
 	for _, f := range r.Findings {
 		head := strings.ToUpper(string(f.Severity))
