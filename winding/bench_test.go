@@ -1,6 +1,9 @@
 package winding
 
-import "testing"
+import (
+	"fmt"
+	"testing"
+)
 
 // Target (issue): layout and full analysis of a 60-slot / 56-pole pair under
 // 50 µs.
@@ -30,5 +33,28 @@ func BenchmarkPairs120(b *testing.B) {
 		if _, err := Pairs(sw); err != nil {
 			b.Fatal(err)
 		}
+	}
+}
+
+// Target (issue): the sweep at the arithmetic floor with no allocation per
+// pair. The rows go into one slice reused from run to run, as a caller that
+// sweeps again would pass it back; what is left per run is the workers'
+// buffers and job list, not a count per pair.
+func BenchmarkRankPairs(b *testing.B) {
+	for _, n := range []int{120, 480, 720} {
+		b.Run(fmt.Sprintf("N=%d", n), func(b *testing.B) {
+			sw := Sweep{MaxSlots: n, MaxPoles: n, Layers: []int{1, 2}}
+			rows, err := RankPairs(sw, nil)
+			if err != nil {
+				b.Fatal(err)
+			}
+			b.ReportAllocs()
+			for b.Loop() {
+				if rows, err = RankPairs(sw, rows[:0]); err != nil {
+					b.Fatal(err)
+				}
+			}
+			b.ReportMetric(float64(len(rows)), "pairs")
+		})
 	}
 }

@@ -13,34 +13,54 @@ var scratchInts = sync.Pool{New: func() any { return new([]int) }}
 // differs: their higher harmonics would differ and drive circulating current.
 func feasiblePaths(l *Layout) []int {
 	m := l.Spec.Phases
-	n := l.CoilsPerPhase
 	q2 := 2 * l.Spec.Slots
 	// coils by phase*2Q + signed angle; a scratch slice from a pool, as
-	// sweeps call this thousands of times
+	// sweeps call this thousands of times. The slice is all zero between
+	// calls: the gcd pass clears what the count touched.
 	buf := scratchInts.Get().(*[]int)
 	defer scratchInts.Put(buf)
-	if cap(*buf) < m*q2 {
+	if len(*buf) < m*q2 {
 		*buf = make([]int, m*q2)
 	}
-	counts := (*buf)[:m*q2]
-	clear(counts)
+	counts := *buf
 	for _, c := range l.Coils {
 		counts[c.Phase*q2+c.angle]++
 	}
-	// a is feasible when it divides every count: the divisors of their gcd.
+	// a is feasible when it divides every count: the divisors of their gcd
+	// that divide the coils per phase.
 	g := 0
-	for _, k := range counts {
-		if k != 0 && g != 1 {
-			g = gcd(g, k)
-		}
+	for _, c := range l.Coils {
+		k := c.Phase*q2 + c.angle
+		g = gcdStep(g, counts[k])
+		counts[k] = 0
 	}
-	var out []int
+	return appendPathCounts(nil, g, l.CoilsPerPhase)
+}
+
+// gcdStep folds one more count into a running gcd g (0 before the first);
+// a count of 0 (already taken) leaves g as it is. It divides only when the
+// count differs from g and g is not already 1.
+func gcdStep(g, c int) int {
+	if c == 0 || c == g || g == 1 {
+		return g
+	}
+	return gcd(g, c)
+}
+
+// appendPathCounts appends the feasible numbers of parallel paths, in
+// ascending order, for coil counts whose gcd is g and n coils per phase: the
+// divisors of gcd(g, n). None when g is 0 (no coils).
+func appendPathCounts(dst []int, g, n int) []int {
+	if g == 0 {
+		return dst
+	}
+	g = gcd(g, n)
 	for a := 1; a <= g; a++ {
-		if g%a == 0 && n%a == 0 {
-			out = append(out, a)
+		if g%a == 0 {
+			dst = append(dst, a)
 		}
 	}
-	return out
+	return dst
 }
 
 // assignPaths gives each coil its path and its position along the path.

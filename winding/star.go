@@ -50,23 +50,30 @@ func fundamentalAngle(i, sg int, s Spec) int {
 func (st *star) assign() bool {
 	s := st.s
 	m, q := s.Phases, s.Slots
-	w := 4 * m * q
 	pp := s.PolePairs() % q
 	for i := range st.phase {
 		st.phase[i], st.sign[i] = -1, 0
 	}
 	for i := 0; i < q; i += st.step {
-		a := (-pp * i * 4 * m) % w
+		a := (-pp * i) % q
 		if a < 0 {
-			a += w
+			a += q
 		}
-		j := ((a + q) / (2 * q)) % (2 * m)
-		neg := j % 2
-		ph := ((neg*m-j)/2%m + m) % m
+		ph, neg := nearestAxis(a, q, m)
 		st.phase[i] = ph
 		st.sign[i] = 1 - 2*neg
 	}
 	return st.balanced()
+}
+
+// nearestAxis gives the phase and sense of the coil whose phasor lies at
+// k*4m steps of the circle of W = 4mQ steps (k = 0..Q-1): neg is 1 when the
+// nearest axis is the phase's negative one (the coil is wound CCW).
+func nearestAxis(k, q, m int) (phase, neg int) {
+	a := k * 4 * m
+	j := ((a + q) / (2 * q)) % (2 * m)
+	neg = j % 2
+	return ((neg*m-j)/2%m + m) % m, neg
 }
 
 // balanced sums the coil phasors of each phase at the working harmonic and
@@ -98,20 +105,40 @@ func (st *star) balanced() bool {
 		st.sumsIm[ph] += st.trig.sin[a]
 		st.counts[ph]++
 	}
-	n := st.counts[0]
+	return balancedSums(st.sumsRe, st.sumsIm, st.counts, phaseTurns(m))
+}
+
+// turns holds exp(-j*k*2*pi/m) for k = 0..m-1: the turn from phase U's
+// phasor sum to phase k's in a balanced winding.
+type turns [MaxPhases][2]float64
+
+// phaseTurns computes the turns of m phases.
+func phaseTurns(m int) *turns {
+	var t turns
+	for k := 0; k < m; k++ {
+		t[k][0], t[k][1] = math.Cos(-2*math.Pi*float64(k)/float64(m)), math.Sin(-2*math.Pi*float64(k)/float64(m))
+	}
+	return &t
+}
+
+// balancedSums decides balance from the phasor sums of the m phases (re, im)
+// and their coil counts: the sums have one magnitude and are 360/m apart in
+// sequence, each phase has as many coils, and the sums do not cancel.
+func balancedSums(re, im []float64, counts []int, t *turns) bool {
+	n := counts[0]
 	tol := 1e-9 * float64(n+1)
-	if math.Hypot(st.sumsRe[0], st.sumsIm[0]) < 1e-6 {
+	if math.Hypot(re[0], im[0]) < 1e-6 {
 		return false
 	}
-	for k := 1; k < m; k++ {
-		if st.counts[k] != n {
+	for k := 1; k < len(counts); k++ {
+		if counts[k] != n {
 			return false
 		}
 		// Expected: S_k = S_0 * exp(-j*k*2*pi/m).
-		c, sn := math.Cos(-2*math.Pi*float64(k)/float64(m)), math.Sin(-2*math.Pi*float64(k)/float64(m))
-		er := st.sumsRe[0]*c - st.sumsIm[0]*sn
-		ei := st.sumsRe[0]*sn + st.sumsIm[0]*c
-		if math.Abs(er-st.sumsRe[k]) > tol || math.Abs(ei-st.sumsIm[k]) > tol {
+		c, sn := t[k][0], t[k][1]
+		er := re[0]*c - im[0]*sn
+		ei := re[0]*sn + im[0]*c
+		if math.Abs(er-re[k]) > tol || math.Abs(ei-im[k]) > tol {
 			return false
 		}
 	}

@@ -9,7 +9,11 @@ type trigTable struct{ cos, sin []float64 }
 // sin(pi-x) = sin x, cos(pi-x) = -cos x and sin(pi+x) = -sin x,
 // cos(pi+x) = -cos x, so mirrored angles give mirrored values.
 func newTrigTable(q int) trigTable {
-	t := trigTable{cos: make([]float64, 2*q), sin: make([]float64, 2*q)}
+	return trigTable{cos: make([]float64, 2*q), sin: make([]float64, 2*q)}.fill(q)
+}
+
+// fill computes the table of q in t's storage (len 2q).
+func (t trigTable) fill(q int) trigTable {
 	for k := 0; 2*k <= q; k++ {
 		sn, cs := math.Sincos(math.Pi * float64(k) / float64(q))
 		t.sin[k], t.cos[k] = sn, cs
