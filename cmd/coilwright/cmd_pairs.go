@@ -1,6 +1,9 @@
 package main
 
 import (
+	"bufio"
+	"bytes"
+	"encoding/json"
 	"fmt"
 	"io"
 	"strconv"
@@ -45,22 +48,29 @@ fewer slots, fewer poles, two layers before one.`,
 			if sw.MinWindingFactor < 0 || sw.MinWindingFactor > 1 {
 				return badInputf("--min-winding-factor %g: a winding factor lies between 0 and 1", sw.MinWindingFactor)
 			}
+			if sw.Phases == 0 {
+				return badInputf("--phases 0: a winding needs at least 3 phases, e.g. --phases 3")
+			}
 			if top < 0 {
 				return badInputf("--top %d: must be 0 (all) or a positive count", top)
 			}
-			ps, err := winding.Pairs(sw)
+			rows, err := winding.RankPairs(sw, nil)
 			if err != nil {
 				return badInput(err)
 			}
-			if top > 0 && len(ps) > top {
-				ps = ps[:top]
+			if top > 0 && len(rows) > top {
+				rows = rows[:top]
 			}
+			w := bufio.NewWriterSize(cmd.OutOrStdout(), 64<<10)
 			if asJSON {
-				_, err := cmd.OutOrStdout().Write(appendPairsJSON(nil, pairsJSON(ps)))
+				err = writePairsJSON(w, rows)
+			} else {
+				err = writePairsText(w, rows)
+			}
+			if err != nil {
 				return err
 			}
-			writePairsText(cmd.OutOrStdout(), ps)
-			return nil
+			return w.Flush()
 		},
 	}
 	f := c.Flags()
@@ -113,109 +123,69 @@ type pairJSON struct {
 	ParallelPaths       []int   `json:"parallel_paths"`
 }
 
-func pairsJSON(ps []winding.Summary) []pairJSON {
-	out := make([]pairJSON, len(ps))
-	for i, p := range ps {
-		out[i] = pairJSON{p.Spec.Slots, p.Spec.Poles, p.Spec.Layers, p.Spec.Phases, p.Q.String(),
-			p.WindingFactor, p.Periodicity, p.LCM, p.CoggingFactor, p.RadialForceBalanced, p.ParallelPaths}
-	}
-	return out
+// pairJSONOf fills p with the figures of one row; paths is reused from row
+// to row.
+func pairJSONOf(p *pairJSON, r winding.PairRow, paths []int) []int {
+	sm := r.Summary(paths)
+	*p = pairJSON{sm.Spec.Slots, sm.Spec.Poles, sm.Spec.Layers, sm.Spec.Phases, sm.Q.String(),
+		sm.WindingFactor, sm.Periodicity, sm.LCM, sm.CoggingFactor, sm.RadialForceBalanced, sm.ParallelPaths}
+	return sm.ParallelPaths
 }
 
-// appendPairsJSON writes the pairs exactly as encoding/json with a two-space
-// indent would (a test holds it to that), several times faster: a full sweep
-// lists thousands of pairs and the encoding was half the command's time.
-func appendPairsJSON(b []byte, ps []pairJSON) []byte {
-	if len(ps) == 0 {
-		return append(b, "[]\n"...)
+// writePairsJSON writes the rows as one JSON array, the bytes writeJSON
+// gives for the whole slice of pairJSON, but one row at a time: each row
+// goes through encoding/json on its own into a reused buffer, so a sweep of
+// hundreds of thousands of pairs never holds its whole text.
+func writePairsJSON(w io.Writer, rows []winding.PairRow) error {
+	if len(rows) == 0 {
+		_, err := io.WriteString(w, "[]\n")
+		return err
 	}
-	b = append(b, "[\n"...)
-	for i, p := range ps {
-		b = append(b, "  {\n"...)
-		b = appendIntField(b, "slots", p.Slots)
-		b = appendIntField(b, "poles", p.Poles)
-		b = appendIntField(b, "layers", p.Layers)
-		b = appendIntField(b, "phases", p.Phases)
-		b = append(b, `    "q": `...)
-		b = strconv.AppendQuote(b, p.Q)
-		b = append(b, ",\n"...)
-		b = append(b, `    "winding_factor": `...)
-		b = appendJSONFloat(b, p.WindingFactor)
-		b = append(b, ",\n"...)
-		b = appendIntField(b, "periodicity", p.Periodicity)
-		b = appendIntField(b, "lcm", p.LCM)
-		b = appendIntField(b, "cogging_factor", p.CoggingFactor)
-		b = append(b, `    "radial_force_balanced": `...)
-		b = strconv.AppendBool(b, p.RadialForceBalanced)
-		b = append(b, ",\n"...)
-		b = append(b, `    "parallel_paths": `...)
-		switch {
-		case p.ParallelPaths == nil:
-			b = append(b, "null"...)
-		case len(p.ParallelPaths) == 0:
-			b = append(b, "[]"...)
-		default:
-			b = append(b, "[\n"...)
-			for k, a := range p.ParallelPaths {
-				b = append(b, "      "...)
-				b = strconv.AppendInt(b, int64(a), 10)
-				if k < len(p.ParallelPaths)-1 {
-					b = append(b, ',')
-				}
-				b = append(b, '\n')
-			}
-			b = append(b, "    ]"...)
+	var one bytes.Buffer
+	enc := json.NewEncoder(&one)
+	enc.SetIndent("  ", "  ")
+	var p pairJSON
+	var paths []int
+	if _, err := io.WriteString(w, "[\n"); err != nil {
+		return err
+	}
+	for i, r := range rows {
+		paths = pairJSONOf(&p, r, paths)
+		one.Reset()
+		one.WriteString("  ")
+		if err := enc.Encode(&p); err != nil {
+			return err
 		}
-		b = append(b, "\n  }"...)
-		if i < len(ps)-1 {
+		b := one.Bytes()
+		b = b[:len(b)-1] // Encode ends the value with a newline
+		if i < len(rows)-1 {
 			b = append(b, ',')
 		}
 		b = append(b, '\n')
-	}
-	return append(b, "]\n"...)
-}
-
-func appendIntField(b []byte, name string, v int) []byte {
-	b = append(b, `    "`...)
-	b = append(b, name...)
-	b = append(b, `": `...)
-	b = strconv.AppendInt(b, int64(v), 10)
-	return append(b, ",\n"...)
-}
-
-// appendJSONFloat formats a float64 as encoding/json does: the shortest
-// representation, in exponent form below 1e-6 and from 1e21.
-func appendJSONFloat(b []byte, f float64) []byte {
-	abs := f
-	if abs < 0 {
-		abs = -abs
-	}
-	fmtByte := byte('f')
-	if abs != 0 && (abs < 1e-6 || abs >= 1e21) {
-		fmtByte = 'e'
-	}
-	b = strconv.AppendFloat(b, f, fmtByte, -1, 64)
-	if fmtByte == 'e' {
-		// clean up e-09 to e-9, as encoding/json does
-		n := len(b)
-		if n >= 4 && b[n-4] == 'e' && b[n-3] == '-' && b[n-2] == '0' {
-			b[n-2] = b[n-1]
-			b = b[:n-1]
+		if _, err := w.Write(b); err != nil {
+			return err
 		}
 	}
-	return b
+	_, err := io.WriteString(w, "]\n")
+	return err
 }
 
-func writePairsText(w io.Writer, ps []winding.Summary) {
-	fmt.Fprintf(w, "%d feasible pairs, best first\n", len(ps))
+func writePairsText(w io.Writer, rows []winding.PairRow) error {
+	fmt.Fprintf(w, "%d feasible pairs, best first\n", len(rows))
 	fmt.Fprintln(w, "     Q   2p  layers  q       k_w     t    LCM  cogging  radial      paths")
-	for _, p := range ps {
+	var paths []int
+	for _, r := range rows {
+		p := r.Summary(paths)
+		paths = p.ParallelPaths
 		bal := "balanced"
 		if !p.RadialForceBalanced {
 			bal = "UNBALANCED"
 		}
-		fmt.Fprintf(w, "  %4d %4d  %6d  %-6s  %.4f %4d %6d  %7d  %-10s  %s\n",
+		if _, err := fmt.Fprintf(w, "  %4d %4d  %6d  %-6s  %.4f %4d %6d  %7d  %-10s  %s\n",
 			p.Spec.Slots, p.Spec.Poles, p.Spec.Layers, p.Q, p.WindingFactor, p.Periodicity, p.LCM,
-			p.CoggingFactor, bal, winding.NumberList(p.ParallelPaths))
+			p.CoggingFactor, bal, winding.NumberList(p.ParallelPaths)); err != nil {
+			return err
+		}
 	}
+	return nil
 }

@@ -4,6 +4,8 @@ import (
 	"bytes"
 	"encoding/json"
 	"math"
+	"strconv"
+	"strings"
 	"testing"
 
 	"coilwright/winding"
@@ -96,27 +98,65 @@ func TestPairsFilters(t *testing.T) {
 	}
 }
 
-// The hand-written encoder of pairs --json must give exactly what
-// encoding/json (the reference) gives for the same values, including the
-// float forms it picks.
-func TestPairsJSONMatchesEncodingJSON(t *testing.T) {
-	ps, err := winding.Pairs(winding.Sweep{MaxSlots: 60, MaxPoles: 60, Layers: []int{1, 2}})
-	if err != nil {
+// pairs --json streams its rows one by one through encoding/json; the
+// stream must be byte for byte what encoding/json gives for the whole list
+// at once (writeJSON), empty list included.
+func TestPairsJSONStreamIsEncodingJSON(t *testing.T) {
+	for _, sw := range []winding.Sweep{
+		{MaxSlots: 60, MaxPoles: 60, Layers: []int{1, 2}},
+		{MaxSlots: 2, MaxPoles: 2},
+	} {
+		rows, err := winding.RankPairs(sw, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		whole := make([]pairJSON, len(rows))
+		for i, r := range rows {
+			pairJSONOf(&whole[i], r, nil)
+		}
+		var want, got bytes.Buffer
+		if err := writeJSON(&want, whole); err != nil {
+			t.Fatal(err)
+		}
+		if err := writePairsJSON(&got, rows); err != nil {
+			t.Fatal(err)
+		}
+		if got.String() != want.String() {
+			t.Errorf("%d rows: streamed JSON differs from encoding/json:\n%s", len(rows), firstDiff(want.String(), got.String()))
+		}
+	}
+}
+
+// A zero phase count is refused, not taken as the default (exit 2).
+func TestPairsRefusesZeroCounts(t *testing.T) {
+	for _, args := range [][]string{
+		{"--phases", "0"},
+		{"--layers", "0"},
+	} {
+		code, _, errOut := runCLI(t, append([]string{"pairs", "--max-slots", "12", "--max-poles", "10"}, args...)...)
+		if code != 2 || !strings.Contains(errOut, args[0]) || strings.Count(strings.TrimSpace(errOut), "\n") != 0 {
+			t.Errorf("pairs %v: exit %d, stderr %q; want 2 and one line naming %s", args, code, errOut, args[0])
+		}
+	}
+}
+
+// Text mode counts what JSON lists, and writes one line per pair.
+func TestPairsTextMatchesJSON(t *testing.T) {
+	args := []string{"pairs", "--max-slots", "48", "--max-poles", "56", "--top", "40"}
+	_, text, _ := runCLI(t, args...)
+	_, js, _ := runCLI(t, append(args, "--json")...)
+	var ps []pairJSON
+	if err := json.Unmarshal([]byte(js), &ps); err != nil {
 		t.Fatal(err)
 	}
-	in := pairsJSON(ps)
-	in = append(in, pairJSON{Slots: 1, WindingFactor: 1e-7, Q: "1/2"}, pairJSON{WindingFactor: 0, ParallelPaths: []int{}},
-		pairJSON{WindingFactor: 1e21}, pairJSON{WindingFactor: 0.1 + 0.2}, pairJSON{WindingFactor: 5e-324})
-	var want bytes.Buffer
-	if err := writeJSON(&want, in); err != nil {
-		t.Fatal(err)
+	lines := strings.Split(strings.TrimSuffix(text, "\n"), "\n")
+	if len(ps) != 40 || len(lines) != 2+len(ps) || !strings.HasPrefix(lines[0], "40 feasible pairs") {
+		t.Fatalf("text has %d lines (%q...) for %d pairs", len(lines), lines[0], len(ps))
 	}
-	if got := string(appendPairsJSON(nil, in)); got != want.String() {
-		t.Errorf("appendPairsJSON differs from encoding/json:\n%s", firstDiff(want.String(), got))
-	}
-	var empty bytes.Buffer
-	_ = writeJSON(&empty, []pairJSON{})
-	if got := string(appendPairsJSON(nil, nil)); got != empty.String() {
-		t.Errorf("appendPairsJSON(nil) = %q; want %q", got, empty.String())
+	for i, p := range ps {
+		f := strings.Fields(lines[2+i])
+		if f[0] != strconv.Itoa(p.Slots) || f[1] != strconv.Itoa(p.Poles) || f[3] != p.Q {
+			t.Errorf("text line %d %q; JSON has %d/%d q %s", i+1, lines[2+i], p.Slots, p.Poles, p.Q)
+		}
 	}
 }
