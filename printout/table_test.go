@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"coilwright/winding"
+	"coilwright/winding/plan"
 )
 
 // words is s with its white space collapsed, as wrapped lines join back.
@@ -129,7 +130,7 @@ func TestDemoCellsWhole(t *testing.T) {
 		}
 		rec := joined(TestRecordPage)
 		for _, ts := range p.Tests {
-			if s := expectText(ts); !strings.Contains(rec, words(s)) {
+			if s := clean(Bold, plan.LimitText(ts)); !strings.Contains(rec, words(s)) {
 				t.Errorf("%s test record lacks the whole of %q", paper.Name, s)
 			}
 		}

@@ -2,8 +2,6 @@ package printout
 
 import (
 	"fmt"
-	"sort"
-	"strconv"
 	"strings"
 	"unicode"
 	"unicode/utf8"
@@ -11,41 +9,15 @@ import (
 	"coilwright/winding/plan"
 )
 
-// expectText puts a test's acceptance in words: "≥ 5 MΩ", "≤ 1 mA",
-// "within ±2 %".
-func expectText(t plan.Test) string {
-	v := strconv.FormatFloat(t.Limit, 'g', 4, 64)
-	unit := t.Unit
-	if unit != "" {
-		unit = " " + unit
-	}
-	switch t.Compare {
-	case "min":
-		return "at least " + v + unit
-	case "max":
-		return "at most " + v + unit
-	case "band":
-		return "within ±" + v + unit
-	}
-	return v + unit
-}
-
-// readingText is how a recorded reading prints.
-func readingText(r Reading, unit string) string {
+// readingText is how a recorded reading prints: its values by the names
+// and units of the test's reading schema (plan.FormatReadings), what was
+// written, and the verdict.
+func readingText(r Reading, t plan.Test) string {
 	var parts []string
 	if len(r.Values) > 0 {
-		names := make([]string, 0, len(r.Values))
-		for n := range r.Values {
-			names = append(names, n)
-		}
-		sort.Strings(names)
-		vs := make([]string, len(names))
-		for i, n := range names {
-			vs[i] = n + " " + strconv.FormatFloat(r.Values[n], 'g', 5, 64)
-		}
-		s := strings.Join(vs, ", ")
-		if unit != "" && unit != "%" {
-			s += " " + unit
+		s := plan.FormatReadings(t.Readings, r.Values)
+		if len(t.Readings) == 0 && t.Unit != "" && t.Unit != plan.UnitPercent {
+			s += " " + string(t.Unit) // a test without a reading schema: its values are in its unit
 		}
 		parts = append(parts, s)
 	}
@@ -152,13 +124,13 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 		hText += paraHeight(left0-10, sizeSmall, Bold, t.Caution) + 1
 	}
 	rw := w - left0
-	accept := wrap(clean(Bold, expectText(t)), rw-4, sizeBody+1, Bold)
+	accept := wrap(clean(Bold, plan.LimitText(t)), rw-4, sizeBody+1, Bold)
 	// the acceptance may take more lines; the reading part moves down
 	dy := float64(max(0, len(accept)-1)) * lineStep(sizeBody+1)
 	h := max(hText, 30+dy)
 	if r, ok := b.o.Readings[t.Name]; ok {
 		// a long reading pushes the pass / fail line down
-		rh := paraHeight(rw-4, sizeBody, Mono, readingText(r, t.Unit))
+		rh := paraHeight(rw-4, sizeBody, Mono, readingText(r, t))
 		if tk := takenText(r); tk != "" {
 			rh += paraHeight(rw-4, sizeSmall, Regular, tk)
 		}
@@ -190,13 +162,13 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	c.line(rx, ry+11, rx+rw, ry+11, Pen{Width: 0.15, Colour: Faint})
 	c.text(rx+2, ry+14, sizeTiny, Regular, Colour{90, 90, 90}, left, "reading")
 	if r, ok := b.o.Readings[t.Name]; ok {
-		ty := c.para(rx+2, ry+18.5, rw-4, sizeBody, Mono, Ink, readingText(r, t.Unit))
+		ty := c.para(rx+2, ry+18.5, rw-4, sizeBody, Mono, Ink, readingText(r, t))
 		if tk := takenText(r); tk != "" {
 			c.para(rx+2, ty, rw-4, sizeSmall, Regular, Ink, tk)
 		}
 	} else {
 		c.line(rx+2, ry+20.5, rx+rw-2, ry+20.5, Pen{Width: 0.2, Colour: Ink})
-		c.text(rx+rw-2, ry+19.8, sizeSmall, Regular, Faint, right, t.Unit)
+		c.text(rx+rw-2, ry+19.8, sizeSmall, Regular, Faint, right, string(t.Unit))
 	}
 	// pass / fail
 	py := y + h - 6.5

@@ -7,6 +7,7 @@ import (
 
 	"coilwright/printout/pdftext"
 	"coilwright/winding"
+	"coilwright/winding/plan"
 )
 
 // packsUnderTest are the demo pack and every fixture pack.
@@ -77,7 +78,10 @@ func TestNoReplacedGlyph(t *testing.T) {
 	p := demoPlan(t)
 	var words []string
 	for _, tt := range p.Tests {
-		words = append(words, tt.Title, tt.What, tt.Note, tt.Source, tt.Caution, tt.Unit)
+		words = append(words, tt.Title, tt.What, tt.Note, tt.Source, tt.Caution, string(tt.Unit), plan.LimitText(tt))
+		for _, r := range tt.Readings {
+			words = append(words, r.Label, string(r.Unit))
+		}
 	}
 	for _, st := range p.Steps {
 		words = append(words, st.Title, st.Detail)

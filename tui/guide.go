@@ -409,6 +409,9 @@ func parseReadings(fs []textinput.Model, labels []field) ([]float64, int, string
 			name = labels[i].label
 		}
 		switch {
+		case txt == "" && i < len(labels) && labels[i].optional:
+			out = append(out, 0) // not taken
+			continue
 		case txt == "":
 			return nil, i, name + ": type a number"
 		case err != nil || v != v || v > 1e15 || v < -1e15:

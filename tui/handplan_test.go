@@ -19,6 +19,7 @@ func handPlan(tb testing.TB, slots, poles, layers int) *plan.Plan {
 	if err != nil {
 		tb.Fatalf("winding.Design(%d/%d) = %v", slots, poles, err)
 	}
+	ambient, v500, v570 := 15.0, 500.0, 570.0
 	p := &plan.Plan{
 		Name:                   "test stator",
 		Layout:                 l,
@@ -30,10 +31,16 @@ func handPlan(tb testing.TB, slots, poles, layers int) *plan.Plan {
 		PhaseResistanceAmbient: 0.49,
 		AmbientC:               15,
 		Tests: []plan.Test{
-			{Name: "phase_pairs", What: "insulation between phases before the star point, 500 V DC", Limit: 5, Unit: "Mohm", Compare: "min", Voltage: 500, Source: "IEEE 43-2013 (borrowed)"},
-			{Name: plan.TestInsulation, What: "insulation resistance to core at 500 V DC after 1 min", Limit: 5, Unit: "Mohm", Compare: "min", Voltage: 500, Source: "IEEE 43-2013", Caution: "test voltage: keep clear, discharge after"},
-			{Name: plan.TestResistance, What: "resistance of each phase", Limit: 7, Unit: "%", Compare: "band", Source: "IEC 60028"},
-			{Name: plan.TestHighVoltage, What: "570 V AC for 1 min, winding to core", Limit: 60, Unit: "s", Compare: "min", Voltage: 570, Source: "IEC 60034-1 clause 9.2"},
+			{Name: "phase_pairs", What: "insulation between phases before the star point, 500 V DC", Limit: 5, Unit: plan.UnitMegaohm, Compare: plan.AtLeast, Voltage: 500, Source: "IEEE 43-2013 (borrowed)",
+				Readings: []plan.Reading{{Key: "u_v", Label: "U–V", Unit: plan.UnitMegaohm}, {Key: "u_w", Label: "U–W", Unit: plan.UnitMegaohm}, {Key: "v_w", Label: "V–W", Unit: plan.UnitMegaohm}}},
+			{Name: plan.TestInsulation, What: "insulation resistance to core at 500 V DC after 1 min", Limit: 5, Unit: plan.UnitMegaohm, Compare: plan.AtLeast, Voltage: 500, Source: "IEEE 43-2013", Caution: "test voltage: keep clear, discharge after",
+				Readings: []plan.Reading{{Key: plan.KeyIR1, Label: "IR 1 min", Unit: plan.UnitMegaohm}, {Key: plan.KeyVolts, Label: "test V", Unit: plan.UnitVolt, Preset: &v500},
+					{Key: plan.KeyTemp, Label: "temp", Unit: plan.UnitCelsius, Preset: &ambient}, {Key: plan.KeyIR10, Label: "IR 10 min", Unit: plan.UnitMegaohm, Optional: true}}},
+			{Name: plan.TestResistance, What: "resistance of each phase", Limit: 7, Unit: plan.UnitPercent, Compare: plan.InBand, Source: "IEC 60028",
+				Readings: []plan.Reading{{Key: "uv", Label: "U–V", Unit: plan.UnitOhm}, {Key: "vw", Label: "V–W", Unit: plan.UnitOhm}, {Key: "wu", Label: "W–U", Unit: plan.UnitOhm},
+					{Key: plan.KeyTemp, Label: "temp", Unit: plan.UnitCelsius, Preset: &ambient}}},
+			{Name: plan.TestHighVoltage, What: "570 V AC for 1 min, winding to core", Limit: 60, Unit: plan.UnitSecond, Compare: plan.AtLeast, Voltage: 570, Source: "IEC 60034-1 clause 9.2",
+				Readings: []plan.Reading{{Key: plan.KeyVolts, Label: "volts", Unit: plan.UnitVolt, Preset: &v570}, {Key: plan.KeySeconds, Label: "held", Unit: plan.UnitSecond}}},
 		},
 	}
 	add := func(s plan.Step) {

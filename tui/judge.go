@@ -25,60 +25,57 @@ type field struct {
 	label string
 	unit  string
 	def   string // filled in beforehand (a test voltage, the room temperature)
+	// optional fields may be left empty: recorded as 0, "not taken".
+	optional bool
 }
 
-// fieldsFor lists the readings of a test. The tests of the plan builder get
-// the readings the check engine judges (line resistances and temperature,
-// insulation resistance and test voltage...); any other test asks one value
-// per phase when it is judged as a band, else one value.
+// fieldsFor lists the readings of a test from the plan's reading schema
+// (plan.Test.Readings); a test without one asks one value.
 func fieldsFor(p *plan.Plan, t plan.Test) []field {
-	if fs := verifyFields(p, t); fs != nil {
-		return fs
+	if len(t.Readings) == 0 {
+		return []field{{key: "value", label: "reading", unit: string(t.Unit)}}
 	}
-	if t.Compare == "band" && p != nil && p.Layout != nil && len(p.Layout.PhaseNames) > 0 {
-		out := make([]field, 0, len(p.Layout.PhaseNames))
-		for _, n := range p.Layout.PhaseNames {
-			out = append(out, field{key: n, label: "phase " + n, unit: t.Unit})
+	out := make([]field, len(t.Readings))
+	for i, r := range t.Readings {
+		f := field{key: r.Key, label: r.Label, unit: string(r.Unit), optional: r.Optional}
+		if r.Unit == plan.UnitPassFail {
+			f.unit = "1 held, 0 broke down"
 		}
-		return out
+		if r.Optional {
+			f.unit += ", may be empty"
+		}
+		if r.Preset != nil {
+			f.def = strconv.FormatFloat(*r.Preset, 'g', -1, 64)
+		}
+		out[i] = f
 	}
-	return []field{{key: "value", label: "reading", unit: t.Unit}}
+	return out
 }
 
-// limitJudge compares readings with the test's limit: "max" and "min" per
-// value, "band" as the spread (max - min) / mean in percent.
+// limitJudge compares readings with the test's limit: AtMost and AtLeast
+// per value, InBand as the imbalance of the readings (plan.ImbalancePercent).
 func limitJudge(_ *plan.Plan, t plan.Test, v []float64) Verdict {
 	if len(v) == 0 {
 		return Verdict{Level: "warn", Lines: []string{"no reading given"}}
 	}
 	switch t.Compare {
-	case "max", "min":
+	case plan.AtMost, plan.AtLeast:
 		var bad []string
 		for _, x := range v {
-			if (t.Compare == "max" && x > t.Limit) || (t.Compare == "min" && x < t.Limit) {
-				bad = append(bad, fmtNum(x))
+			if (t.Compare == plan.AtMost && x > t.Limit) || (t.Compare == plan.AtLeast && x < t.Limit) {
+				bad = append(bad, plan.FormatValue(x, t.Unit))
 			}
 		}
-		word := "at most"
-		if t.Compare == "min" {
-			word = "at least"
-		}
 		if len(bad) > 0 {
-			return Verdict{Level: "fail", Lines: []string{fmt.Sprintf("%s %s outside the limit: must be %s %s %s", strings.Join(bad, ", "), t.Unit, word, fmtNum(t.Limit), t.Unit)}}
+			return Verdict{Level: "fail", Lines: []string{fmt.Sprintf("%s outside the limit: must be %s", strings.Join(bad, ", "), plan.LimitText(t))}}
 		}
-		return Verdict{Level: "pass", Lines: []string{fmt.Sprintf("within the limit (%s %s %s)", word, fmtNum(t.Limit), t.Unit)}}
-	case "band":
-		lo, hi, sum := v[0], v[0], 0.0
-		for _, x := range v {
-			lo, hi = min(lo, x), max(hi, x)
-			sum += x
-		}
-		mean := sum / float64(len(v))
+		return Verdict{Level: "pass", Lines: []string{fmt.Sprintf("within the limit (%s)", plan.LimitText(t))}}
+	case plan.InBand:
+		spread, mean := plan.ImbalancePercent(v)
 		if mean <= 0 {
 			return Verdict{Level: "fail", Lines: []string{"readings must be above zero"}}
 		}
-		spread := (hi - lo) / mean * 100
-		line := fmt.Sprintf("spread %.2f %% of the mean %s %s (limit %s %%)", spread, fmtNum(mean), t.Unit, fmtNum(t.Limit))
+		line := fmt.Sprintf("largest deviation %s of the mean %s (limit %s)", plan.FormatValue(spread, plan.UnitPercent), fmtNum(mean), plan.FormatValue(t.Limit, plan.UnitPercent))
 		if spread > t.Limit {
 			return Verdict{Level: "fail", Lines: []string{line}}
 		}
@@ -89,41 +86,3 @@ func limitJudge(_ *plan.Plan, t plan.Test, v []float64) Verdict {
 
 // fmtNum prints a reading without needless digits.
 func fmtNum(x float64) string { return fmt.Sprintf("%.4g", x) }
-
-// verifyFields are the readings the check engine needs for the plan
-// builder's tests, or nil for a test it does not judge step by step.
-func verifyFields(p *plan.Plan, t plan.Test) []field {
-	temp := ""
-	if p != nil {
-		temp = strconv.FormatFloat(p.AmbientC, 'g', -1, 64)
-	}
-	lines := []field{
-		{key: "uv", label: "U-V", unit: "ohm"},
-		{key: "vw", label: "V-W", unit: "ohm"},
-		{key: "wu", label: "W-U", unit: "ohm"},
-		{key: "temp", label: "temp", unit: "degC winding", def: temp},
-	}
-	switch t.Name {
-	case plan.TestResistance, plan.TestBalance:
-		return lines
-	case plan.TestInsulation:
-		return []field{
-			{key: "ir1", label: "IR 1 min", unit: "Mohm"},
-			{key: "volts", label: "test V", unit: "V DC", def: strconv.FormatFloat(t.Voltage, 'g', -1, 64)},
-			{key: "temp", label: "temp", unit: "degC winding", def: temp},
-		}
-	case plan.TestHighVoltage:
-		return []field{
-			{key: "volts", label: "applied", unit: "V AC", def: strconv.FormatFloat(t.Voltage, 'g', -1, 64)},
-			{key: "seconds", label: "held", unit: "s, no breakdown"},
-		}
-	case plan.TestBackEMF:
-		return []field{
-			{key: "uv", label: "U-V", unit: "V rms"},
-			{key: "vw", label: "V-W", unit: "V rms"},
-			{key: "wu", label: "W-U", unit: "V rms"},
-			{key: "rpm", label: "speed", unit: "rpm"},
-		}
-	}
-	return nil
-}

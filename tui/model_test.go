@@ -315,11 +315,13 @@ func TestTestStepReadings(t *testing.T) {
 	if v := plain(m); !strings.Contains(v, "CAUTION") {
 		t.Errorf("the 500 V test shows no caution:\n%s", v)
 	}
-	keys(t, m, "enter", "a", "b", "c", "enter", "enter", "enter")
+	keys(t, m, "enter", "a", "b", "c", "enter", "enter", "enter", "enter")
 	if m.guide.inErr == "" || m.guide.mode != modeReadings || m.guide.focus != 0 {
 		t.Fatalf("a non-number gave mode %v, error %q, focus %d; want an error on field 0", m.guide.mode, m.guide.inErr, m.guide.focus)
 	}
-	keys(t, m, "backspace", "backspace", "backspace", "2", ".", "5", "enter", "enter", "enter")
+	// IR after 1 min, test voltage and temperature (preset), IR after 10 min
+	// (optional, left empty).
+	keys(t, m, "backspace", "backspace", "backspace", "2", ".", "5", "enter", "enter", "enter", "enter")
 	if m.guide.mode != modeVerdict || m.guide.verdict.Level != "fail" {
 		t.Fatalf("2.5 Mohm against min 5: mode %v verdict %+v; want a fail verdict", m.guide.mode, m.guide.verdict)
 	}
@@ -332,8 +334,8 @@ func TestTestStepReadings(t *testing.T) {
 	}
 	es := rec.all()
 	r := es[len(es)-2]
-	if r.Kind != EntryReading || r.Verdict != "fail" || len(r.Values) != 3 || r.Values[0] != 2.5 || r.Values[1] != 500 {
-		t.Errorf("reading entry = %+v; want 2.5 Mohm at 500 V, fail", r)
+	if r.Kind != EntryReading || r.Verdict != "fail" || len(r.Values) != 4 || r.Values[0] != 2.5 || r.Values[1] != 500 || r.Values[3] != 0 {
+		t.Errorf("reading entry = %+v; want 2.5 MΩ at 500 V, IR10 not taken (0), fail", r)
 	}
 }
 

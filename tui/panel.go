@@ -340,21 +340,8 @@ func (g guideModel) verdictView(b *lines, v *Verdict) {
 	}
 }
 
-// limitText says a test's limit in words.
-func limitText(t plan.Test) string {
-	switch t.Compare {
-	case "max":
-		return fmt.Sprintf("at most %s %s", fmtNum(t.Limit), t.Unit)
-	case "min":
-		return fmt.Sprintf("at least %s %s", fmtNum(t.Limit), t.Unit)
-	case "band":
-		return fmt.Sprintf("within +/-%s %% of the expected value", fmtNum(t.Limit))
-	}
-	if t.Limit != 0 {
-		return fmt.Sprintf("%s %s", fmtNum(t.Limit), t.Unit)
-	}
-	return ""
-}
+// limitText says a test's limit in words (plan.LimitText, the one wording).
+func limitText(t plan.Test) string { return plan.LimitText(t) }
 
 // doneView is the panel once every step is done.
 func (g guideModel) doneView(b *lines) {

@@ -12,6 +12,7 @@ import (
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
 	"coilwright/winding/verify"
+	"coilwright/winding/wire"
 )
 
 // demoLines gives the demo plan's line-to-line readings at tempC with the
@@ -24,7 +25,7 @@ func demoLines(t *testing.T, tempC float64, f [3]float64) []string {
 	}
 	var ph [3]float64
 	for i := range ph {
-		ph[i] = verify.AtTemp(f[i]*p.PhaseResistance20C, tempC)
+		ph[i] = wire.ResistanceAt(f[i]*p.PhaseResistance20C, tempC)
 	}
 	l := verify.StarLines(ph)
 	return []string{"--uv", fmt.Sprintf("%.6f", l[0]), "--vw", fmt.Sprintf("%.6f", l[1]), "--wu", fmt.Sprintf("%.6f", l[2]),

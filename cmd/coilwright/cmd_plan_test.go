@@ -156,7 +156,9 @@ func TestPlanDemoIndependent(t *testing.T) {
 		}
 		length := (float64(path.Coils)*n*mlt + jumpers) / 1000
 		check("paths["+path.Phase+"].wire_length_m", path.Length, length, 1e-9)
-		rSum += rho * length / area
+		// The meter reads at the ends of the leads: the path and its two
+		// leads, R = ρ·L/A (IEC 60028); one path per phase on the demo.
+		rSum += rho * (length + 2*lead/1000) / area
 		mass += (length + 2*lead/1000) * area * density / 1000
 	}
 	check("phase_resistance_20c_ohm", p.R20, rSum/3, 1e-9)

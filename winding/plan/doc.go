@@ -22,6 +22,43 @@
 // every wound tooth and puts a polarity test after each phase's last coil and
 // before the star point or delta corners.
 //
+// Resistance is what a meter reads at the ends of the leads. Every path has
+// its own start and finish lead, trimmed to the job's lead length; the paths
+// of a phase are joined at the lead ends (all starts as X1, all finishes as
+// X2), and the star point or delta corners are made there too. So a path
+// reads ρ·(path + two leads)/A, a phase is its paths in parallel, and the
+// line-to-line readings follow from the connection (LineOhms).
+//
+// Test vocabulary. Each test of Plan.Tests has a Name (the Test* keys: the
+// same string in the plan's JSON, the check's findings, the progress record
+// and the print), a typed Unit (SI symbols: Ω, MΩ, V, °C, %, s, rpm) and
+// Compare (AtMost, AtLeast, InBand). LimitText writes a limit and
+// FormatValue a value the one way every screen and page shows them;
+// ImbalancePercent is the one balance rule (largest deviation from the mean,
+// EASA AR100); ResistanceBand the one band of a correct winding.
+//
+// Reading schema. Test.Readings lists what the person reads for each test,
+// in order, as plain data: a stable Key (lower-case ASCII), a Label, a Unit,
+// an optional Preset, and, where the plan knows it, the Expected value as
+// the meter shows it at the job's ambient temperature with its window.
+// Following the job's phases, paths and connection:
+//
+//	continuity             one per path: U1–U2, V1–V2, W1–W2 (keys u1_u2 …;
+//	                       "path k" and _pk with several paths), expected ρL/A
+//	                       of the path and its leads, at most ContinuityFactor×
+//	phase_insulation       every pair of phases: U–V, U–W, V–W (u_v …), MΩ
+//	resistance, balance    the m adjacent line pairs U–V, V–W, W–U (uv, vw, wu)
+//	                       and the winding temperature (temp); expected line
+//	                       to line: R_a + R_b for star, R_a·(S − R_a)/S for
+//	                       delta, within the resistance band
+//	insulation_resistance  ir1 (after 1 min), volts, temp, ir10 (optional,
+//	                       after 10 min, for the polarization index)
+//	hv_withstand           volts applied, seconds held, passed (1 held, 0
+//	                       broke down)
+//	back_emf               the line voltages (uv, vw, wu) and the speed (rpm)
+//
+// FormatReadings writes recorded values by that schema ("U–V 285.8 mΩ, …").
+//
 // Conventions follow package winding: teeth 1..Q counter-clockwise from the
 // lead end, slot k after tooth k, directions seen from the air gap. Lengths of
 // wire are per strand in metres; geometry in mm.

@@ -19,13 +19,20 @@ func (b *builder) electrical() error {
 	cond := make([]float64, phases) // conductance of each phase at 20 °C
 	for i := range p.Paths {
 		pp := &p.Paths[i]
-		pp.Ohm20C = wire.Resistance20(pp.WireLengthM, area)
+		// A meter reads a path at the ends of its leads: each path has its
+		// own start and finish lead, trimmed to length, and the star point,
+		// delta corners and parallel-path joints are made at the lead ends
+		// (see the join steps). So the path's resistance is ρ·(path + two
+		// leads)/A, and its phase is its paths in parallel (R = ρL/A,
+		// IEC 60028 resistivity).
+		pp.LeadEndsLengthM = pp.WireLengthM + 2*lead
+		pp.Ohm20C = wire.Resistance20(pp.LeadEndsLengthM, area)
 		for k, name := range p.Layout.PhaseNames {
 			if name == pp.Phase {
 				cond[k] += 1 / pp.Ohm20C
 			}
 		}
-		p.CopperLengthM += (pp.WireLengthM + 2*lead) * strands
+		p.CopperLengthM += pp.LeadEndsLengthM * strands
 		p.BuyLengthM += pp.CutLengthM * strands
 	}
 	var sum float64
@@ -114,14 +121,4 @@ func HVTestVolts(ratedPowerW, ratedVoltageV float64) float64 {
 		v = math.Max(1500, 1000+2*ratedVoltageV)
 	}
 	return math.Ceil(v/10-1e-9) * 10
-}
-
-func formatOhm(r float64) string {
-	switch {
-	case r < 1:
-		return fmt.Sprintf("%.1f mΩ", r*1000)
-	case r < 100:
-		return fmt.Sprintf("%.3f Ω", r)
-	}
-	return fmt.Sprintf("%.1f Ω", r)
 }

@@ -19,8 +19,8 @@ func ExampleBuild() {
 	fmt.Println(p.Steps[3].Title)
 	// Output:
 	// 18 turns per coil, fill 0.38, mean turn 84.9 mm
-	// phase 139.1 mΩ at 20 °C, charging from 286 rpm
-	// copper loss 22.8 W at 95 °C
+	// phase 145.7 mΩ at 20 °C, charging from 286 rpm
+	// copper loss 23.9 W at 95 °C
 	// Coil 1 of 24: tooth 1, phase U, cw, 18 turns
 }
 

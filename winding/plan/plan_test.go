@@ -99,14 +99,16 @@ func mustPlan(t testing.TB, j *job.Job) *Plan {
 //	W  as U (5 cw, 6 ccw, 11 ccw, 12 cw)                  = 206.6077 mm
 //
 //	path U     4·3.108315 + 0.2066077                 = 12.63987 m (V 12.60321 m)
-//	R20 U      12.63987 / 58 / 0.1963495              = 1.109902 Ω (IEC 60028); V 1.106684 Ω
-//	phase      (2·1.109902 + 1.106684)/3               = 1.108829 Ω
+//	R20 U      (12.63987 + 2·0.25 leads) / 58 / 0.1963495 = 1.153807 Ω (IEC 60028);
+//	           V (12.60321 + 0.5) / 58 / 0.1963495        = 1.150588 Ω; read at the lead
+//	           ends, where the star point is made
+//	phase      (2·1.153807 + 1.150588)/3               = 1.152734 Ω
 //	leads in   2·12.63987 + 12.60321 + 3·2·0.25        = 39.38295 m
 //	mass       39.38295 m · 0.1963495 mm² · 8.89 g/cm³ = 0.0687448 kg
 //	cut        12.63987 + 0.5 + 4·0.030               = 13.25987 m (path U)
 //	buy        (2·13.25987 + 13.22321) · 1.10          = 43.71724 m, 0.0763105 kg
 //	J          1 A / 0.1963495 mm²                    = 5.09296 A/mm²
-//	loss       1² · (2·1.109902 + 1.106684)            = 3.326487 W (at 20 °C; hot in TestCopperLossHot)
+//	loss       1² · (2·1.153807 + 1.150588)            = 3.458202 W (at 20 °C; hot in TestCopperLossHot)
 //	HV test    under 1 kW and 100 V: 500 + 2·24 = 548, rounded up to 550 V
 //	           (IEC 60034-1 clause 9.2)
 func TestWorkedExample(t *testing.T) {
@@ -133,15 +135,15 @@ func TestWorkedExample(t *testing.T) {
 		{"Paths[0].JumperLengthM", p.Paths[0].JumperLengthM, 0.2066077, 1e-7},
 		{"Paths[0].WireLengthM", p.Paths[0].WireLengthM, 12.63987, 1e-5},
 		{"Paths[0].CutLengthM", p.Paths[0].CutLengthM, 13.25987, 1e-5},
-		{"Paths[0].Ohm20C", p.Paths[0].Ohm20C, 1.109902, 1e-6},
-		{"PhaseResistance20C", p.PhaseResistance20C, 1.108829, 1e-6},
-		{"PhaseResistanceAmbient", p.PhaseResistanceAmbient, 1.108829, 1e-6},
+		{"Paths[0].Ohm20C", p.Paths[0].Ohm20C, 1.153807, 1e-6},
+		{"PhaseResistance20C", p.PhaseResistance20C, 1.152734, 1e-6},
+		{"PhaseResistanceAmbient", p.PhaseResistanceAmbient, 1.152734, 1e-6},
 		{"CopperLengthM", p.CopperLengthM, 39.38295, 1e-5},
 		{"CopperMassKg", p.CopperMassKg, 0.0687448, 1e-7},
 		{"BuyLengthM", p.BuyLengthM, 43.71724, 1e-5},
 		{"BuyMassKg", p.BuyMassKg, 0.0763105, 1e-7},
 		{"CurrentDensityAmm2", p.CurrentDensityAmm2, 5.09296, 1e-5},
-		{"CopperLossAmbientW", p.CopperLossAmbientW, 3.326487, 1e-5},
+		{"CopperLossAmbientW", p.CopperLossAmbientW, 3.458202, 1e-5},
 		{"hv_withstand voltage", testNamed(p, TestHighVoltage).Voltage, 550, 0},
 	}
 	for _, c := range cases {
@@ -319,8 +321,8 @@ func TestCutInBuiltWinding(t *testing.T) {
 // temperature, R(T) = R20·(234.5 + T)/254.5 (IEC 60028), T the reference
 // temperature of IEC 60034-1 for the thermal class (from memory: 105 (A)
 // 75 °C, 130 (B) 95 °C, 155 (F) 115 °C, 180 (H) 135 °C) or the job's own.
-// The worked example (R20 = 1.108829 Ω, 3 phases at 1 A) by hand: at 95 °C
-// 3·1²·1.108829·329.5/254.5 = 4.306788 W; at 20 °C 3.326487 W.
+// The worked example (R20 = 1.152734 Ω, 3 phases at 1 A) by hand: at 95 °C
+// 3·1²·1.152734·329.5/254.5 = 4.477319 W; at 20 °C 3.458202 W.
 func TestCopperLossHot(t *testing.T) {
 	cases := []struct {
 		name  string
@@ -328,10 +330,10 @@ func TestCopperLossHot(t *testing.T) {
 		tempC float64
 		lossW float64 // by hand, 0 where not worked
 	}{
-		{"class not given: 130 (B)", "", 95, 4.306788},
-		{"class 155 (F)", "thermal_class = 155\n", 115, 3 * 1.108829 * 349.5 / 254.5},
-		{"class 105 (A)", "thermal_class = 105\n", 75, 3 * 1.108829 * 309.5 / 254.5},
-		{"measured 60 °C", "copper_temperature_c = 60\n", 60, 3 * 1.108829 * 294.5 / 254.5},
+		{"class not given: 130 (B)", "", 95, 4.477319},
+		{"class 155 (F)", "thermal_class = 155\n", 115, 3 * 1.152734 * 349.5 / 254.5},
+		{"class 105 (A)", "thermal_class = 105\n", 75, 3 * 1.152734 * 309.5 / 254.5},
+		{"measured 60 °C", "copper_temperature_c = 60\n", 60, 3 * 1.152734 * 294.5 / 254.5},
 	}
 	for _, c := range cases {
 		src := strings.Replace(handJob, "voltage_v = 24\n", "voltage_v = 24\n"+c.extra, 1)

@@ -230,11 +230,11 @@ func (b *builder) polarityTest() Test {
 		What: fmt.Sprintf("Drive %g A DC through one phase at a time%s from its start terminal to its finish terminal and hold a compass "+
 			"(or a Hall probe, magnetic viewing film, a phone's magnetometer) at each wound tooth face: each shows the pole of the plan. Expected: %s.",
 			amps, paths, strings.Join(exp, "; ")),
-		Unit: "pole", Compare: "match", Current: amps, HeatW: round3(watts),
+		Unit: UnitPole, Compare: Matches, Current: amps, HeatW: round3(watts),
 		Source: "common practice (the DC polarity test of rewinders); poles by the right-hand rule: a coil wound clockwise seen from the air gap, current entering at its start, makes its tooth face a south pole (a compass's north end points at it), counter-clockwise a north pole",
 		Note: fmt.Sprintf("%g A is a fifth of the rated phase current (at most %g A); it needs about %s across the phase and makes %s of heat in it (I²R at %s), "+
 			"so the winding stays cool; a reversed coil shows the opposite pole of the plan, swapped start and finish leads reverse every tooth of the phase (or of the path)",
-			amps, PolarityCurrentMaxA, formatVolts(volts), formatWatts(watts), formatOhm(p.PhaseResistanceAmbient)),
+			amps, PolarityCurrentMaxA, formatVolts(volts), formatWatts(watts), FormatValue(p.PhaseResistanceAmbient, UnitOhm)),
 		Caution: PolarityCaution}
 }
 

@@ -5,6 +5,7 @@ import (
 	"math"
 	"strings"
 
+	"coilwright/winding"
 	"coilwright/winding/wire"
 )
 
@@ -56,18 +57,23 @@ const (
 		"A turning generator makes voltage at its leads even when nothing is connected."
 )
 
-// ResistanceBand is the band, in per cent about the plan's value, within
-// which the resistance of a correct winding lies. The tolerance δ on the bare
-// diameter d puts R between (d/(d+δ))² and (d/(d−δ))² of nominal (IEC
-// 60317-0-1 tolerances; R ∝ 1/d²); the length estimate widens it by
-// ±LengthUncertaintyPercent, multiplied in (worst case). check judges by the
-// same band.
-func ResistanceBand(w Wire) (lowPct, highPct float64) {
+// DiameterBand is how far the IEC 60317-0-1 tolerance δ on the bare
+// diameter d moves the resistance: R ∝ 1/d², so from (d/(d+δ))² to
+// (d/(d−δ))² of nominal, as factors (1, 1 when the plan has no tolerance).
+func DiameterBand(w Wire) (lo, hi float64) {
 	d, tol := w.BareDiameterMM, w.DiameterTolMM
-	lo, hi := 1.0, 1.0
 	if d > 0 && tol > 0 && tol < d {
-		lo, hi = (d/(d+tol))*(d/(d+tol)), (d/(d-tol))*(d/(d-tol))
+		return (d / (d + tol)) * (d / (d + tol)), (d / (d - tol)) * (d / (d - tol))
 	}
+	return 1, 1
+}
+
+// ResistanceBand is the band, in per cent about the plan's value, within
+// which the resistance of a correct winding lies: the diameter tolerance
+// (DiameterBand) times ±LengthUncertaintyPercent for the length estimate,
+// multiplied in (worst case). The plan's tests and check use this one band.
+func ResistanceBand(w Wire) (lowPct, highPct float64) {
+	lo, hi := DiameterBand(w)
 	u := LengthUncertaintyPercent / 100
 	return 100 * (lo*(1-u) - 1), 100 * (hi*(1+u) - 1)
 }
@@ -77,7 +83,6 @@ func round1(x float64) float64 { return math.Round(x*10) / 10 }
 func (b *builder) tests() error {
 	p := b.p
 	names := p.Layout.PhaseNames
-	pairs := phasePairs(names)
 	pathR := 0.0
 	for _, pp := range p.Paths {
 		pathR = math.Max(pathR, pp.Ohm20C)
@@ -85,64 +90,70 @@ func (b *builder) tests() error {
 	pathAmb := wire.ResistanceAt(pathR, p.AmbientC)
 	tolPct := 100 * 2 * p.Wire.DiameterTolMM / p.Wire.BareDiameterMM
 	lowPct, highPct := ResistanceBand(p.Wire)
-	band := math.Round(math.Max(-lowPct, highPct)*10) / 10
+	band := [2]float64{lowPct, highPct}
 	hv := HVTestVolts(p.RatedPowerW, p.RatedVoltageV)
 	var pathWord string
 	if b.j.Winding.Paths > 1 {
 		pathWord = fmt.Sprintf(" (each of the %d paths of every phase on its own, before they are joined)", b.j.Winding.Paths)
 	}
 	var ts []Test
+	cont := b.continuityReadings(band)
 	ts = append(ts, Test{Name: TestContinuity, Title: "Continuity of every path",
-		What:  fmt.Sprintf("Continuity of every path from its start lead to its finish lead: %s%s. Each reads near its expected resistance, none open.", endsList(names), pathWord),
-		Limit: round3(ContinuityFactor * pathAmb), Unit: "ohm", Compare: "max",
+		What:  fmt.Sprintf("Continuity of every path from the end of its start lead to the end of its finish lead: %s%s. Each reads near its expected resistance, none open.", endsList(names), pathWord),
+		Limit: round3(ContinuityFactor * pathAmb), Unit: UnitOhm, Compare: AtMost, Readings: cont,
 		Source: "common practice: an open circuit or a poor joint reads well above the expected resistance",
-		Note:   fmt.Sprintf("expected about %s per path at %g °C", formatOhm(pathAmb), p.AmbientC)})
+		Note:   fmt.Sprintf("expected about %s per path at %s, leads included", FormatValue(pathAmb, UnitOhm), FormatValue(p.AmbientC, UnitCelsius))})
 	beforeJoin := "star point"
 	if p.Connection.String() == "delta" {
 		beforeJoin = "delta corners"
 	}
+	pairs := pairReadings(names)
 	ts = append(ts, Test{Name: TestPhaseInsulation, Title: "Insulation between phases",
-		What:  fmt.Sprintf("Insulation between phases, before the %s is made: %s, at %g V DC for 1 min.", beforeJoin, strings.Join(pairs, ", "), InsulationTestVolts),
-		Limit: MinInsulationMOhm, Unit: "Mohm", Compare: "min", Voltage: InsulationTestVolts,
+		What:  fmt.Sprintf("Insulation between phases, before the %s is made: %s, at %s DC for 1 min.", beforeJoin, ReadingLabels(pairs), FormatValue(InsulationTestVolts, UnitVolt)),
+		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, Readings: pairs,
 		Source:  "IEEE 43-2013 minimum for random-wound windings, borrowed here for phase to phase (the standard tests winding to ground)",
 		Caution: cautionIR,
 		Note:    "a low reading between two phases points to a damaged separator or enamel where their coils share a slot"})
 	ts = append(ts, b.polarityTest())
+	lines := b.lineReadings(band)
 	var expect []string
-	for _, ph := range p.PhaseOhms {
-		expect = append(expect, fmt.Sprintf("%s %s", ph.Phase, formatOhm(ph.OhmAmbient)))
+	for _, r := range lines {
+		if r.Expected != nil {
+			expect = append(expect, r.Label+" "+FormatValue(r.Expected.Value, r.Unit))
+		}
 	}
 	ts = append(ts, Test{Name: TestResistance, Title: "Resistance of each phase",
-		What: fmt.Sprintf("Resistance of each phase with a four-wire (Kelvin) meter, the winding at room temperature; refer the readings to 20 °C by the copper coefficient. Expected at %g °C: %s (%s at 20 °C).",
-			p.AmbientC, strings.Join(expect, ", "), formatOhm(p.PhaseResistance20C)),
-		Limit: band, Unit: "%", Compare: "band", LowPercent: round1(lowPct), HighPercent: round1(highPct),
+		What: fmt.Sprintf("Resistance between the line leads of the connected %s winding, at the lead ends, with a four-wire (Kelvin) meter, the winding at room temperature; check refers the readings to 20 °C by the copper coefficient. Expected at %s: %s (one phase %s at 20 °C, its leads included).",
+			p.Connection, FormatValue(p.AmbientC, UnitCelsius), strings.Join(expect, ", "), FormatValue(p.PhaseResistance20C, UnitOhm)),
+		Limit: round1(math.Max(-lowPct, highPct)), Unit: UnitPercent, Compare: InBand, LowPercent: round1(lowPct), HighPercent: round1(highPct),
+		Readings: lines,
 		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band %+.1f %% .. %+.1f %%: about ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm (R goes as 1/d²), times ±%.0f %% for the length estimate (common practice)",
 			lowPct, highPct, tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
-		Note: "a star winding is read line to line; check converts the three readings to phase values"})
+		Note: lineNote(p.Connection)})
 	ts = append(ts, Test{Name: TestBalance, Title: "Resistance balance",
-		What:  "Balance of the three phase resistances: (highest − lowest) / mean.",
-		Limit: BalanceLimitPercent, Unit: "%", Compare: "max",
-		Source: "EASA AR100-2020: random-wound windings within 2 % (1 % for form-wound)",
-		Note:   "a phase high by about one coil's share has a coil with too many turns or a poor joint; low, a shorted turn"})
-	irNote := "also read at 10 min for the polarization index (at least 2.0 for class B insulation and above, IEEE 43-2013)"
+		What:  "Balance of the phase resistances, from the same readings: the largest deviation of a phase from the mean of the phases, over that mean.",
+		Limit: BalanceLimitPercent, Unit: UnitPercent, Compare: AtMost, Readings: withoutExpected(b.lineReadings(band)),
+		Source: "EASA AR100-2020: random-wound windings within 2 % (1 % for form-wound), as the largest deviation from the average",
+		Note:   "a phase high by about one coil's share has a coil with too many turns or a poor joint; low, a coil shorted or left out"})
+	irNote := "the 10-minute reading gives the polarization index (IR10/IR1), a guide to moisture and contamination"
 	if p.RatedPowerW < IEEE43MinPowerW {
 		irNote = fmt.Sprintf("this machine (about %.0f W) is below the scope of IEEE 43, which starts at 750 W: the limit is borrowed; ", p.RatedPowerW) + irNote
 	}
 	ts = append(ts, Test{Name: TestInsulation, Title: "Insulation resistance to the core",
-		What:  fmt.Sprintf("Insulation resistance of the whole winding (all leads joined) to the stator core at %g V DC, read after 1 min; correct the reading to 40 °C.", InsulationTestVolts),
-		Limit: MinInsulationMOhm, Unit: "Mohm", Compare: "min", Voltage: InsulationTestVolts,
+		What:  fmt.Sprintf("Insulation resistance of the whole winding (all leads joined) to the stator core at %s DC, read after 1 min (and after 10 min for the polarization index); check corrects the reading to 40 °C.", FormatValue(InsulationTestVolts, UnitVolt)),
+		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, Readings: insulationReadings(p),
 		Source: "IEEE 43-2013: 500 V DC below 1 kV rating; minimum 5 MΩ at 40 °C for random-wound windings", Caution: cautionIR, Note: irNote})
 	ts = append(ts, Test{Name: TestHighVoltage, Title: "High-voltage withstand",
-		What: fmt.Sprintf("High-voltage withstand: %.0f V AC 50/60 Hz for 1 min between the winding (all leads joined) and the core, after the insulation resistance has passed. No breakdown.",
-			hv),
-		Limit: 60, Unit: "s", Compare: "min", Voltage: hv,
+		What: fmt.Sprintf("High-voltage withstand: %s AC 50/60 Hz for 1 min between the winding (all leads joined) and the core, after the insulation resistance has passed. No breakdown.",
+			FormatValue(hv, UnitVolt)),
+		Limit: 60, Unit: UnitSecond, Compare: AtLeast, Voltage: hv, Readings: withstandReadings(hv),
 		Source: fmt.Sprintf("IEC 60034-1 clause 9.2 (table number from memory): %s, rated %.1f V line, about %.0f W",
 			hvRule(p.RatedPowerW, p.RatedVoltageV), p.RatedVoltageV, p.RatedPowerW),
 		Caution: cautionHV,
 		Note:    "a repeated test (after rework, or at acceptance) is at 80 % of this voltage; rewound windings: EASA AR100-2020 tables 4-4 and 4-5; a DC test is about 1.7 × the AC value"})
 	bt := Test{Name: TestBackEMF, Title: "Back-EMF balance (optional, rotor fitted)",
-		What:  "Optional, with the rotor fitted: spin the rotor at a steady known speed with the leads open and read the three line voltages; they should agree.",
-		Limit: BackEMFBalancePercent, Unit: "%", Compare: "max",
+		What:  fmt.Sprintf("Optional, with the rotor fitted: spin the rotor at a steady known speed with the leads open and read the line voltages %s; they should agree.", ReadingLabels(emfReadings(names)[:len(names)])),
+		Limit: BackEMFBalancePercent, Unit: UnitPercent, Compare: AtMost, Readings: emfReadings(names),
 		Source:  "common practice; expected value from E = √2·π·f·N·k_w·Φ (textbook, e.g. Pyrhönen et al.)",
 		Caution: cautionSpin}
 	if p.EMF != nil {
@@ -153,21 +164,30 @@ func (b *builder) tests() error {
 	return nil
 }
 
+// withoutExpected copies readings without their expected values (the
+// balance test judges the same readings against each other, not the plan).
+func withoutExpected(rs []Reading) []Reading {
+	out := make([]Reading, len(rs))
+	for i, r := range rs {
+		r.Expected = nil
+		out[i] = r
+	}
+	return out
+}
+
+// lineNote says how the line readings relate to the phases.
+func lineNote(c winding.Connection) string {
+	if c == winding.Delta {
+		return "in a delta each line reading is one phase in parallel with the other two in series (2/3 of a phase for three equal phases); check converts the readings to phase values"
+	}
+	return "in a star each line reading is two phases in series (the star point is not brought out); check converts the readings to phase values"
+}
+
 func hvRule(powerW, voltsV float64) string {
 	if powerW < 1000 && voltsV < 100 {
 		return "under 1 kW and under 100 V: 500 V + 2·U_N"
 	}
 	return "1000 V + 2·U_N, at least 1500 V"
-}
-
-func phasePairs(names []string) []string {
-	var out []string
-	for i := range names {
-		for k := i + 1; k < len(names); k++ {
-			out = append(out, names[i]+"–"+names[k])
-		}
-	}
-	return out
 }
 
 func endsList(names []string) string {

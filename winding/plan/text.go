@@ -85,13 +85,16 @@ func (p *Plan) Text() string {
 		if i == 0 {
 			k = "Paths"
 		}
-		row(k, "%s%s: %d coils, %.2f m between terminals (jumpers %.2f m), %s at 20 °C",
-			pp.Phase, pathSuffix(l.Spec.Paths, pp.Path), pp.Coils, pp.WireLengthM, pp.JumperLengthM, formatOhm(pp.Ohm20C))
+		row(k, "%s%s: %d coils, %.2f m between terminals (jumpers %.2f m), %s at 20 °C with its two leads",
+			pp.Phase, pathSuffix(l.Spec.Paths, pp.Path), pp.Coils, pp.WireLengthM, pp.JumperLengthM, FormatValue(pp.Ohm20C, UnitOhm))
 	}
 	if p.AmbientC == 20 {
-		row("Resistance", "phase %s at 20 °C (IEC 60028)", formatOhm(p.PhaseResistance20C))
+		row("Resistance", "phase %s at 20 °C at the lead ends (IEC 60028)", FormatValue(p.PhaseResistance20C, UnitOhm))
 	} else {
-		row("Resistance", "phase %s at 20 °C, %s at %g °C (IEC 60028)", formatOhm(p.PhaseResistance20C), formatOhm(p.PhaseResistanceAmbient), p.AmbientC)
+		row("Resistance", "phase %s at 20 °C, %s at %s, at the lead ends (IEC 60028)", FormatValue(p.PhaseResistance20C, UnitOhm), FormatValue(p.PhaseResistanceAmbient, UnitOhm), FormatValue(p.AmbientC, UnitCelsius))
+	}
+	if l.Spec.Paths > 1 {
+		row("", "each path with its own start and finish lead; the paths joined at the lead ends, so in parallel")
 	}
 	row("Current", "%.2f A per phase, %.2f A/mm²", p.PhaseCurrentA, p.CurrentDensityAmm2)
 	row("", "copper loss %.1f W at %g °C working (%s); %.1f W at %g °C", p.CopperLossW, p.CopperLossTemperatureC, p.CopperLossTemperatureBasis, p.CopperLossAmbientW, p.AmbientC)
@@ -137,8 +140,14 @@ func (p *Plan) Text() string {
 
 	b.WriteString("\nTests\n")
 	for _, t := range p.Tests {
-		fmt.Fprintf(&b, "  %s: %s\n", t.Name, limitText(t))
+		fmt.Fprintf(&b, "  %s: %s\n", t.Name, LimitText(t))
 		fmt.Fprintf(&b, "    %s\n", t.What)
+		if r := expectedText(t.Readings); r != "" {
+			fmt.Fprintf(&b, "    Expect: %s\n", r)
+		}
+		if t.Resolution != "" {
+			fmt.Fprintf(&b, "    Sees: %s\n", t.Resolution)
+		}
 		if t.Note != "" {
 			fmt.Fprintf(&b, "    Note: %s\n", t.Note)
 		}
@@ -163,24 +172,22 @@ func (p *Plan) Text() string {
 	return b.String()
 }
 
-func limitText(t Test) string {
-	v := ""
-	if t.Voltage > 0 {
-		v = fmt.Sprintf(" at %g V", t.Voltage)
+// expectedText lists what the meter should show for each reading that has an
+// expected value: "U–V 278.4 mΩ (259.2 mΩ .. 298.1 mΩ)".
+func expectedText(rs []Reading) string {
+	var out []string
+	for _, r := range rs {
+		e := r.Expected
+		if e == nil {
+			continue
+		}
+		s := r.Label + " " + FormatValue(e.Value, r.Unit)
+		if e.Low > 0 {
+			s += " (" + FormatValue(e.Low, r.Unit) + " .. " + FormatValue(e.High, r.Unit) + ")"
+		} else if e.High > 0 {
+			s += " (at most " + FormatValue(e.High, r.Unit) + ")"
+		}
+		out = append(out, s)
 	}
-	unit := t.Unit
-	if unit == "Mohm" {
-		unit = "MΩ"
-	} else if unit == "ohm" {
-		unit = "Ω"
-	}
-	switch t.Compare {
-	case "match":
-		return fmt.Sprintf("every tooth shows its %s of the plan", t.Unit)
-	case "min":
-		return fmt.Sprintf("at least %g %s%s", t.Limit, unit, v)
-	case "band":
-		return fmt.Sprintf("within ±%g %s of expected%s", t.Limit, unit, v)
-	}
-	return fmt.Sprintf("at most %g %s%s", t.Limit, unit, v)
+	return strings.Join(out, ", ")
 }

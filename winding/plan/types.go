@@ -156,7 +156,10 @@ type PathPlan struct {
 	CutLengthM  float64 `json:"cut_length_m"`  // with both leads and allowances: what to cut from the spool, one strand
 	// JumperLengthM is the part of WireLengthM in jumpers (with their slack).
 	JumperLengthM float64 `json:"jumper_length_m"`
-	Ohm20C        float64 `json:"ohm_20c"`
+	// LeadEndsLengthM is WireLengthM and both leads: the wire a meter reads
+	// across at the ends of the leads, one strand.
+	LeadEndsLengthM float64 `json:"lead_ends_length_m"`
+	Ohm20C          float64 `json:"ohm_20c"` // at the ends of its leads
 }
 
 // Material is a line of the cut list besides copper: liners, separators,
@@ -225,22 +228,29 @@ type CoilStep struct {
 	UpSlot   int `json:"up_slot"`
 }
 
-// Test is one line of the test plan.
+// Test is one line of the test plan. Name is one of the Test* keys, the same
+// in the plan, the check's findings, the progress record and the print.
 type Test struct {
 	Name    string  `json:"name"`
 	Title   string  `json:"title"` // in words, for people: "Insulation between phases"
 	What    string  `json:"what"`
 	Limit   float64 `json:"limit"`
-	Unit    string  `json:"unit"`
-	Compare string  `json:"compare"` // "max", "min" or "band" (limit is then ± percent)
-	// LowPercent and HighPercent bound a "band" test exactly (Limit is the
+	Unit    Unit    `json:"unit"`
+	Compare Compare `json:"compare"` // AtMost, AtLeast, or InBand (Limit is then ± percent)
+	// LowPercent and HighPercent bound an InBand test exactly (Limit is the
 	// larger of the two, rounded).
 	LowPercent  float64 `json:"low_percent,omitempty"`
 	HighPercent float64 `json:"high_percent,omitempty"`
 	Voltage     float64 `json:"test_voltage_v,omitempty"`
 	Current     float64 `json:"test_current_a,omitempty"` // DC driven through the winding (polarity test)
 	HeatW       float64 `json:"heat_w,omitempty"`         // heat the test current makes in one phase
-	Source      string  `json:"source"`
-	Caution     string  `json:"caution,omitempty"`
-	Note        string  `json:"note,omitempty"`
+	// Readings are what the person reads for this test, in order, with the
+	// value the meter should show where the plan knows it.
+	Readings []Reading `json:"readings"`
+	// Resolution says the smallest turn error the test can see on this
+	// job, in words; empty where it does not apply.
+	Resolution string `json:"resolution,omitempty"`
+	Source     string `json:"source"`
+	Caution    string `json:"caution,omitempty"`
+	Note       string `json:"note,omitempty"`
 }

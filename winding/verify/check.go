@@ -7,11 +7,13 @@ import (
 
 	"coilwright/winding"
 	"coilwright/winding/plan"
+	"coilwright/winding/wire"
 )
 
-// ImbalanceLimitPercent is the largest difference between phase resistances,
-// (max − min)/mean, of a random-wound winding (EASA AR100-2020; 1 % for
-// form-wound coils). The plan's test plan states the same limit.
+// ImbalanceLimitPercent is the largest deviation of a phase resistance from
+// the mean of the phases, over that mean, of a random-wound winding (EASA
+// AR100-2020; 1 % for form-wound coils). The plan's test plan states the
+// same limit.
 const ImbalanceLimitPercent = plan.BalanceLimitPercent
 
 // LengthUncertainty is the stated uncertainty of the plan's wire length, a
@@ -47,7 +49,7 @@ func Check(p *plan.Plan, r Readings) (*Report, error) {
 		TemperatureC: r.TempC, Connection: p.Connection.String(), FourWire: r.FourWire, LeadOhm: r.LeadOhm,
 		ImbalanceLimit: ImbalanceLimitPercent, Verdict: Pass, Phases: []Phase{}, Findings: []Finding{},
 	}}
-	c.rep.Expected = ExpectedOhm{At20C: p.PhaseResistance20C, AtTemp: AtTemp(p.PhaseResistance20C, r.TempC)}
+	c.rep.Expected = ExpectedOhm{At20C: p.PhaseResistance20C, AtTemp: wire.ResistanceAt(p.PhaseResistance20C, r.TempC)}
 	c.rep.Band = bandFor(p)
 	if r.HasResistance() {
 		if p.PhaseResistance20C <= 0 {
@@ -88,12 +90,8 @@ func (c *checker) name(i int) string { return c.p.Layout.PhaseNames[i] }
 // (plan.ResistanceBand: the IEC 60317 diameter tolerance, R ∝ 1/d², times the
 // length uncertainty), with its two parts shown apart.
 func bandFor(p *plan.Plan) Band {
-	d, tol := p.Wire.BareDiameterMM, p.Wire.DiameterTolMM
-	lo, hi := 1.0, 1.0
-	if d > 0 && tol > 0 && tol < d {
-		lo, hi = sq(d/(d+tol)), sq(d/(d-tol))
-	}
-	b := Band{DiameterMM: d, DiameterTolMM: tol, LengthPercent: 100 * LengthUncertainty,
+	lo, hi := plan.DiameterBand(p.Wire)
+	b := Band{DiameterMM: p.Wire.BareDiameterMM, DiameterTolMM: p.Wire.DiameterTolMM, LengthPercent: 100 * LengthUncertainty,
 		DiameterPercent: [2]float64{100 * (lo - 1), 100 * (hi - 1)}}
 	b.LowPercent, b.HighPercent = plan.ResistanceBand(p.Wire)
 	b.Low20C = p.PhaseResistance20C * (1 + b.LowPercent/100)

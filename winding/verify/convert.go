@@ -1,6 +1,11 @@
 package verify
 
-import "math"
+import (
+	"math"
+
+	"coilwright/winding"
+	"coilwright/winding/plan"
+)
 
 // StarPhases returns the phase resistances of a star winding from its
 // line-to-line readings: R_UV = R_U + R_V and rotations, so
@@ -34,7 +39,7 @@ func starOpen(uv, vw, wu float64) [3]float64 {
 // StarLines is the forward conversion: the line-to-line readings of a star
 // winding of phases u, v, w (UV, VW, WU).
 func StarLines(ph [3]float64) [3]float64 {
-	return [3]float64{ph[0] + ph[1], ph[1] + ph[2], ph[2] + ph[0]}
+	return [3]float64(plan.LineOhms(winding.Star, ph[:]))
 }
 
 // DeltaLines is the forward conversion for a delta of phases Ru (between lines
@@ -42,8 +47,7 @@ func StarLines(ph [3]float64) [3]float64 {
 // parallel with it, so R_UV = Ru(Rv+Rw)/S, R_VW = Rv(Rw+Ru)/S,
 // R_WU = Rw(Ru+Rv)/S with S = Ru+Rv+Rw.
 func DeltaLines(ph [3]float64) [3]float64 {
-	s := ph[0] + ph[1] + ph[2]
-	return [3]float64{ph[0] * (ph[1] + ph[2]) / s, ph[1] * (ph[2] + ph[0]) / s, ph[2] * (ph[0] + ph[1]) / s}
+	return [3]float64(plan.LineOhms(winding.Delta, ph[:]))
 }
 
 // DeltaPhases inverts DeltaLines exactly.
@@ -77,24 +81,6 @@ func DeltaPhases(uv, vw, wu float64) [3]float64 {
 		return sum / x
 	}
 	return [3]float64{div(c), div(a), div(b)}
-}
-
-// Copper temperature coefficient (IEC 60028, annealed copper): α20 =
-// 0.00393/K, so R_T = R_20·(234.5 + T)/254.5, the inferred zero of resistance
-// at −234.5 °C.
-const (
-	copperInferredZeroC = 234.5
-	refTempC            = 20.0
-)
-
-// To20C corrects a copper resistance measured at tempC to 20 °C (IEC 60028).
-func To20C(ohm, tempC float64) float64 {
-	return ohm * (copperInferredZeroC + refTempC) / (copperInferredZeroC + tempC)
-}
-
-// AtTemp gives the resistance at tempC of copper of ohm20 at 20 °C (IEC 60028).
-func AtTemp(ohm20, tempC float64) float64 {
-	return ohm20 * (copperInferredZeroC + tempC) / (copperInferredZeroC + refTempC)
 }
 
 // IRTo40C corrects an insulation resistance measured at tempC to 40 °C by

@@ -125,15 +125,16 @@ func (c *checker) backEMF() {
 	c.rep.EMF = res
 	add := func(sev Verdict, msg string, teeth []int) {
 		res.Verdict = Worst(res.Verdict, sev)
-		c.add(Finding{Severity: sev, Phase: c.phaseOfTeeth(teeth), Test: "back-emf", Message: msg, Teeth: teeth})
+		c.add(Finding{Severity: sev, Phase: c.phaseOfTeeth(teeth), Test: plan.TestBackEMF, Message: msg, Teeth: teeth})
 	}
 	mean := (meas[0] + meas[1] + meas[2]) / 3
 	if mean == 0 {
 		add(Fail, "no back-EMF on any line: the leads are not connected to the meter, the rotor has no magnetised poles, or the winding is open", nil)
 		return
 	}
-	lo, hi := minMax(meas[:])
-	res.ImbalancePercent = 100 * (hi - lo) / mean
+	// The same imbalance as the resistances: largest deviation from the
+	// mean, over the mean (plan.ImbalancePercent).
+	res.ImbalancePercent, _ = plan.ImbalancePercent(meas[:])
 	if c.p.EMF != nil && c.p.EMF.VoltsPerRPMPhase > 0 {
 		ph := c.p.EMF.VoltsPerRPMPhase * e.RPM
 		res.ExpectedLineV = ph
@@ -159,7 +160,7 @@ func (c *checker) backEMF() {
 		}
 	}
 	if res.ImbalancePercent <= EMFImbalanceWarnPercent {
-		add(Pass, fmt.Sprintf("back-EMF balanced: %.2f %% between lines", res.ImbalancePercent), nil)
+		add(Pass, fmt.Sprintf("back-EMF balanced: the largest deviation from the mean is %.2f %%", res.ImbalancePercent), nil)
 		return
 	}
 	sev := Warn
@@ -173,7 +174,7 @@ func (c *checker) backEMF() {
 // reversedCoilText names the coils whose reversal fits the measured pattern.
 func (c *checker) reversedCoilText(meas [3]float64, res *EMFResult) string {
 	m := newEMFModel(c.p)
-	base := fmt.Sprintf("back-EMF unbalanced: %.1f %% between lines (UV %.3g, VW %.3g, WU %.3g V)", res.ImbalancePercent, meas[0], meas[1], meas[2])
+	base := fmt.Sprintf("back-EMF unbalanced: a line %.1f %% from the mean (UV %.3g, VW %.3g, WU %.3g V)", res.ImbalancePercent, meas[0], meas[1], meas[2])
 	if len(m.coils) == 0 {
 		return base
 	}

@@ -6,6 +6,7 @@ import (
 	"coilwright/winding/job"
 	"coilwright/winding/plan"
 	"coilwright/winding/verify"
+	"coilwright/winding/wire"
 )
 
 func ExampleStarPhases() {
@@ -24,13 +25,6 @@ func ExampleDeltaPhases() {
 	// U 1.000  V 2.000  W 3.000
 }
 
-func ExampleTo20C() {
-	// 0.1430 Ω read at 27 °C is 0.1392 Ω at 20 °C (IEC 60028 copper).
-	fmt.Printf("%.4f\n", verify.To20C(0.1430, 27))
-	// Output:
-	// 0.1392
-}
-
 func ExampleCheck() {
 	p, err := plan.Build(job.Demo())
 	if err != nil {
@@ -38,7 +32,7 @@ func ExampleCheck() {
 		return
 	}
 	// Phase U about 8 % low, read four-wire at 24 °C.
-	u, v := verify.AtTemp(0.92*p.PhaseResistance20C, 24), verify.AtTemp(p.PhaseResistance20C, 24)
+	u, v := wire.ResistanceAt(0.92*p.PhaseResistance20C, 24), wire.ResistanceAt(p.PhaseResistance20C, 24)
 	rep, err := verify.Check(p, verify.Readings{UV: u + v, VW: v + v, WU: v + u, TempC: 24, FourWire: true})
 	if err != nil {
 		fmt.Println(err)

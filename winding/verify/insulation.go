@@ -3,6 +3,8 @@ package verify
 import (
 	"fmt"
 	"math"
+
+	"coilwright/winding/plan"
 )
 
 // IEEE 43-2013 values (Table 3 and the polarization-index clause; from
@@ -50,7 +52,7 @@ func (c *checker) insulation() {
 	}
 	add := func(sev Verdict, msg string) {
 		res.Verdict = Worst(res.Verdict, sev)
-		c.add(Finding{Severity: sev, Test: "insulation", Message: msg})
+		c.add(Finding{Severity: sev, Test: plan.TestInsulation, Message: msg})
 	}
 	if res.IR1At40C < MinIRMOhm {
 		add(Fail, fmt.Sprintf("insulation resistance %s at %.0f V after 1 min is %s at 40 °C, below the %g MΩ minimum (IEEE 43-2013): damaged enamel or liner, moisture, or a coil touching the core; dry the winding and find the fault before any high-voltage test%s",
@@ -79,15 +81,8 @@ func (c *checker) insulation() {
 	}
 }
 
-func mohm(v float64) string {
-	switch {
-	case v >= 1000:
-		return fmt.Sprintf("%.3g GΩ", v/1000)
-	case v < 1:
-		return fmt.Sprintf("%.3g kΩ", v*1000)
-	}
-	return fmt.Sprintf("%.3g MΩ", v)
-}
+// mohm writes an insulation resistance (plan.FormatValue).
+func mohm(v float64) string { return plan.FormatValue(v, plan.UnitMegaohm) }
 
 // RecommendedWithstandV is the IEC 60034-1 (clause 9.2, table number from
 // memory) test voltage of a new winding of rated line voltage un (V rms) and
@@ -112,7 +107,7 @@ func (c *checker) withstand() {
 	}
 	add := func(sev Verdict, msg string) {
 		res.Verdict = Worst(res.Verdict, sev)
-		c.add(Finding{Severity: sev, Test: "withstand", Message: msg})
+		c.add(Finding{Severity: sev, Test: plan.TestHighVoltage, Message: msg})
 	}
 	if !w.Passed {
 		add(Fail, fmt.Sprintf("the withstand test at %.0f V failed: the insulation broke down or leaked past the trip current; find the fault (slot exits, lead end, separators) before the winding is used", w.Volts))

@@ -1,8 +1,6 @@
 package verify
 
 import (
-	"math"
-
 	"coilwright/winding/plan"
 )
 
@@ -26,10 +24,7 @@ func PerTest(p *plan.Plan, r Readings, rep *Report) []TestReading {
 	}
 	worst := map[string]Verdict{}
 	for _, f := range rep.Findings {
-		name := planTestOf(f.Test)
-		if name == "" {
-			continue
-		}
+		name := f.Test
 		if v, ok := worst[name]; ok {
 			worst[name] = Worst(v, f.Severity)
 		} else {
@@ -46,55 +41,13 @@ func PerTest(p *plan.Plan, r Readings, rep *Report) []TestReading {
 			}
 		}
 	}
-	values := func(name string) map[string]float64 {
-		out := map[string]float64{}
-		put := func(k string, v float64) {
-			if !math.IsInf(v, 0) && !math.IsNaN(v) {
-				out[k] = v
-			}
-		}
-		switch name {
-		case plan.TestResistance, plan.TestBalance:
-			if len(r.PerPhase) == 3 {
-				for i, n := range p.Layout.PhaseNames[:3] {
-					put(lowerASCII(n), r.PerPhase[i])
-				}
-			} else {
-				put("uv", r.UV)
-				put("vw", r.VW)
-				put("wu", r.WU)
-			}
-			put("temp", r.TempC)
-		case plan.TestInsulation:
-			if in := r.Insulation; in != nil {
-				put("ir1", in.IR1MOhm)
-				if in.IR10MOhm > 0 {
-					put("ir10", in.IR10MOhm)
-				}
-				put("volts", in.Volts)
-				put("temp", r.TempC)
-			}
-		case plan.TestHighVoltage:
-			if w := r.Withstand; w != nil {
-				put("volts", w.Volts)
-			}
-		case plan.TestBackEMF:
-			if e := r.EMF; e != nil {
-				put("uv", e.UV)
-				put("vw", e.VW)
-				put("wu", e.WU)
-				put("rpm", e.RPM)
-			}
-		}
-		return out
-	}
 	var out []TestReading
 	for _, t := range p.Tests {
 		v, ok := worst[t.Name]
 		if !ok {
 			continue
 		}
-		tr := TestReading{Test: t.Name, Values: values(t.Name), Verdict: v}
+		tr := TestReading{Test: t.Name, Values: ValuesOf(p, t, r), Verdict: v}
 		for _, s := range p.Steps {
 			if s.Kind == plan.StepTest && s.Test == t.Name {
 				tr.Step = s.Index
@@ -104,31 +57,4 @@ func PerTest(p *plan.Plan, r Readings, rep *Report) []TestReading {
 		out = append(out, tr)
 	}
 	return out
-}
-
-// planTestOf maps the test of a finding to the plan's test name.
-func planTestOf(findingTest string) string {
-	switch findingTest {
-	case "resistance":
-		return plan.TestResistance
-	case "balance":
-		return plan.TestBalance
-	case "insulation":
-		return plan.TestInsulation
-	case "withstand":
-		return plan.TestHighVoltage
-	case "back-emf":
-		return plan.TestBackEMF
-	}
-	return ""
-}
-
-func lowerASCII(s string) string {
-	b := []byte(s)
-	for i, c := range b {
-		if c >= 'A' && c <= 'Z' {
-			b[i] = c + 'a' - 'A'
-		}
-	}
-	return string(b)
 }

@@ -33,7 +33,7 @@ func Worst(a, b Verdict) Verdict {
 type Finding struct {
 	Severity Verdict `json:"severity"`
 	Phase    string  `json:"phase"` // "" when it concerns no single phase
-	Test     string  `json:"test"`  // "resistance", "balance", "insulation", "withstand", "back-emf"
+	Test     string  `json:"test"`  // the plan's test name: plan.TestResistance, plan.TestBalance, plan.TestInsulation, plan.TestHighVoltage, plan.TestBackEMF
 	Message  string  `json:"message"`
 	// Tooth names the one coil (by its tooth) a finding points at; Teeth
 	// lists them where it points at more than one, or at candidates.

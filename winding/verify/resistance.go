@@ -7,6 +7,8 @@ import (
 	"strings"
 
 	"coilwright/winding"
+	"coilwright/winding/plan"
+	"coilwright/winding/wire"
 )
 
 // openFactor: a converted phase above this multiple of the expected value is
@@ -26,7 +28,7 @@ func (c *checker) resistance() {
 			c.rep.Phases = append(c.rep.Phases, Phase{Phase: c.name(i), Open: true})
 			continue
 		}
-		r20[i] = To20C(v, c.r.TempC)
+		r20[i] = wire.To20(v, c.r.TempC)
 		dev := 100 * (r20[i]/exp20 - 1)
 		c.rep.Phases = append(c.rep.Phases, Phase{
 			Phase: c.name(i), OhmAtTemp: v, Ohm20C: r20[i], DeviationPercent: dev,
@@ -39,16 +41,16 @@ func (c *checker) resistance() {
 	}
 	for i, v := range ph {
 		if v <= 0.02*expT {
-			c.add(Finding{Severity: Fail, Phase: c.name(i), Test: "resistance", Message: fmt.Sprintf(
+			c.add(Finding{Severity: Fail, Phase: c.name(i), Test: plan.TestResistance, Message: fmt.Sprintf(
 				"the three readings fit no %s winding (phase %s computes to %.4g Ω): one reading is wrong or a phase is shorted to another; read again",
 				c.p.Connection, c.name(i), v)})
 			return
 		}
 	}
-	lo, hi := minMax(r20[:])
-	mean := (r20[0] + r20[1] + r20[2]) / 3
-	c.rep.ImbalancePercent = 100 * (hi - lo) / mean
-
+	// Imbalance as EASA AR100 states it: the largest deviation from the
+	// mean, over the mean (plan.ImbalancePercent).
+	imb, mean := plan.ImbalancePercent(r20[:])
+	c.rep.ImbalancePercent = imb
 	level := mean / exp20
 	good := []int{0, 1, 2}
 	if c.rep.ImbalancePercent > ImbalanceLimitPercent {
@@ -57,18 +59,10 @@ func (c *checker) resistance() {
 		level = ref / exp20
 		good = others(x)
 	} else {
-		c.add(Finding{Severity: Pass, Test: "balance", Message: fmt.Sprintf(
-			"phases balanced: %.2f %% between highest and lowest, within %.0f %% (EASA AR100)", c.rep.ImbalancePercent, ImbalanceLimitPercent)})
+		c.add(Finding{Severity: Pass, Test: plan.TestBalance, Message: fmt.Sprintf(
+			"phases balanced: the largest deviation from the mean is %.2f %%, within %.0f %% (EASA AR100)", c.rep.ImbalancePercent, ImbalanceLimitPercent)})
 	}
 	c.level(level, good)
-}
-
-func minMax(xs []float64) (lo, hi float64) {
-	lo, hi = xs[0], xs[0]
-	for _, x := range xs[1:] {
-		lo, hi = min(lo, x), max(hi, x)
-	}
-	return lo, hi
 }
 
 func others(x int) []int {
@@ -104,11 +98,11 @@ func (c *checker) openCircuit(open []int) {
 		if c.rep.Method == "per-phase" {
 			what = "no phase conducts: check the meter leads and range"
 		}
-		c.add(Finding{Severity: Fail, Test: "resistance", Message: "no reading shows continuity as a winding: " + what})
+		c.add(Finding{Severity: Fail, Test: plan.TestResistance, Message: "no reading shows continuity as a winding: " + what})
 		return
 	}
 	for _, i := range open {
-		c.add(Finding{Severity: Fail, Phase: c.name(i), Test: "resistance", Teeth: c.teethOf(i), Message: fmt.Sprintf(
+		c.add(Finding{Severity: Fail, Phase: c.name(i), Test: plan.TestResistance, Teeth: c.teethOf(i), Message: fmt.Sprintf(
 			"phase %s is open: a broken wire, enamel not stripped at a lead or joint, or a joint not made between %s1 and %s2; check continuity coil by coil (teeth %s)",
 			c.name(i), c.name(i), c.name(i), winding.NumberList(c.teethOf(i)))})
 	}
@@ -121,7 +115,7 @@ func (c *checker) pathGeometry(phase int) (a int, pathM, turnM float64, turns in
 	var lengths []float64
 	for _, pp := range c.p.Paths {
 		if pp.Phase == name {
-			lengths = append(lengths, pp.WireLengthM)
+			lengths = append(lengths, pp.LeadEndsLengthM) // what the meter reads across
 		}
 	}
 	turnM = c.p.MeanTurnLengthMM / 1000
@@ -153,7 +147,7 @@ func (c *checker) outlierFinding(x int, rx, ref float64, atTemp [3]float64) Find
 	if a > 1 {
 		inPath = " in one of its paths"
 	}
-	f := Finding{Severity: Fail, Phase: name, Test: "balance"}
+	f := Finding{Severity: Fail, Phase: name, Test: plan.TestBalance}
 	var causes []string
 	if ratio < 1 {
 		k := (1 - 1/g) * pathM / turnM
@@ -170,7 +164,7 @@ func (c *checker) outlierFinding(x int, rx, ref float64, atTemp [3]float64) Find
 			causes = append(causes, fmt.Sprintf("one of its %d parallel paths is open (%.3f× fits %d paths becoming %d): a broken wire or a path end not joined at the terminals", a, ratio, a, a-1))
 		}
 		dOhm := atTemp[x] - (atTemp[o[0]]+atTemp[o[1]])/2
-		causes = append(causes, fmt.Sprintf("a poor joint or crimp adding about %s", ohmText(dOhm)))
+		causes = append(causes, fmt.Sprintf("a poor joint or crimp adding about %s", ohm(dOhm)))
 		if g > 0 {
 			k := (1/g - 1) * pathM / turnM
 			causes = append(causes, fmt.Sprintf("about %.0f extra turns%s", k, inPath))
@@ -184,13 +178,6 @@ func (c *checker) outlierFinding(x int, rx, ref float64, atTemp [3]float64) Find
 		f.Message += fmt.Sprintf("; at %.3g Ω a two-wire meter's contact resistance matters: clean the leads, read again or use four-wire", c.rep.Expected.AtTemp)
 	}
 	return f
-}
-
-func ohmText(ohm float64) string {
-	if math.Abs(ohm) < 1 {
-		return fmt.Sprintf("%.0f mΩ", 1000*ohm)
-	}
-	return fmt.Sprintf("%.3g Ω", ohm)
 }
 
 func plural(n int, one, many string) string {
@@ -219,13 +206,13 @@ func (c *checker) level(level float64, good []int) {
 		who = "phases " + strings.Join(names, " and ")
 	}
 	if dev >= b.LowPercent && dev <= b.HighPercent {
-		c.add(Finding{Severity: Pass, Test: "resistance", Message: fmt.Sprintf(
-			"%s within the band %+.1f %% .. %+.1f %% of the plan's %s at 20 °C (%+.1f %%)", who, b.LowPercent, b.HighPercent, ohmText(c.p.PhaseResistance20C), dev)})
+		c.add(Finding{Severity: Pass, Test: plan.TestResistance, Message: fmt.Sprintf(
+			"%s within the band %+.1f %% .. %+.1f %% of the plan's %s at 20 °C (%+.1f %%)", who, b.LowPercent, b.HighPercent, ohm(c.p.PhaseResistance20C), dev)})
 		return
 	}
 	for _, rc := range c.ratioCauses() {
 		if math.Abs(level/rc.factor-1) < 0.08 {
-			c.add(Finding{Severity: Fail, Test: "resistance", Message: fmt.Sprintf(
+			c.add(Finding{Severity: Fail, Test: plan.TestResistance, Message: fmt.Sprintf(
 				"%s read about %s the plan (%.2f×): %s", who, factorText(rc.factor), level, rc.why)})
 			return
 		}
@@ -242,8 +229,8 @@ func (c *checker) level(level float64, good []int) {
 	if n := c.p.TurnsPerCoil; n > 0 {
 		causes = append(causes, fmt.Sprintf("about %.0f turns per coil instead of %d", float64(n)*level, n))
 	}
-	causes = append(causes, fmt.Sprintf("a winding at %.0f °C rather than the %.1f °C given", level*(copperInferredZeroC+t)-copperInferredZeroC, t))
-	c.add(Finding{Severity: sev, Test: "resistance", Message: fmt.Sprintf(
+	causes = append(causes, fmt.Sprintf("a winding at %.0f °C rather than the %.1f °C given", level*(wire.InferredZeroC+t)-wire.InferredZeroC, t))
+	c.add(Finding{Severity: sev, Test: plan.TestResistance, Message: fmt.Sprintf(
 		"%s read %.1f %% %s the plan, outside the band %+.1f %% .. %+.1f %%, and equally, so the cause is common to all: %s",
 		who, math.Abs(dev), map[bool]string{true: "below", false: "above"}[dev < 0], b.LowPercent, b.HighPercent, strings.Join(causes, "; or "))})
 }

@@ -3,6 +3,8 @@ package verify
 import (
 	"fmt"
 	"strings"
+
+	"coilwright/winding/plan"
 )
 
 // textWidth is the width findings are wrapped to.
@@ -102,16 +104,8 @@ func (r *Report) Text() string {
 	return b.String()
 }
 
-// ohm writes a resistance with a unit that keeps four significant figures.
-func ohm(v float64) string {
-	switch {
-	case v < 1:
-		return fmt.Sprintf("%.2f mΩ", 1000*v)
-	case v < 1000:
-		return fmt.Sprintf("%.4g Ω", v)
-	}
-	return fmt.Sprintf("%.4g kΩ", v/1000)
-}
+// ohm writes a resistance the one way the plan, the bench and the pack do.
+func ohm(v float64) string { return plan.FormatValue(v, plan.UnitOhm) }
 
 // wrap writes text after head, wrapped to textWidth with a hanging indent.
 func wrap(b *strings.Builder, head, text string) {

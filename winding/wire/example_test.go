@@ -23,3 +23,10 @@ func ExampleEnamelFor() {
 	fmt.Printf("0.500 mm grade 2: at most %.3f mm overall, bare ±%.3f mm\n", e.MaxOverallMM, e.TolMM)
 	// Output: 0.500 mm grade 2: at most 0.566 mm overall, bare ±0.005 mm
 }
+
+func ExampleTo20() {
+	// 0.1430 Ω read at 27 °C is 0.1392 Ω at 20 °C (IEC 60028 copper).
+	fmt.Printf("%.4f\n", wire.To20(0.1430, 27))
+	// Output:
+	// 0.1392
+}
