@@ -1,8 +1,10 @@
 package main
 
 import (
+	"bufio"
 	"bytes"
 	"encoding/json"
+	"io"
 	"math"
 	"strconv"
 	"strings"
@@ -159,4 +161,24 @@ func TestPairsTextMatchesJSON(t *testing.T) {
 			t.Errorf("text line %d %q; JSON has %d/%d q %s", i+1, lines[2+i], p.Slots, p.Poles, p.Q)
 		}
 	}
+}
+
+// The output half of pairs --json at Q, 2p <= 720: ranked rows written
+// through encoding/json row by row (the sweep itself is BenchmarkRankPairs).
+func BenchmarkPairsJSON720(b *testing.B) {
+	rows, err := winding.RankPairs(winding.Sweep{MaxSlots: 720, MaxPoles: 720, Layers: []int{1, 2}}, nil)
+	if err != nil {
+		b.Fatal(err)
+	}
+	b.ReportAllocs()
+	for b.Loop() {
+		w := bufio.NewWriterSize(io.Discard, 64<<10)
+		if err := writePairsJSON(w, rows); err != nil {
+			b.Fatal(err)
+		}
+		if err := w.Flush(); err != nil {
+			b.Fatal(err)
+		}
+	}
+	b.ReportMetric(float64(len(rows)), "pairs")
 }
