@@ -38,6 +38,7 @@ func ExampleBuild() {
 	// Slot map
 	// Developed layout
 	// Connections
+	// Design figures
 	// Cut list and materials
 	// Winding checklist
 	// Winding checklist (continued)

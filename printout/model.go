@@ -157,6 +157,7 @@ const (
 	SlotMapPage    PageKind = "slot-map"
 	DevelopedPage  PageKind = "developed-layout"
 	ConnectionPage PageKind = "connections"
+	FiguresPage    PageKind = "design-figures"
 	CutListPage    PageKind = "cut-list"
 	ChecklistPage  PageKind = "checklist"
 	TestRecordPage PageKind = "test-record"

@@ -38,8 +38,8 @@ type Reading struct {
 var ErrNoPlan = errors.New("printout: plan has no layout")
 
 // Build lays out the whole shop pack of a plan: slot map, developed layout,
-// connections, cut list and materials, winding checklist and test record, in
-// that order. It reads the plan only and does no I/O.
+// connections, design figures, cut list and materials, winding checklist and
+// test record, in that order. It reads the plan only and does no I/O.
 func Build(p *plan.Plan, o Options) (*Pack, error) {
 	if p == nil || p.Layout == nil || len(p.Layout.Coils) == 0 {
 		return nil, ErrNoPlan
@@ -62,6 +62,7 @@ func Build(p *plan.Plan, o Options) (*Pack, error) {
 	b.slotMap()
 	b.developed()
 	b.connections()
+	b.figures()
 	b.cutList()
 	b.checklist()
 	b.testRecord()

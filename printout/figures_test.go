@@ -1,0 +1,101 @@
+package printout
+
+import (
+	"fmt"
+	"math"
+	"slices"
+	"strings"
+	"testing"
+
+	"coilwright/printout/pdftext"
+	"coilwright/winding"
+)
+
+// The design figures sheet carries the four figures with their captions,
+// read back from the PDF.
+func TestFiguresCaptions(t *testing.T) {
+	p := demoPlan(t)
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pages, err := pdftext.Pages(render(t, pk))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var texts []string
+	for k, pg := range pk.Pages {
+		if pg.Kind == FiguresPage {
+			texts = append(texts, pages[k]...)
+		}
+	}
+	for _, want := range []string{"Figure 1. Star of slots.", "Figure 2. Harmonic spectrum.", "Figure 3. Slot cross-section.", "Figure 4. Lead-end view.", "sub-harmonics",
+		fmt.Sprintf("working order p = %d", p.Layout.Spec.PolePairs())} {
+		if !slices.Contains(texts, want) {
+			t.Errorf("design figures of the demo lack %q", want)
+		}
+	}
+}
+
+// Every coil's phasor is drawn and numbered by its tooth; the phase sums
+// lie 360/m degrees apart (a balanced winding: DESIGN.md phase sequence).
+func TestStarOfSlotsPhasors(t *testing.T) {
+	for i, fx := range fixtures {
+		t.Run(fx.name, func(t *testing.T) {
+			pk := buildFixture(t, i)
+			fig := pagesOf(pk, FiguresPage)[0]
+			l, _ := winding.Design(fx.spec)
+			numbers := map[string]bool{}
+			for _, s := range fig.Texts() {
+				for _, n := range strings.Split(s, ",") {
+					numbers[n] = true
+				}
+			}
+			if len(l.Coils) <= 48 {
+				for _, c := range l.Coils {
+					if !numbers[fmt.Sprint(c.Tooth)] {
+						t.Errorf("star of slots lacks the phasor of tooth %d", c.Tooth)
+					}
+				}
+			}
+			m := len(l.PhaseNames)
+			sums := make([]complex128, m)
+			for _, c := range l.Coils {
+				a := coilPhasor(c, fx.spec.Slots, fx.spec.Poles/2) * math.Pi / 180
+				sums[c.Phase] += complex(math.Cos(a), math.Sin(a))
+			}
+			for k := 1; k < m; k++ {
+				d := math.Mod((math.Atan2(imag(sums[k-1]), real(sums[k-1]))-math.Atan2(imag(sums[k]), real(sums[k])))*180/math.Pi+720, 360)
+				d = math.Min(d, 360-d)
+				if want := 360 / float64(m); math.Abs(d-want) > 0.01 && math.Abs(d-2*want) > 0.01 {
+					t.Errorf("phase sums %d and %d lie %.2f° apart; want %.0f° (or twice)", k-1, k, d, want)
+				}
+			}
+		})
+	}
+}
+
+// The lead-end view draws one arc per jumper of the plan.
+func TestLeadEndViewJumpers(t *testing.T) {
+	p := demoPlan(t)
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	fig := pagesOf(pk, FiguresPage)[0]
+	jumpers := 0
+	for _, st := range p.Steps {
+		if st.Jumper != nil {
+			jumpers++
+		}
+	}
+	arcs := 0
+	for _, s := range fig.Shapes {
+		if a, ok := s.(*Arc); ok && a.Sweep != 0 && math.Abs(a.Sweep) < 360 && a.Pen.Width == 0.5 {
+			arcs++
+		}
+	}
+	if jumpers == 0 || arcs != jumpers {
+		t.Errorf("lead-end view draws %d jumper arcs; want one per jumper, %d", arcs, jumpers)
+	}
+}
