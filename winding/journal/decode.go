@@ -6,21 +6,30 @@ import (
 	"fmt"
 )
 
-// TornTail describes a last line that could not be read: a write cut short
-// by a crash or power loss, or a garbled end. Everything before Offset is good.
+// TornTail describes a last line that was cut short: it lacks its newline
+// and does not decode, as a write interrupted by a crash or a power cut leaves
+// it. Everything before Offset is good.
 type TornTail struct {
 	Line   int    // 1-based line number of the torn line
 	Offset int64  // byte offset where the torn line starts
-	Bytes  int    // its length in bytes, newline included if there was one
+	Bytes  int    // its length in bytes
 	Reason string // why it could not be read
+	// KeptIn names the side file its bytes were copied to before they were
+	// cut from the record ("" when nothing was cut, as when only reading).
+	KeptIn string
 }
 
 func (t *TornTail) String() string {
-	return fmt.Sprintf("line %d (%d bytes at offset %d): %s", t.Line, t.Bytes, t.Offset, t.Reason)
+	s := fmt.Sprintf("line %d (%d bytes at offset %d): %s", t.Line, t.Bytes, t.Offset, t.Reason)
+	if t.KeptIn != "" {
+		s += "; its bytes are kept in " + t.KeptIn
+	}
+	return s
 }
 
-// DecodeError is a garbled line that is not the last: the record is damaged
-// and is not guessed at.
+// DecodeError is a line that cannot be read and was not cut short by a
+// crash (it is not the last, or it ends in a newline): the record is damaged
+// or was edited, and it is not guessed at.
 type DecodeError struct {
 	Line   int
 	Offset int64
@@ -33,10 +42,13 @@ func (e *DecodeError) Error() string {
 
 func (e *DecodeError) Unwrap() error { return e.Err }
 
-// Decode reads a record. Blank lines are skipped. A last line that does not
-// decode (torn or garbled) is left out and reported in torn; a bad line before
-// the last is a *DecodeError. A last line that decodes but lacks its newline is
-// kept (the write finished but for the newline).
+// Decode reads a record. Blank lines are skipped. A last line without its
+// newline that does not decode is a torn write: it is left out and reported
+// in torn. Any other line that does not decode, or holds a value beyond the
+// record's bounds, is a *DecodeError naming it. A last line that decodes but
+// lacks its newline is kept (the write finished but for the newline). Text
+// fields come back cleaned of control characters, and each event carries its
+// line number.
 func Decode(data []byte) (events []Event, torn *TornTail, err error) {
 	var off int64
 	line := 0
@@ -50,15 +62,15 @@ func Decode(data []byte) (events []Event, torn *TornTail, err error) {
 		} else {
 			text = data[:n]
 		}
-		last := size == len(data)
 		if len(bytes.TrimSpace(text)) > 0 {
 			e, perr := parseLine(text)
 			if perr != nil {
-				if last {
+				if n < 0 {
 					return events, &TornTail{Line: line, Offset: off, Bytes: size, Reason: perr.Error()}, nil
 				}
 				return events, nil, &DecodeError{Line: line, Offset: off, Err: perr}
 			}
+			e.Line = line
 			events = append(events, e)
 		}
 		data = data[size:]
@@ -72,6 +84,7 @@ func parseLine(text []byte) (Event, error) {
 	if err := json.Unmarshal(text, &e); err != nil {
 		return Event{}, err
 	}
+	e = e.cleaned()
 	if err := e.Validate(); err != nil {
 		return Event{}, err
 	}

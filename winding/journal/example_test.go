@@ -6,23 +6,10 @@ import (
 	"coilwright/winding/journal"
 )
 
-func ExampleReplay() {
-	events := []journal.Event{
-		{Seq: 1, Kind: journal.Done, Step: 1},
-		{Seq: 2, Kind: journal.Turns, Step: 2, Tooth: 1, Turns: 9},
-		{Seq: 3, Kind: journal.Done, Step: 2, Tooth: 1, Turns: 24},
-		{Seq: 4, Kind: journal.Turns, Step: 3, Tooth: 4, Turns: 15},
-	}
-	st := journal.Replay(events)
-	fmt.Println("done:", st.Done)
-	fmt.Println("current step:", st.Current(30))
-	fmt.Println("turns so far:", st.InProgress[st.Current(30)])
-	fmt.Println("tooth 1 has", st.CoilTurns[1], "turns")
+func ExampleClean() {
+	fmt.Printf("%q\n", journal.Clean("sleeved\x1b]0;pwned\x07 at slot 12\r\n"))
 	// Output:
-	// done: [1 2]
-	// current step: 3
-	// turns so far: 15
-	// tooth 1 has 24 turns
+	// "sleeved]0;pwned at slot 12  "
 }
 
 func ExampleDecode() {

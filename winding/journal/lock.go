@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
+	"io"
 	"os"
 	"time"
 )
@@ -16,7 +17,7 @@ type LockInfo struct {
 	Since  time.Time `json:"since"`
 }
 
-// LockedError refuses a record that another live program holds.
+// LockedError refuses a record that another running program holds.
 type LockedError struct {
 	Path string   // the lock file
 	Info LockInfo // its holder; empty when the lock file could not be read
@@ -25,10 +26,10 @@ type LockedError struct {
 func (e *LockedError) Error() string {
 	i := e.Info
 	if i.Holder == "" && i.PID == 0 {
-		return fmt.Sprintf("journal: the record is locked (%s cannot be read); if no other coilwright is running, delete it", e.Path)
+		return fmt.Sprintf("journal: the record is in use by another program (it holds %s); close that program first", e.Path)
 	}
-	return fmt.Sprintf("journal: the record is in use by %q (pid %d on %s since %s); close that first, or if it has died on another machine delete %s",
-		i.Holder, i.PID, i.Host, i.Since.Format(time.RFC3339), e.Path)
+	return fmt.Sprintf("journal: the record is in use by %q (pid %d on %s since %s); close that first",
+		i.Holder, i.PID, i.Host, i.Since.Format(time.RFC3339))
 }
 
 // ErrLocked matches every *LockedError with errors.Is.
@@ -40,72 +41,108 @@ func (e *LockedError) Is(target error) bool { return target == ErrLocked }
 type lockFile struct {
 	path string
 	f    *os.File
+	// stale is the holder named by a lock file whose kernel lock was free
+	// when it was taken (a program that died without releasing it).
+	stale *LockInfo
 }
 
-// acquire creates the lock file with O_EXCL and takes flock on it. An existing
-// lock whose holder is a dead process on this host, and whose flock is free,
-// is stale and taken over once.
+// acquire takes the lock of a record. Where the platform has flock the
+// kernel lock on the lock file decides: a lock file whose flock is free is
+// stale, whatever process it names, and is taken as it is (never deleted
+// first, so two starters cannot both win); after flock succeeds the file is
+// checked to still be the one at path, since a holder removes it on release.
+// Elsewhere the lock file is created with O_EXCL and never taken over.
 func acquire(path, holder string) (*lockFile, error) {
 	host, _ := os.Hostname()
 	info := LockInfo{Holder: holder, PID: os.Getpid(), Host: host, Since: time.Now().UTC().Truncate(time.Second)}
-	for attempt := 0; ; attempt++ {
-		f, err := os.OpenFile(path, os.O_RDWR|os.O_CREATE|os.O_EXCL, 0o644)
-		if err == nil {
-			if err := flock(f); err != nil {
-				f.Close()
-				os.Remove(path)
-				return nil, &LockedError{Path: path}
-			}
-			b, _ := json.Marshal(info)
-			if _, err := f.Write(append(b, '\n')); err != nil {
-				f.Close()
-				os.Remove(path)
-				return nil, fmt.Errorf("journal: write lock %s: %w", path, err)
-			}
-			f.Sync()
-			return &lockFile{path: path, f: f}, nil
-		}
-		if !errors.Is(err, os.ErrExist) {
+	if !haveFlock {
+		return acquireExclusive(path, info)
+	}
+	for attempt := 0; attempt < 8; attempt++ {
+		f, err := os.OpenFile(path, os.O_RDWR|os.O_CREATE, 0o644)
+		if err != nil {
 			return nil, fmt.Errorf("journal: lock %s: %w", path, err)
 		}
-		old, stale := inspect(path, host)
-		if !stale || attempt > 0 {
+		if err := flock(f); err != nil {
+			old := readLockInfo(f)
+			f.Close()
 			return nil, &LockedError{Path: path, Info: old}
 		}
-		if err := os.Remove(path); err != nil && !errors.Is(err, os.ErrNotExist) {
-			return nil, fmt.Errorf("journal: remove stale lock %s: %w", path, err)
+		held, err1 := f.Stat()
+		at, err2 := os.Stat(path)
+		if err1 != nil || err2 != nil || !os.SameFile(held, at) {
+			// The holder released it (and removed the file) between our
+			// open and our flock: try again on the file now at path.
+			funlock(f)
+			f.Close()
+			continue
 		}
+		lk := &lockFile{path: path, f: f}
+		if old := readLockInfo(f); old.PID != 0 || old.Holder != "" {
+			lk.stale = &old
+		}
+		if err := writeLockInfo(f, info); err != nil {
+			lk.release()
+			return nil, fmt.Errorf("journal: write lock %s: %w", path, err)
+		}
+		return lk, nil
 	}
+	return nil, &LockedError{Path: path}
 }
 
-// inspect reads a lock file and says whether it is stale: written on this
-// host by a process that no longer runs, with nobody holding its flock.
-func inspect(path, host string) (LockInfo, bool) {
-	var info LockInfo
-	data, err := os.ReadFile(path)
-	if err != nil || json.Unmarshal(data, &info) != nil {
-		return info, false
+// acquireExclusive is the lock where there is no flock: the lock file is
+// created with O_EXCL, and one that exists refuses the record.
+func acquireExclusive(path string, info LockInfo) (*lockFile, error) {
+	f, err := os.OpenFile(path, os.O_RDWR|os.O_CREATE|os.O_EXCL, 0o644)
+	if errors.Is(err, os.ErrExist) {
+		var old LockInfo
+		if data, rerr := os.ReadFile(path); rerr == nil {
+			json.Unmarshal(data, &old)
+		}
+		return nil, &LockedError{Path: path, Info: old}
 	}
-	if info.Host != host || info.PID <= 0 || processAlive(info.PID) {
-		return info, false
-	}
-	f, err := os.Open(path)
 	if err != nil {
-		return info, false
+		return nil, fmt.Errorf("journal: lock %s: %w", path, err)
 	}
-	defer f.Close()
-	if flock(f) != nil {
-		return info, false
+	lk := &lockFile{path: path, f: f}
+	if err := writeLockInfo(f, info); err != nil {
+		lk.release()
+		return nil, fmt.Errorf("journal: write lock %s: %w", path, err)
 	}
-	funlock(f)
-	return info, true
+	return lk, nil
 }
 
+func readLockInfo(f *os.File) LockInfo {
+	var info LockInfo
+	data, err := io.ReadAll(io.NewSectionReader(f, 0, 1<<16))
+	if err == nil {
+		json.Unmarshal(data, &info)
+	}
+	return info
+}
+
+func writeLockInfo(f *os.File, info LockInfo) error {
+	b, _ := json.Marshal(info)
+	if err := f.Truncate(0); err != nil {
+		return err
+	}
+	if _, err := f.WriteAt(append(b, '\n'), 0); err != nil {
+		return err
+	}
+	return f.Sync()
+}
+
+// release removes the lock file, while still holding it and only when it is
+// still the file this lock holds, then lets go of the kernel lock.
 func (l *lockFile) release() {
 	if l == nil || l.f == nil {
 		return
 	}
-	os.Remove(l.path)
+	held, err1 := l.f.Stat()
+	at, err2 := os.Stat(l.path)
+	if err1 == nil && err2 == nil && os.SameFile(held, at) {
+		os.Remove(l.path)
+	}
 	funlock(l.f)
 	l.f.Close()
 	l.f = nil

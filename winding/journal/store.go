@@ -1,6 +1,7 @@
 package journal
 
 import (
+	"bytes"
 	"errors"
 	"fmt"
 	"io"
@@ -17,15 +18,44 @@ func PathFor(jobPath string) string { return jobPath + ".progress" }
 // LockPathFor returns the lock file of a record.
 func LockPathFor(recordPath string) string { return recordPath + ".lock" }
 
+// Resolve names a record by the file it is, not by how it was written: the
+// absolute path with every symbolic link followed (for a record not yet
+// written, its folder's). Two paths to one record resolve alike, so they
+// share one lock.
+func Resolve(path string) string {
+	if abs, err := filepath.Abs(path); err == nil {
+		path = abs
+	}
+	if r, err := filepath.EvalSymlinks(path); err == nil {
+		return r
+	}
+	if r, err := filepath.EvalSymlinks(filepath.Dir(path)); err == nil {
+		return filepath.Join(r, filepath.Base(path))
+	}
+	return path
+}
+
 // Store appends events to one record file under an exclusive lock. It is not
 // safe for concurrent use by several goroutines.
+//
+// Before each write it checks that the file at its path is still the one it
+// holds. When the record was removed, replaced or moved by another program
+// (an editor, a sync tool, a backup), it writes the record again from the
+// events it holds in memory, keeps whatever stood at the path in a side file,
+// and says so in a notice (Notices). Bytes it cuts from the end of the record
+// (a torn last line, lines appended by another program) are first copied to a
+// side file.
 type Store struct {
-	path    string
+	path    string // resolved
 	lock    *lockFile
-	f       file  // nil when the file must be (re)opened
-	size    int64 // bytes of good, synced lines
+	f       file        // nil when the file must be (re)opened
+	ident   os.FileInfo // the record file as last written or read; nil before it exists
+	size    int64       // bytes of good, synced lines
+	ownTail bool        // bytes past size are a write of ours cut short
+	events  []Event     // every event in the record, in order
 	nextSeq int
 	pending []Event
+	notices []string
 	// needNewline: the last good line lacks its newline; written before the next line.
 	needNewline bool
 	now         func() time.Time
@@ -35,6 +65,7 @@ type Store struct {
 // file is what Store needs of an open record.
 type file interface {
 	io.Writer
+	io.ReaderAt
 	Sync() error
 	Truncate(size int64) error
 	Seek(offset int64, whence int) (int64, error)
@@ -89,10 +120,13 @@ func (e *WriteError) Unwrap() error { return e.Err }
 
 // Open locks the record at path for holder (a short name for who writes:
 // "bench", "check") and reads it. A missing record is an empty one; the file is
-// created by the first Append. A torn last line is reported and cut off before
-// anything is appended. A record locked by a live holder is refused with a
-// *LockedError; a lock left by a dead process on this host is taken over.
+// created by the first Append. A torn last line (cut short, without its
+// newline) is reported, its bytes copied to a side file named in the report,
+// and cut off before anything is appended. A record locked by a running
+// program is refused with a *LockedError; a lock file nobody holds is stale
+// and taken, whatever process it names.
 func Open(path, holder string) (*Store, []Event, *TornTail, error) {
+	path = Resolve(path)
 	lk, err := acquire(LockPathFor(path), holder)
 	if err != nil {
 		return nil, nil, nil, err
@@ -107,10 +141,20 @@ func Open(path, holder string) (*Store, []Event, *TornTail, error) {
 		lk.release()
 		return nil, nil, nil, fmt.Errorf("journal: %s: %w", path, err)
 	}
-	s := &Store{path: path, lock: lk, size: int64(len(data)), now: time.Now, open: openRecord}
+	s := &Store{path: path, lock: lk, size: int64(len(data)), now: time.Now, open: openRecord, events: events}
+	if fi, err := os.Stat(path); err == nil {
+		s.ident = fi
+	}
 	switch n := len(data); {
 	case torn != nil:
+		side, err := keepAside(path, "cut", data[torn.Offset:])
+		if err != nil {
+			lk.release()
+			return nil, nil, nil, fmt.Errorf("journal: %s: the last line (%d) is cut short and could not be kept aside before cutting it: %w", path, torn.Line, err)
+		}
+		torn.KeptIn = side
 		s.size = torn.Offset // cut off by the first write
+		s.ownTail = true     // its bytes are safe in the side file
 	case n > 0 && data[n-1] != '\n':
 		s.needNewline = true // the last event is whole but its newline was lost
 	}
@@ -121,25 +165,33 @@ func Open(path, holder string) (*Store, []Event, *TornTail, error) {
 	return s, events, torn, nil
 }
 
-// Path returns the record's path.
+// Path returns the record's path, symbolic links resolved.
 func (s *Store) Path() string { return s.path }
 
-// Append writes one event and syncs it. Seq and Time are filled when zero.
-// An invalid event is refused with an *EventError and not kept. When the
-// write fails the event is kept as pending and a *WriteError is returned;
-// pending events are written, in order, before the next one.
-func (s *Store) Append(e Event) error {
-	if e.Seq == 0 {
-		e.Seq = s.nextSeq
+// Append writes events and syncs them once. Seq and Time are filled when
+// zero. An invalid event is refused with an *EventError and none of the
+// events is kept. When the write fails the events are kept as pending and a
+// *WriteError is returned; pending events are written, in order, before the
+// next ones.
+func (s *Store) Append(events ...Event) error {
+	batch := make([]Event, 0, len(events))
+	seq := s.nextSeq
+	for _, e := range events {
+		if e.Seq == 0 {
+			e.Seq = seq
+		}
+		if e.Time.IsZero() {
+			e.Time = s.now()
+		}
+		e = e.cleaned()
+		if _, err := Line(e); err != nil {
+			return err
+		}
+		seq = max(seq, e.Seq) + 1
+		batch = append(batch, e)
 	}
-	if e.Time.IsZero() {
-		e.Time = s.now()
-	}
-	if _, err := Line(e); err != nil {
-		return err
-	}
-	s.nextSeq = max(s.nextSeq, e.Seq) + 1
-	s.pending = append(s.pending, e)
+	s.nextSeq = seq
+	s.pending = append(s.pending, batch...)
 	return s.flush()
 }
 
@@ -148,6 +200,15 @@ func (s *Store) Retry() error { return s.flush() }
 
 // Pending returns the events kept in memory, not yet written.
 func (s *Store) Pending() []Event { return append([]Event(nil), s.pending...) }
+
+// Notices returns what the store had to do about the file since the last
+// call (a record written again after it was removed or replaced, bytes kept
+// in a side file), in words, and forgets them.
+func (s *Store) Notices() []string {
+	n := s.notices
+	s.notices = nil
+	return n
+}
 
 // Close writes what is pending, closes the record and releases the lock. The
 // lock is released even when pending events could not be written; the error
@@ -169,30 +230,111 @@ func (s *Store) flush() error {
 	if s.lock == nil {
 		return &WriteError{Path: s.path, Pending: len(s.pending), Err: errors.New("the store is closed")}
 	}
+	if gone, err := s.changedUnderUs(); err != nil {
+		return &WriteError{Path: s.path, Pending: len(s.pending), Err: err}
+	} else if gone != "" {
+		if err := s.rewrite(gone); err != nil {
+			return &WriteError{Path: s.path, Pending: len(s.pending), Err: err}
+		}
+		return nil
+	}
 	if err := s.reopen(); err != nil {
 		s.drop()
 		return &WriteError{Path: s.path, Pending: len(s.pending), Err: err}
 	}
-	for len(s.pending) > 0 {
-		line, err := Line(s.pending[0])
-		if err == nil {
-			_, err = s.f.Write(line)
-		}
-		if err == nil {
-			err = s.f.Sync()
-		}
+	var buf bytes.Buffer
+	for _, e := range s.pending {
+		line, err := Line(e)
 		if err != nil {
-			s.drop() // a partial line is cut off when the file is reopened
 			return &WriteError{Path: s.path, Pending: len(s.pending), Err: err}
 		}
-		s.size += int64(len(line))
-		s.pending = s.pending[1:]
+		buf.Write(line)
+	}
+	_, err := s.f.Write(buf.Bytes())
+	if err == nil {
+		err = s.f.Sync()
+	}
+	if err != nil {
+		s.drop() // a partial write of ours is cut off when the file is reopened
+		s.ownTail = true
+		return &WriteError{Path: s.path, Pending: len(s.pending), Err: err}
+	}
+	s.size += int64(buf.Len())
+	s.events = append(s.events, s.pending...)
+	s.pending = nil
+	if fi, err := s.f.Stat(); err == nil {
+		s.ident = fi
 	}
 	return nil
 }
 
+// changedUnderUs says, in words, how the file at the path is no longer the
+// record this store holds ("" when it still is).
+func (s *Store) changedUnderUs() (string, error) {
+	at, err := os.Stat(s.path)
+	switch {
+	case errors.Is(err, os.ErrNotExist):
+		if s.ident == nil {
+			return "", nil // not written yet
+		}
+		return "was removed or moved away", nil
+	case err != nil:
+		return "", err
+	case s.ident == nil:
+		return "was created by another program", nil
+	case !os.SameFile(s.ident, at):
+		return "was replaced by another file", nil
+	case at.Size() < s.size:
+		return fmt.Sprintf("was cut to %d bytes by another program (it had %d)", at.Size(), s.size), nil
+	}
+	return "", nil
+}
+
+// rewrite writes the whole record again from memory, after what stood at
+// the path is kept aside: into a temporary file in the same folder, synced,
+// then renamed over the path.
+func (s *Store) rewrite(how string) error {
+	s.drop()
+	kept := ""
+	if _, err := os.Stat(s.path); err == nil {
+		side, err := sideName(s.path, "replaced")
+		if err != nil {
+			return err
+		}
+		if err := os.Rename(s.path, side); err != nil {
+			return fmt.Errorf("the record %s; keeping that file aside failed: %w", how, err)
+		}
+		kept = side
+	}
+	all := append(append([]Event(nil), s.events...), s.pending...)
+	var buf bytes.Buffer
+	for _, e := range all {
+		line, err := Line(e)
+		if err != nil {
+			return err
+		}
+		buf.Write(line)
+	}
+	if err := WriteFileAtomic(s.path, buf.Bytes(), 0o644); err != nil {
+		return fmt.Errorf("the record %s; writing it again failed: %w", how, err)
+	}
+	fi, err := os.Stat(s.path)
+	if err != nil {
+		return err
+	}
+	s.ident, s.size, s.needNewline, s.ownTail = fi, int64(buf.Len()), false, false
+	s.events, s.pending = all, nil
+	msg := fmt.Sprintf("The progress record %s %s while open; it was written again from the work in memory (%d entries)", s.path, how, len(all))
+	if kept != "" {
+		msg += "; the file that stood there is kept as " + kept
+	}
+	s.notices = append(s.notices, msg+".")
+	return nil
+}
+
 // reopen makes sure the record is open, holds only good lines, and is
-// positioned at its end.
+// positioned at its end. Bytes past the good lines that are not a write of
+// ours cut short are copied to a side file before they are cut.
 func (s *Store) reopen() error {
 	if s.f == nil {
 		f, err := s.open(s.path)
@@ -209,6 +351,17 @@ func (s *Store) reopen() error {
 		return fmt.Errorf("the record is %d bytes, shorter than the %d already written: another program changed it", fi.Size(), s.size)
 	}
 	if fi.Size() > s.size {
+		if !s.ownTail {
+			extra := make([]byte, fi.Size()-s.size)
+			if _, err := s.f.ReadAt(extra, s.size); err != nil && !errors.Is(err, io.EOF) {
+				return err
+			}
+			side, err := keepAside(s.path, "cut", extra)
+			if err != nil {
+				return fmt.Errorf("%d bytes were added to the record by another program and could not be kept aside: %w", len(extra), err)
+			}
+			s.notices = append(s.notices, fmt.Sprintf("%d bytes added to the progress record by another program were cut from it and kept in %s.", len(extra), side))
+		}
 		if err := s.f.Truncate(s.size); err != nil {
 			return err
 		}
@@ -216,6 +369,7 @@ func (s *Store) reopen() error {
 			return err
 		}
 	}
+	s.ownTail = false
 	if _, err := s.f.Seek(s.size, io.SeekStart); err != nil {
 		return err
 	}

@@ -64,3 +64,77 @@ func TestStoreWriteFailureKeepsPending(t *testing.T) {
 		}
 	}
 }
+
+// syncCounter counts the fsyncs of the record.
+type syncCounter struct {
+	*os.File
+	n *int
+}
+
+func (f syncCounter) Sync() error { *f.n++; return f.File.Sync() }
+
+// A batch of events is written together and synced once.
+func TestStoreOneSyncPerBatch(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	s, _, _, err := Open(path, "test")
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer s.Close()
+	syncs := 0
+	s.open = func(p string) (file, error) {
+		f, err := openRecord(p)
+		if err != nil {
+			return nil, err
+		}
+		return syncCounter{f.(*os.File), &syncs}, nil
+	}
+	batch := make([]Event, 60)
+	for i := range batch {
+		batch[i] = Event{Kind: Turns, Step: 2, Tooth: 1, Turns: i + 1}
+	}
+	if err := s.Append(batch...); err != nil {
+		t.Fatal(err)
+	}
+	if syncs != 1 {
+		t.Errorf("Append(60 events) synced %d times; want 1", syncs)
+	}
+	if err := s.Append(Event{Kind: Done, Step: 2, Tooth: 1, Turns: 60}); err != nil || syncs != 2 {
+		t.Errorf("Append(1 event) err %v, syncs %d; want 2 in all", err, syncs)
+	}
+}
+
+// fullTemp is a temporary file on a full disk: it takes half of a write.
+type fullTemp struct{ *os.File }
+
+func (f fullTemp) Write(p []byte) (int, error) {
+	n, _ := f.File.Write(p[:len(p)/2])
+	return n, syscall.ENOSPC
+}
+
+// On a full disk the file at the path stays whole, and no temporary file is
+// left behind.
+func TestWriteFileAtomicFullDisk(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "pack.pdf")
+	os.WriteFile(path, []byte("the good old pack"), 0o644)
+	err := writeFileAtomic(path, []byte("a new pack, much longer than the old one"), 0o644, func(d, p string) (fullTemp, error) {
+		f, err := os.CreateTemp(d, p)
+		return fullTemp{f}, err
+	})
+	if !errors.Is(err, syscall.ENOSPC) {
+		t.Fatalf("writeFileAtomic on a full disk err = %v; want ENOSPC", err)
+	}
+	if b, _ := os.ReadFile(path); string(b) != "the good old pack" {
+		t.Errorf("file after a failed write = %q; want the old one whole", b)
+	}
+	if left, _ := os.ReadDir(dir); len(left) != 1 {
+		t.Errorf("folder holds %d files after the failure; want only the old one", len(left))
+	}
+	if err := WriteFileAtomic(path, []byte("new"), 0o600); err != nil {
+		t.Fatal(err)
+	}
+	if b, _ := os.ReadFile(path); string(b) != "new" {
+		t.Errorf("file after WriteFileAtomic = %q; want new", b)
+	}
+}

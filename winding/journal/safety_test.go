@@ -1,0 +1,250 @@
+package journal_test
+
+import (
+	"errors"
+	"os"
+	"path/filepath"
+	"strings"
+	"sync"
+	"sync/atomic"
+	"testing"
+
+	"coilwright/winding/journal"
+)
+
+func openT(t *testing.T, path string) *journal.Store {
+	t.Helper()
+	s, _, _, err := journal.Open(path, "test")
+	if err != nil {
+		t.Fatal(err)
+	}
+	t.Cleanup(func() { s.Close() })
+	return s
+}
+
+func decodeFile(t *testing.T, path string) []journal.Event {
+	t.Helper()
+	data, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ev, torn, err := journal.Decode(data)
+	if err != nil || torn != nil {
+		t.Fatalf("Decode(%s) torn %v, err %v", path, torn, err)
+	}
+	return ev
+}
+
+// A record removed, replaced by rename (as editors and sync tools do) or cut
+// short under an open store is written again from memory, with a notice; the
+// file that stood at the path is kept aside.
+func TestStoreNoticesRecordChangedUnderIt(t *testing.T) {
+	cases := []struct {
+		name   string
+		change func(t *testing.T, path string)
+		kept   bool // a foreign file is kept aside
+		how    string
+	}{
+		{"removed", func(t *testing.T, path string) { os.Remove(path) }, false, "removed"},
+		{"moved away", func(t *testing.T, path string) { os.Rename(path, path+".bak") }, false, "removed or moved"},
+		{"replaced by rename", func(t *testing.T, path string) {
+			tmp := path + ".new"
+			os.WriteFile(tmp, []byte(`{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}`+"\n"), 0o644)
+			os.Rename(tmp, path)
+		}, true, "replaced"},
+		{"cut short in place", func(t *testing.T, path string) { os.Truncate(path, 10) }, true, "cut to 10 bytes"},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			path := filepath.Join(t.TempDir(), "job.toml.progress")
+			s := openT(t, path)
+			for i := 1; i <= 3; i++ {
+				if err := s.Append(journal.Event{Kind: journal.Turns, Step: 2, Tooth: 1, Turns: i}); err != nil {
+					t.Fatal(err)
+				}
+			}
+			c.change(t, path)
+			if err := s.Append(journal.Event{Kind: journal.Turns, Step: 2, Tooth: 1, Turns: 4}); err != nil {
+				t.Fatalf("Append after the record was %s err = %v; want it written again", c.name, err)
+			}
+			n := s.Notices()
+			if len(n) != 1 || !strings.Contains(n[0], c.how) || !strings.Contains(n[0], "written again") {
+				t.Fatalf("Notices() = %q; want one saying the record %s and was written again", n, c.how)
+			}
+			if got := decodeFile(t, path); len(got) != 4 || got[3].Turns != 4 {
+				t.Fatalf("record after %s = %d events; want all 4 turns entries", c.name, len(got))
+			}
+			side, _ := filepath.Glob(path + ".replaced-*")
+			if c.kept != (len(side) == 1) {
+				t.Errorf("side files %v; want one: %v", side, c.kept)
+			}
+			if c.kept && !strings.Contains(n[0], side[0]) {
+				t.Errorf("notice %q does not name the side file %s", n[0], side[0])
+			}
+			// Later writes go to the new file, without another notice.
+			if err := s.Append(journal.Event{Kind: journal.Done, Step: 2, Tooth: 1, Turns: 4}); err != nil {
+				t.Fatal(err)
+			}
+			if n := s.Notices(); len(n) != 0 {
+				t.Errorf("Notices() after a normal write = %q; want none", n)
+			}
+			if got := decodeFile(t, path); len(got) != 5 {
+				t.Errorf("record = %d events; want 5", len(got))
+			}
+		})
+	}
+}
+
+// Lines appended by another program are cut from the record before the next
+// write, but only after they were copied to a side file.
+func TestStoreKeepsForeignBytesAside(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	s := openT(t, path)
+	s.Append(journal.Event{Kind: journal.Done, Step: 1})
+	f, _ := os.OpenFile(path, os.O_APPEND|os.O_WRONLY, 0)
+	f.WriteString("hand-typed line\n")
+	f.Close()
+	if err := s.Append(journal.Event{Kind: journal.Done, Step: 2}); err != nil {
+		t.Fatal(err)
+	}
+	n := s.Notices()
+	side, _ := filepath.Glob(path + ".cut-*")
+	if len(side) != 1 || len(n) != 1 || !strings.Contains(n[0], side[0]) {
+		t.Fatalf("side files %v, notices %q; want one side file, named", side, n)
+	}
+	if b, _ := os.ReadFile(side[0]); string(b) != "hand-typed line\n" {
+		t.Errorf("side file holds %q; want the foreign line", b)
+	}
+	if got := decodeFile(t, path); len(got) != 2 {
+		t.Errorf("record = %d events; want 2", len(got))
+	}
+}
+
+// A torn last line (no newline) is copied to a side file named in the
+// report before it is cut; a damaged last line that ends in a newline is
+// refused with its line number and the record left as it is.
+func TestStoreTornTailKeptAside(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "job.toml.progress")
+	good := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}` + "\n"
+	os.WriteFile(path, []byte(good+`{"seq":2,"kind":"tu`), 0o644)
+	s, ev, torn, err := journal.Open(path, "test")
+	if err != nil || len(ev) != 1 || torn == nil || torn.KeptIn == "" {
+		t.Fatalf("Open(torn) = %d events, torn %v, err %v; want 1 and the tail kept aside", len(ev), torn, err)
+	}
+	if b, _ := os.ReadFile(torn.KeptIn); string(b) != `{"seq":2,"kind":"tu` {
+		t.Errorf("side file %s holds %q; want the torn bytes", torn.KeptIn, b)
+	}
+	if !strings.Contains(torn.String(), torn.KeptIn) {
+		t.Errorf("torn.String() = %q; want the side file named", torn)
+	}
+	s.Append(journal.Event{Kind: journal.Done, Step: 2})
+	s.Close()
+	if got := decodeFile(t, path); len(got) != 2 {
+		t.Errorf("record = %d events; want 2", len(got))
+	}
+
+	flipped := good + `{"seq":2,"time":"2025-03-08T09:00:00Z","kind":"done","step":2}` + "\n"
+	flipped = flipped[:len(flipped)-10] + "\x01" + flipped[len(flipped)-9:]
+	os.WriteFile(path, []byte(flipped), 0o644)
+	_, _, _, err = journal.Open(path, "test")
+	var de *journal.DecodeError
+	if !errors.As(err, &de) || de.Line != 2 {
+		t.Fatalf("Open(flipped byte in the last line) err = %v; want a DecodeError on line 2", err)
+	}
+	if b, _ := os.ReadFile(path); string(b) != flipped {
+		t.Errorf("the damaged record was changed")
+	}
+}
+
+// Values beyond any coil or meter are refused with their line number.
+func TestDecodeBoundsValues(t *testing.T) {
+	cases := []struct{ name, line string }{
+		{"absurd turns", `{"seq":2,"kind":"done","step":2,"tooth":1,"turns":9e18}`},
+		{"turns past the bound", `{"seq":2,"kind":"turns","step":2,"tooth":1,"turns":100000}`},
+		{"huge step", `{"seq":2,"kind":"done","step":2000000}`},
+		{"huge seq", `{"seq":9000000000000000000,"kind":"done","step":2}`},
+		{"huge reading", `{"seq":2,"kind":"reading","test":"resistance","readings":{"uv":1e300}}`},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			data := `{"seq":1,"kind":"done","step":1}` + "\n" + c.line + "\n" + `{"seq":3,"kind":"done","step":3}` + "\n"
+			_, _, err := journal.Decode([]byte(data))
+			var de *journal.DecodeError
+			if !errors.As(err, &de) || de.Line != 2 {
+				t.Errorf("Decode(%s) err = %v; want a DecodeError on line 2", c.name, err)
+			}
+		})
+	}
+}
+
+// Control characters never get into a record nor out of one.
+func TestNotesCleanedInAndOut(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	s := openT(t, path)
+	evil := "sleeved\x1b]0;owned\x07\x1b[2J at slot\u009b12"
+	if err := s.Append(journal.Event{Kind: journal.Note, Step: 2, Note: evil}); err != nil {
+		t.Fatal(err)
+	}
+	s.Close()
+	raw, _ := os.ReadFile(path)
+	if strings.ContainsAny(string(raw), "\x1b\x07\u009b") || strings.Contains(string(raw), `\u001b`) {
+		t.Errorf("record holds a control character: %q", raw)
+	}
+	// A record edited by hand to hold one gives it back cleaned.
+	ev, _, err := journal.Decode([]byte(`{"seq":1,"kind":"note","step":2,"note":"a\u001b[31mred\u0007"}` + "\n"))
+	if err != nil || len(ev) != 1 || ev[0].Note != "a[31mred" {
+		t.Errorf("Decode(note with escapes) = %+v, %v; want the note cleaned", ev, err)
+	}
+}
+
+// Two paths to one record (a symbolic link) share its lock.
+func TestStoreLockFollowsSymlink(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "job.toml.progress")
+	os.WriteFile(path, nil, 0o644)
+	link := filepath.Join(dir, "elsewhere.progress")
+	if err := os.Symlink(path, link); err != nil {
+		t.Skip("no symbolic links here:", err)
+	}
+	a := openT(t, path)
+	if _, _, _, err := journal.Open(link, "bench"); !errors.Is(err, journal.ErrLocked) {
+		t.Fatalf("Open through a symbolic link while held err = %v; want ErrLocked", err)
+	}
+	a.Close()
+	b, _, _, err := journal.Open(link, "bench")
+	if err != nil {
+		t.Fatalf("Open through the link after Close err = %v", err)
+	}
+	b.Close()
+}
+
+// Starters racing for a stale lock: never more than one holder at a time,
+// and a closing holder never deletes the lock of the next.
+func TestStoreLockNoTakeOverRace(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	var holders, most atomic.Int32
+	for round := 0; round < 100; round++ {
+		os.WriteFile(journal.LockPathFor(path), []byte(`{"holder":"bench","pid":2147483000,"host":"x"}`), 0o644)
+		var wg sync.WaitGroup
+		for g := 0; g < 4; g++ {
+			wg.Add(1)
+			go func() {
+				defer wg.Done()
+				s, _, _, err := journal.Open(path, "racer")
+				if err != nil {
+					return
+				}
+				n := holders.Add(1)
+				for m := most.Load(); n > m && !most.CompareAndSwap(m, n); m = most.Load() {
+				}
+				holders.Add(-1)
+				s.Close()
+			}()
+		}
+		wg.Wait()
+	}
+	if most.Load() > 1 {
+		t.Fatalf("%d holders of one record at once; want at most 1", most.Load())
+	}
+}
