@@ -9,6 +9,7 @@ import (
 
 	"coilwright/winding/job"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 func demoPlan(t testing.TB) *plan.Plan {
@@ -60,15 +61,15 @@ func BenchmarkDemoPack(b *testing.B) {
 func BenchmarkDemoPackWithRecord(b *testing.B) {
 	p := demoPlan(b)
 	when := p.Date.Add(24 * time.Hour)
-	pr := &Progress{Steps: map[int]StepProgress{}, Recorded: when}
-	for _, st := range p.Steps {
-		sp := StepProgress{Done: true, When: when}
+	pr := progress.New(p)
+	for i, st := range p.Steps {
+		pr.Steps[i] = progress.Step{Done: true, At: when}
 		if st.Coil != nil {
-			sp.Tooth, sp.Turns = st.Coil.Tooth, st.Coil.Turns-1
-			pr.Notes = append(pr.Notes, Note{Step: st.Index, Text: "one turn short: the last layer was full", When: when})
+			pr.Steps[i].Turns = st.Coil.Turns - 1
+			pr.Steps[i].Note, pr.Steps[i].NoteAt = "one turn short: the last layer was full", when
 		}
-		pr.Steps[st.Index] = sp
 	}
+	pr.Recorded = when
 	benchPack(b, p, Options{Progress: pr})
 }
 

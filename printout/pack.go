@@ -7,20 +7,22 @@ import (
 	"time"
 
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // Options are the choices of one print run.
 type Options struct {
 	Paper Paper     // A4 when zero
 	Date  time.Time // printed date and PDF dates; the plan's Date when zero
-	// Readings are measurements already recorded for the tests of the plan
-	// (from the progress record), by test name. The test record prints them
-	// in the reading column; tests without one get a blank to fill in.
+	// Readings are measurements already recorded for the tests of the plan,
+	// by test name. The test record prints them in the reading column; tests
+	// without one get a blank to fill in. When nil they are taken from
+	// Progress.
 	Readings map[string]Reading
-	// Progress is the stator's progress record (nil when there is none):
-	// the checklist ticks the steps done and writes the turns counted, the
-	// dates and the notes.
-	Progress *Progress
+	// Progress is where the stator's work stands, folded from its progress
+	// record (nil when there is none): the checklist ticks the steps done and
+	// writes the turns counted, the dates and the notes.
+	Progress *progress.State
 }
 
 // Reading is what was recorded for one test.
@@ -52,6 +54,9 @@ func Build(p *plan.Plan, o Options) (*Pack, error) {
 	}
 	if o.Date.IsZero() {
 		o.Date = p.Date
+	}
+	if o.Readings == nil {
+		o.Readings = readingsOf(o.Progress)
 	}
 	if o.Date.IsZero() {
 		// a fixed date keeps two renders identical when neither the job nor

@@ -5,119 +5,77 @@ import (
 	"time"
 
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
-// Progress is what the stator's progress record holds, as plain data: the
-// caller reads and replays the record, the printout only draws it. With a
-// Progress the checklist ticks the steps done, writes the turns counted and
-// the dates, and prints the notes under their rows.
-type Progress struct {
-	// Steps gives what was recorded for each plan step, by its 1-based
-	// index. Steps not in the map (or not Done) print blank, to fill by hand.
-	Steps map[int]StepProgress
-	// Notes are the notes of the record in the order written.
-	Notes []Note
-	// Recorded is when the record was last written (its latest entry); zero
-	// when unknown.
-	Recorded time.Time
-}
-
-// StepProgress is what the record holds of one plan step.
+// StepProgress is what the record holds of one plan step, as the checklist
+// prints it.
 type StepProgress struct {
-	Done bool
-	When time.Time // when it was done; zero when unknown
-	// Tooth is the coil's tooth as the record names it, for coil steps (0
-	// when not given). A step whose plan coil stands on another tooth (the
-	// job was changed since) is left out and counted as not matching.
-	Tooth int
-	// Turns are the turns actually wound on a done coil; 0 when none were
-	// recorded.
-	Turns int
+	Done  bool
+	When  time.Time // when it was done; zero when unknown
+	Turns int       // turns wound on a done coil; 0 for other steps
 }
 
-// Note is a note of the record, attached to a step, to a coil by its
-// tooth, or (both zero) to the stator as a whole.
+// Note is a note of the record as the checklist prints it.
 type Note struct {
-	Step  int
-	Tooth int
-	Text  string
-	When  time.Time // zero when unknown
+	Text string
+	When time.Time // zero when unknown
 }
 
-// recorded is the progress record matched against the plan's steps: entries
-// that name a step or tooth the plan does not have there are left out and
-// counted.
+// recorded is the progress record as the checklist prints it, read from the
+// one model of progress (which alone decides what fits the plan).
 type recorded struct {
-	steps   map[int]StepProgress // done entries that fit the plan
-	notes   map[int][]Note       // by step
-	general []Note               // notes of no step and no coil
-	ignored int                  // entries that do not fit the plan
+	steps   map[int]StepProgress // done steps by 1-based index
+	notes   map[int][]Note       // by 1-based step index
+	general []Note               // notes of no step
+	summary []string             // what changed and what was left out, in words
 	done    int                  // steps done
 	coils   int                  // coil steps done
 	when    time.Time
 }
 
-// matchProgress matches the progress to the steps the checklist prints; nil
+// matchProgress reads the progress for the steps the checklist prints; nil
 // when there is no record.
-func matchProgress(pr *Progress, steps []plan.Step) *recorded {
-	if pr == nil {
+func matchProgress(st *progress.State, steps []plan.Step) *recorded {
+	if st == nil {
 		return nil
 	}
-	byIndex := make(map[int]plan.Step, len(steps))
-	toothStep := map[int]int{}
-	for _, st := range steps {
-		byIndex[st.Index] = st
-		if st.Coil != nil {
-			if _, ok := toothStep[st.Coil.Tooth]; !ok {
-				toothStep[st.Coil.Tooth] = st.Index
+	r := &recorded{steps: map[int]StepProgress{}, notes: map[int][]Note{}, when: st.Recorded, summary: st.Summary()}
+	for i, s := range steps {
+		if i >= len(st.Steps) {
+			break
+		}
+		sp := st.Steps[i]
+		if sp.Done {
+			p := StepProgress{Done: true, When: sp.At}
+			if s.Coil != nil {
+				p.Turns = sp.Turns
+				r.coils++
 			}
+			r.steps[s.Index] = p
+			r.done++
+		}
+		if sp.Note != "" {
+			r.notes[s.Index] = append(r.notes[s.Index], Note{Text: sp.Note, When: sp.NoteAt})
 		}
 	}
-	fits := func(step, tooth int) bool {
-		st, ok := byIndex[step]
-		if !ok {
-			return false
-		}
-		return tooth == 0 || (st.Coil != nil && st.Coil.Tooth == tooth)
-	}
-	r := &recorded{steps: map[int]StepProgress{}, notes: map[int][]Note{}, when: pr.Recorded}
-	for i, sp := range pr.Steps {
-		if !sp.Done {
-			continue
-		}
-		if !fits(i, sp.Tooth) {
-			r.ignored++
-			continue
-		}
-		if byIndex[i].Coil == nil {
-			sp.Turns = 0 // turns belong to coils only
-		}
-		r.steps[i] = sp
-		r.done++
-		if byIndex[i].Coil != nil {
-			r.coils++
-		}
-	}
-	for _, n := range pr.Notes {
-		if n.Text == "" {
-			continue
-		}
-		switch {
-		case n.Step > 0 && fits(n.Step, n.Tooth):
-			r.notes[n.Step] = append(r.notes[n.Step], n)
-		case n.Step > 0:
-			r.ignored++
-		case n.Tooth > 0:
-			if s, ok := toothStep[n.Tooth]; ok {
-				r.notes[s] = append(r.notes[s], n)
-			} else {
-				r.ignored++
-			}
-		default:
-			r.general = append(r.general, n)
-		}
+	for _, n := range st.General {
+		r.general = append(r.general, Note{Text: n.Text, When: n.At})
 	}
 	return r
+}
+
+// readingsOf are the latest readings of each test in the record, as the test
+// record prints them.
+func readingsOf(st *progress.State) map[string]Reading {
+	if st == nil {
+		return nil
+	}
+	out := make(map[string]Reading, len(st.Tests))
+	for name, r := range st.Tests {
+		out[name] = Reading{Values: r.Values, Taken: r.At, Verdict: r.Verdict}
+	}
+	return out
 }
 
 // dateOf prints a recorded time as a date, in the zone it was recorded in
@@ -200,12 +158,8 @@ func (b *builder) progressSummary(f *flow, r *recorded, steps []plan.Step) {
 	tw := w - 6
 	how := "From the progress record: ticked boxes, written counts and dates are recorded work; blank rows are still to do and filled in by hand. " +
 		"A count printed white on black differs from the plan, whose count stands under it."
-	if r.ignored > 0 {
-		what := "entries of the record do not match this plan (was the job changed?) and were left out"
-		if r.ignored == 1 {
-			what = "entry of the record does not match this plan (was the job changed?) and was left out"
-		}
-		how += fmt.Sprintf(" %d %s.", r.ignored, what)
+	for _, line := range r.summary {
+		how += " " + line
 	}
 	var general []string
 	for _, n := range r.general {

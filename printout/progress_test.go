@@ -10,7 +10,9 @@ import (
 	"time"
 
 	"coilwright/winding"
+	"coilwright/winding/journal"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // benchDay is when the hand-built record was written: the bench's own zone,
@@ -20,11 +22,12 @@ var benchZone = time.FixedZone("bench", 3600)
 
 const longNote = "Wire kinked at the slot opening on the third layer; straightened it and wound on, the enamel looked unbroken under a loupe. Check this coil first if the insulation test is low."
 
-// progressFixture is a hand-built record for the 12/10 fixture: the first
-// coil done with the planned 36 turns, the second with 35 and a note, the
-// first test step done, an entry for a tooth the plan does not wind at that
-// step, and a note on the stator as a whole.
-func progressFixture(t testing.TB, p *plan.Plan) (pr *Progress, coilA, coilB, test plan.Step) {
+// progressFixture is a hand-built record for the 12/10 fixture, folded
+// against its plan: the first coil done with the planned 36 turns, the
+// second with 35 and a note, the first test step done, an entry for the
+// third coil's step that names its coil wound the other way, and a note on the stator as a
+// whole.
+func progressFixture(t testing.TB, p *plan.Plan) (st *progress.State, coilA, coilB, test plan.Step) {
 	t.Helper()
 	var coils []plan.Step
 	for _, st := range p.Steps {
@@ -40,24 +43,30 @@ func progressFixture(t testing.TB, p *plan.Plan) (pr *Progress, coilA, coilB, te
 	}
 	coilA, coilB = coils[0], coils[1]
 	day := time.Date(2025, 3, 21, 0, 30, 0, 0, benchZone)
-	pr = &Progress{
-		Steps: map[int]StepProgress{
-			coilA.Index: {Done: true, When: day, Tooth: coilA.Coil.Tooth, Turns: coilA.Coil.Turns},
-			coilB.Index: {Done: true, When: day.Add(time.Hour), Tooth: coilB.Coil.Tooth, Turns: coilA.Coil.Turns - 1},
-			test.Index:  {Done: true, When: day.Add(26 * time.Hour)},
-			// the record names another tooth for the third coil's step
-			coils[2].Index: {Done: true, When: day, Tooth: coils[2].Coil.Tooth + 1, Turns: 36},
-		},
-		Notes: []Note{
-			{Step: coilB.Index, Tooth: coilB.Coil.Tooth, Text: longNote, When: day.Add(time.Hour)},
-			{Text: "Stack from the spring batch, lot 7.", When: day},
-		},
-		Recorded: day.Add(26 * time.Hour),
+	stamp := func(e journal.Event) journal.Event { return progress.Stamp(p, e) }
+	wrongTooth := stamp(journal.Event{Kind: journal.Done, Step: coils[2].Index, Turns: 36, Time: day})
+	// the job was edited since: that tooth's coil was wound the other way
+	if strings.Contains(wrongTooth.Key, "+") {
+		wrongTooth.Key = strings.Replace(wrongTooth.Key, "+", "-", 1)
+	} else {
+		wrongTooth.Key = strings.Replace(wrongTooth.Key, "-", "+", 1)
 	}
-	return pr, coilA, coilB, test
+	events := []journal.Event{
+		progress.FingerprintEvent(p),
+		stamp(journal.Event{Kind: journal.Done, Step: coilA.Index, Turns: coilA.Coil.Turns, Time: day}),
+		stamp(journal.Event{Kind: journal.Done, Step: coilB.Index, Turns: coilA.Coil.Turns - 1, Time: day.Add(time.Hour)}),
+		stamp(journal.Event{Kind: journal.Note, Step: coilB.Index, Note: longNote, Time: day.Add(time.Hour)}),
+		stamp(journal.Event{Kind: journal.Done, Step: test.Index, Time: day.Add(26 * time.Hour)}),
+		wrongTooth,
+		{Kind: journal.Note, Note: "Stack from the spring batch, lot 7.", Time: day},
+	}
+	for i := range events {
+		events[i].Seq, events[i].Line = i+1, i+1
+	}
+	return progress.Fold(p, events), coilA, coilB, test
 }
 
-func buildWithProgress(t *testing.T, pr *Progress) (*plan.Plan, *Pack) {
+func buildWithProgress(t *testing.T, pr *progress.State) (*plan.Plan, *Pack) {
 	t.Helper()
 	p := fixturePlan(t, winding.Spec{Slots: 12, Poles: 10}, winding.Star)
 	if pr == nil {
@@ -148,7 +157,7 @@ func TestChecklistProgressTexts(t *testing.T) {
 	steps := len(p.Steps)
 	for _, want := range []string{
 		fmt.Sprintf("3 of %d steps done, 2 of 12 coils, as recorded on 2025-03-22.", steps),
-		"1 entry of the record does not match this plan",
+		"1 coil entry left out (line 6): it was recorded for coil",
 		"note 2025-03-21: Stack from the spring batch, lot 7.",
 	} {
 		if !strings.Contains(all, want) {
@@ -214,9 +223,8 @@ func TestChecklistProgressStaysInCells(t *testing.T) {
 			pr, _, _, _ := progressFixture(t, p)
 			// counts of three digits, the widest a tooth coil takes by hand
 			for i, sp := range pr.Steps {
-				if sp.Turns > 0 {
-					sp.Turns += 964
-					pr.Steps[i] = sp
+				if sp.Done && sp.Turns > 0 {
+					pr.Steps[i].Turns += 964
 				}
 			}
 			pk, err := Build(p, Options{Paper: paper, Progress: pr})
@@ -270,7 +278,7 @@ func TestChecklistLongNoteFlows(t *testing.T) {
 	for i := range 3000 {
 		words = append(words, fmt.Sprintf("w%d", i))
 	}
-	pr.Notes = append(pr.Notes, Note{Step: coilB.Index, Text: strings.Join(words, " ")})
+	pr.Steps[coilB.Index-1].Note = strings.Join(words, " ")
 	pk, err := Build(p, Options{Progress: pr})
 	if err != nil {
 		t.Fatal(err)
@@ -301,7 +309,7 @@ func TestChecklistLongNoteFlows(t *testing.T) {
 
 // A record with nothing that fits the plan still says so at the top.
 func TestChecklistEmptyRecord(t *testing.T) {
-	p, pk := buildWithProgress(t, &Progress{})
+	p, pk := buildWithProgress(t, progress.New(fixturePlan(t, winding.Spec{Slots: 12, Poles: 10}, winding.Star)))
 	all := strings.Join(textsOf(pagesOf(pk, ChecklistPage)), "\n")
 	want := fmt.Sprintf("0 of %d steps done, 0 of 12 coils, as recorded.", len(p.Steps))
 	if !strings.Contains(all, want) {

@@ -11,7 +11,7 @@ import (
 // benchView times View() at a coil in the middle of a stator.
 func benchView(b *testing.B, p *plan.Plan, w, h int, extra ...string) {
 	hist := doneUpTo(p, func(s plan.Step) bool { return s.Coil != nil && s.Coil.Order == s.Coil.Of/2 })
-	m := New(Options{Plan: p, History: hist, Now: fixedNow})
+	m := New(Options{Plan: p, History: stamped(p, hist), Now: fixedNow})
 	m.Update(tea.WindowSizeMsg{Width: w, Height: h})
 	m.Update(press(" "))
 	for _, k := range extra {

@@ -4,6 +4,7 @@ import (
 	"time"
 
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // Minimum terminal size for the guide; below it the guide asks for a larger
@@ -26,9 +27,10 @@ type shared struct {
 	tests map[string]plan.Test
 	coils int // M of "coil N of M"
 
-	prog  *progress
+	prog  *progress.State
 	out   *writer
 	where string
+	said  []string // what the resume and the record file said, for the help screen
 	judge Judge
 	now   func() time.Time
 
@@ -36,9 +38,12 @@ type shared struct {
 }
 
 // record applies a change in memory at once and queues it for the record.
+// The entry names its step by index; it is stamped with the step's key (and
+// a coil's tooth) so a later resume matches it by what the step is.
 func (c *shared) record(e Entry) {
-	e.At = c.now()
-	if c.prog.apply(e) {
+	e.Time = c.now()
+	e = progress.Stamp(c.plan, e)
+	if c.prog.Apply(e) {
 		c.out.push(e)
 	}
 }
@@ -84,7 +89,7 @@ func (c *shared) ring(w, h int) *ringGeometry {
 }
 
 // currentTooth is the tooth the current step is about, 0 for none.
-func (c *shared) currentTooth() int { return c.toothOf(c.prog.current()) }
+func (c *shared) currentTooth() int { return c.toothOf(c.prog.Current()) }
 
 // toothOf is the tooth step i (0-based) is about, 0 for none.
 func (c *shared) toothOf(i int) int {

@@ -7,10 +7,15 @@
 // shows a drawing of the stator (teeth in a ring, or a developed strip when
 // the ring does not fit), the current step with everything needed to do it,
 // and a turn counter. Every change of progress (a turn counted, a step done,
-// an undo, a note, a reading) is applied in memory at once and queued for the
-// progress record; the queue is written by a tea.Cmd, one batch at a time, so
-// events reach the record in order and a write error keeps them in memory and
-// retries.
+// an undo, a note, a reading) is an event of the progress record, applied at
+// once to the one model of progress (winding/progress: the record folded
+// against the plan, the same rule for what fits on resume and live) and
+// queued for the record; the queue is written by a tea.Cmd, everything
+// waiting in one batch with one sync, so events reach the record in order and
+// a write error keeps them in memory and retries. On resume a banner says
+// what the model found (a job edited since, entries left out, a torn last
+// line kept aside) and, while open, what the store had to do about the file
+// (the record removed or replaced under it and written again).
 //
 // Conventions. Teeth are numbered counter-clockwise seen from the lead end;
 // the ring is drawn as seen from the lead end with tooth 1 at the top. A

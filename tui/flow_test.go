@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"os"
 	"path/filepath"
+	"reflect"
 	"strings"
 	"testing"
 	"time"
@@ -16,6 +17,7 @@ import (
 	"coilwright/winding/job"
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 func demoPlan(tb testing.TB) *plan.Plan {
@@ -34,7 +36,11 @@ func openGuide(t *testing.T, p *plan.Plan, path string) (*Model, *journal.Store)
 	if err != nil {
 		t.Fatalf("journal.Open(%s) = %v", path, err)
 	}
-	m := New(Options{Plan: p, Recorder: JournalRecorder{Store: st, Plan: p}, History: EntriesOf(p, events), Notice: TornNotice(torn), Where: path})
+	rec := &JournalRecorder{Store: st}
+	if progress.Fold(p, events).NeedsFingerprint() {
+		rec.Head = []journal.Event{progress.FingerprintEvent(p)}
+	}
+	m := New(Options{Plan: p, Recorder: rec, History: events, Notice: TornNotice(torn), Where: path})
 	return m, st
 }
 
@@ -82,10 +88,10 @@ func TestFlowWindTwoCoilsQuitResume(t *testing.T) {
 	waitFor(t, tm2, fmt.Sprintf("coil 3 of %d", coilStep(t, p, 3).Of))
 	typeKeys(tm2, " ", " ", " ", "q")
 	fm := tm2.FinalModel(t, teatest.WithFinalTimeout(5*time.Second)).(*Model)
-	if got := fm.c.prog.turns[fm.c.prog.current()]; got != 3 {
+	if got := fm.c.prog.Steps[fm.c.prog.Current()].Turns; got != 3 {
 		t.Errorf("turns on coil 3 = %d; want 3", got)
 	}
-	if s, _ := fm.c.step(fm.c.prog.current()); s.Coil == nil || s.Coil.Order != 3 {
+	if s, _ := fm.c.step(fm.c.prog.Current()); s.Coil == nil || s.Coil.Order != 3 {
 		t.Errorf("current step %+v; want coil 3", s)
 	}
 }
@@ -116,7 +122,7 @@ func TestRecordTruncatedAtEveryOffset(t *testing.T) {
 	toCoil(t, m)
 	keys(t, m, repeat(" ", curStep(m).Coil.Turns)...)
 	keys(t, m, "enter", "enter", "n", "x", "enter", " ", " ")
-	want := m.c.prog.current()
+	want := m.c.prog.Current()
 	if err := st.Close(); err != nil {
 		t.Fatal(err)
 	}
@@ -134,12 +140,12 @@ func TestRecordTruncatedAtEveryOffset(t *testing.T) {
 		if cut && torn == nil && !bytes.HasSuffix(data[:off], []byte("}")) {
 			t.Errorf("Decode(first %d bytes): a cut line is not reported", off)
 		}
-		g := New(Options{Plan: p, History: EntriesOf(p, events), Notice: TornNotice(torn)})
+		g := New(Options{Plan: p, History: events, Notice: TornNotice(torn)})
 		if off%97 == 0 || off == len(data) {
 			g.Update(tea.WindowSizeMsg{Width: 80, Height: 24})
 			_ = g.View()
 		}
-		cur := g.c.prog.current()
+		cur := g.c.prog.Current()
 		if cur < prev || cur > want {
 			t.Fatalf("after %d bytes the guide is at step %d; want between %d and %d", off, cur+1, prev+1, want+1)
 		}
@@ -224,9 +230,9 @@ func TestSecondGuideRefused(t *testing.T) {
 	}
 }
 
-// TestReplayAgreesWithJournal checks the guide's own replay against
-// journal.Replay on the same record.
-func TestReplayAgreesWithJournal(t *testing.T) {
+// TestResumeAgreesWithLive folds what the guide recorded and finds the
+// state the guide shows: one model, live and on resume.
+func TestResumeAgreesWithLive(t *testing.T) {
 	p := demoPlan(t)
 	rec := &memRecorder{}
 	m := New(Options{Plan: p, Recorder: rec, Now: fixedNow})
@@ -235,21 +241,15 @@ func TestReplayAgreesWithJournal(t *testing.T) {
 	keys(t, m, repeat(" ", curStep(m).Coil.Turns-1)...)
 	keys(t, m, "enter", "y", "enter")
 	keys(t, m, "u", "y", "u", "y", "enter", " ", " ")
-	var events []journal.Event
-	for i, e := range rec.all() {
-		ev := EventOf(p, e)
-		ev.Seq = i + 1
-		events = append(events, ev)
+	events := rec.all()
+	for i := range events {
+		events[i].Seq = i + 1
 	}
-	js := journal.Replay(events)
-	cur := m.c.prog.current()
-	if got := js.Current(len(p.Steps)); got != cur+1 {
-		t.Errorf("journal.Replay current = %d; guide at %d", got, cur+1)
+	folded := progress.Fold(p, events)
+	if len(folded.Dropped) != 0 {
+		t.Errorf("Fold(the guide's own entries) dropped %+v", folded.Dropped)
 	}
-	if got := js.InProgress[cur+1]; got != m.c.prog.turns[cur] {
-		t.Errorf("journal.Replay turns in progress = %d; guide %d", got, m.c.prog.turns[cur])
-	}
-	if len(js.Done) != m.c.prog.count() {
-		t.Errorf("journal.Replay done %v; guide has %d done", js.Done, m.c.prog.count())
+	if !reflect.DeepEqual(folded.Steps, m.c.prog.Steps) || folded.Current() != m.c.prog.Current() || folded.DoneCount() != m.c.prog.DoneCount() {
+		t.Errorf("Fold(record) = current %d, %d done; the guide shows current %d, %d done", folded.Current(), folded.DoneCount(), m.c.prog.Current(), m.c.prog.DoneCount())
 	}
 }

@@ -73,7 +73,7 @@ func TestGoldenScreens(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			m := New(Options{Plan: tc.p, Recorder: &memRecorder{}, History: tc.history, Where: "/home/winder/.local/state/coilwright/demo.progress", Now: fixedNow})
+			m := New(Options{Plan: tc.p, Recorder: &memRecorder{}, History: stamped(tc.p, tc.history), Where: "/home/winder/.local/state/coilwright/demo.progress", Now: fixedNow})
 			drive(t, m, tea.WindowSizeMsg{Width: tc.w, Height: tc.h})
 			keys(t, m, tc.keys...)
 			golden(t, tc.name+".txt", plain(m)+"\n")

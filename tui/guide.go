@@ -71,7 +71,7 @@ type guideModel struct {
 // lookedAt is the step looked at, when it is not the current one and
 // progress has not changed since the look began.
 func (g guideModel) lookedAt() (int, bool) {
-	if !g.looking || g.atRev != g.c.prog.rev || g.at == g.c.prog.current() {
+	if !g.looking || g.atRev != g.c.prog.Rev || g.at == g.c.prog.Current() {
 		return 0, false
 	}
 	if _, ok := g.c.step(g.at); !ok {
@@ -85,21 +85,21 @@ func (g guideModel) shown() int {
 	if at, ok := g.lookedAt(); ok {
 		return at
 	}
-	return g.c.prog.current()
+	return g.c.prog.Current()
 }
 
 // lookAt moves the look to step i (0-based), clamped to the plan; reaching
 // the current step ends the look.
 func (g guideModel) lookAt(i int) guideModel {
-	cur := g.c.prog.current()
+	cur := g.c.prog.Current()
 	i = min(max(0, i), max(len(g.c.steps())-1, cur))
-	g.looking, g.at, g.atRev, g.typed, g.flash = i != cur, i, g.c.prog.rev, false, ""
+	g.looking, g.at, g.atRev, g.typed, g.flash = i != cur, i, g.c.prog.Rev, false, ""
 	return g
 }
 
 // backTo says where ending a look returns to.
 func (g guideModel) backTo() string {
-	if cur := g.c.prog.current(); cur < len(g.c.steps()) {
+	if cur := g.c.prog.Current(); cur < len(g.c.steps()) {
 		return fmt.Sprintf("step %d in hand", cur+1)
 	}
 	return "the finished job"
@@ -169,7 +169,7 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 		return g, tea.Batch(cmds...)
 	}
 	k := g.c.keys
-	cur := g.c.prog.current()
+	cur := g.c.prog.Current()
 	s, ok := g.c.step(cur)
 	switch g.mode {
 	case modeNote:
@@ -196,7 +196,7 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 		switch {
 		case key.Matches(msg, k.confirm.Yes):
 			if ok && g.verdict != nil {
-				g.c.record(Entry{Kind: EntryReading, Step: s.Index, Values: g.values, Verdict: g.verdict.Level})
+				g.c.record(Entry{Kind: EntryReading, Step: s.Index, Readings: readingsOf(g.labels, g.values), Verdict: g.verdict.Level})
 				g.c.record(Entry{Kind: EntryDone, Step: s.Index})
 				g.flash = fmt.Sprintf("step %d recorded: %s", s.Index, strings.ToUpper(g.verdict.Level))
 			}
@@ -220,7 +220,7 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 	case modeConfirmUndo:
 		switch {
 		case key.Matches(msg, k.confirm.Yes):
-			if last := g.c.prog.lastDone(); last >= 0 {
+			if last := g.c.prog.LastDone(); last >= 0 {
 				ls, _ := g.c.step(last)
 				g.c.record(Entry{Kind: EntryUndo, Step: ls.Index})
 				g.flash = "undone: step " + strconv.Itoa(ls.Index) + " " + ls.Title
@@ -249,7 +249,7 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 	case key.Matches(msg, k.guide.Next):
 		return g.lookAt(cur + 1), nil
 	case key.Matches(msg, k.guide.Undo):
-		if g.c.prog.lastDone() >= 0 {
+		if g.c.prog.LastDone() >= 0 {
 			g.mode = modeConfirmUndo
 		} else {
 			g.flash = "nothing to undo"
@@ -258,13 +258,13 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 	case !ok:
 		return g, nil
 	case key.Matches(msg, k.guide.Note):
-		g.note.SetValue(g.c.prog.notes[cur])
+		g.note.SetValue(g.c.prog.Steps[cur].Note)
 		g.note.CursorEnd()
 		g.mode = modeNote
 		return g, g.note.Focus()
 	}
 	if s.Kind == plan.StepCoil && s.Coil != nil {
-		n := g.c.prog.turns[cur]
+		n := g.c.prog.Steps[cur].Turns
 		switch {
 		case key.Matches(msg, k.guide.Count):
 			g.setTurns(s, n+1)
@@ -301,7 +301,7 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 // setTurns changes the count of the coil in progress and records it.
 func (g *guideModel) setTurns(s plan.Step, n int) {
 	n = min(max(0, n), maxTurns)
-	if n == g.c.prog.turns[s.Index-1] {
+	if n == g.c.prog.Steps[s.Index-1].Turns {
 		return
 	}
 	g.c.record(Entry{Kind: EntryTurns, Step: s.Index, Turns: n})
@@ -312,7 +312,7 @@ func (g *guideModel) setTurns(s plan.Step, n int) {
 func (g *guideModel) complete(s plan.Step) {
 	e := Entry{Kind: EntryDone, Step: s.Index}
 	if s.Coil != nil {
-		e.Turns = g.c.prog.turns[s.Index-1]
+		e.Turns = g.c.prog.Steps[s.Index-1].Turns
 		g.flash = fmt.Sprintf("tooth %d wound: %d turns", s.Coil.Tooth, e.Turns)
 		if e.Turns != s.Coil.Turns {
 			g.flash += fmt.Sprintf(" (plan %d)", s.Coil.Turns)
@@ -334,9 +334,10 @@ func (g guideModel) startReadings(s plan.Step) (guideModel, tea.Cmd) {
 		g.fields[i].Placeholder = f.unit
 		g.fields[i].SetValue(f.def)
 	}
-	if r := g.c.prog.readings[s.Index-1]; r != nil {
-		for i, v := range r.values {
-			if i < len(g.fields) {
+	if r := g.c.prog.Steps[s.Index-1].Reading; r != nil {
+		vals, ok := valuesOf(g.labels, r.Values)
+		for i, v := range vals {
+			if ok[i] {
 				g.fields[i].SetValue(strconv.FormatFloat(v, 'g', -1, 64))
 			}
 		}
@@ -444,7 +445,7 @@ func (g guideModel) shortHelp() []key.Binding {
 		back.SetHelp("esc", "back to "+strings.TrimSuffix(g.backTo(), " in hand"))
 		return []key.Binding{back, k.guide.Look, k.global.Overview, k.global.Help, k.global.Quit}
 	}
-	s, ok := g.c.step(g.c.prog.current())
+	s, ok := g.c.step(g.c.prog.Current())
 	var out []key.Binding
 	switch {
 	case !ok:
@@ -473,7 +474,7 @@ func withHelp(b key.Binding, desc string) key.Binding {
 func (g guideModel) view(w, h int) string {
 	c := g.c
 	teeth := c.teeth
-	wound := c.prog.toothWound(c.steps(), len(teeth))
+	wound := c.prog.ToothWound(len(teeth))
 	cur := c.currentTooth()
 	viewed := 0
 	at, looking := g.lookedAt()

@@ -13,6 +13,9 @@ import (
 	"github.com/charmbracelet/lipgloss"
 	"github.com/charmbracelet/x/ansi"
 	"github.com/muesli/termenv"
+
+	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // updating reports the -update flag, which rewrites the golden screens under
@@ -46,6 +49,7 @@ type memRecorder struct {
 	entries []Entry
 	waiting []Entry
 	fail    error
+	appends int // Append calls: one sync each in the journal store
 }
 
 type heldErr struct {
@@ -56,10 +60,11 @@ type heldErr struct {
 func (e heldErr) Error() string    { return e.err.Error() }
 func (e heldErr) HeldEntries() int { return e.held }
 
-func (r *memRecorder) Append(e Entry) error {
+func (r *memRecorder) Append(es ...Entry) error {
 	r.mu.Lock()
 	defer r.mu.Unlock()
-	r.waiting = append(r.waiting, e)
+	r.appends++
+	r.waiting = append(r.waiting, es...)
 	return r.flush()
 }
 
@@ -200,3 +205,13 @@ func golden(t *testing.T, name, got string) {
 }
 
 func ansiStrip(s string) string { return ansi.Strip(s) }
+
+// stamped is a hand-made history as the guide records it: each entry
+// stamped with what its step is.
+func stamped(p *plan.Plan, es []Entry) []Entry {
+	out := make([]Entry, len(es))
+	for i, e := range es {
+		out[i] = progress.Stamp(p, e)
+	}
+	return out
+}

@@ -96,7 +96,10 @@ func (m helpModel) content() string {
 		where = "(not kept: no record was given)"
 	}
 	b.text("Every turn counted and every step done is written to the record at once, so the guide resumes where it stopped even after a crash or a power cut: "+where, st.value.Render)
-	b.text("If the disk refuses a write, the guide says so, keeps everything in memory and tries again every few seconds.", st.value.Render)
+	b.text("If the disk refuses a write, the guide says so, keeps everything in memory and tries again every few seconds. If another program removes or replaces the record while the guide is open, the guide writes it again from memory and says so; whatever stood there is kept in a side file.", st.value.Render)
+	for _, s := range c.said {
+		b.text(s, st.notice.Render)
+	}
 	b.raw("", st.title.Render("safety"))
 	b.text("Insulation and high-voltage tests can kill. They belong to a trained person with a suitable tester; follow local codes and licensed practice. Strong magnets pinch and a spinning rotor cuts: keep the rotor out until the winding is tested, and fingers clear.", st.caution.Render)
 	return strings.Join(b.l, "\n")

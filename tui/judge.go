@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // Verdict is what a test step's readings mean.
@@ -86,3 +87,46 @@ func limitJudge(_ *plan.Plan, t plan.Test, v []float64) Verdict {
 
 // fmtNum prints a reading without needless digits.
 func fmtNum(x float64) string { return fmt.Sprintf("%.4g", x) }
+
+// readingsOf names the values typed into a test step's fields by the
+// fields' keys, as the progress record keeps them.
+func readingsOf(fs []field, values []float64) map[string]float64 {
+	out := make(map[string]float64, len(values))
+	for i, v := range values {
+		name := fmt.Sprintf("value%d", i+1)
+		if i < len(fs) {
+			name = fs[i].key
+		}
+		out[name] = v
+	}
+	return out
+}
+
+// valuesOf lists recorded readings in the order of the fields; ok is false
+// for a field with no reading.
+func valuesOf(fs []field, r map[string]float64) (vals []float64, ok []bool) {
+	for i, f := range fs {
+		v, has := r[f.key]
+		if !has {
+			v, has = r[fmt.Sprintf("value%d", i+1)]
+		}
+		vals, ok = append(vals, v), append(ok, has)
+	}
+	return vals, ok
+}
+
+// readingText is a recorded reading in a line: "U-V 0.412, V-W 0.41 ...".
+func (c *shared) readingText(s plan.Step, r *progress.Reading) string {
+	fs := fieldsFor(c.plan, c.tests[s.Test])
+	vals, ok := valuesOf(fs, r.Values)
+	var parts []string
+	for i, f := range fs {
+		if ok[i] {
+			parts = append(parts, f.label+" "+fmtNum(vals[i]))
+		}
+	}
+	if len(parts) == 0 {
+		return "no values"
+	}
+	return strings.Join(parts, ", ")
+}

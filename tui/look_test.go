@@ -36,8 +36,12 @@ type snapshot struct {
 }
 
 func snap(m *Model) snapshot {
-	p := m.c.prog
-	return snapshot{slices.Clone(p.done), slices.Clone(p.turns), slices.Clone(p.notes), p.current()}
+	var sn snapshot
+	for _, st := range m.c.prog.Steps {
+		sn.done, sn.turns, sn.notes = append(sn.done, st.Done), append(sn.turns, st.Turns), append(sn.notes, st.Note)
+	}
+	sn.cur = m.c.prog.Current()
+	return sn
 }
 
 func (a snapshot) equal(b snapshot) bool {
@@ -47,7 +51,7 @@ func (a snapshot) equal(b snapshot) bool {
 func TestLookBackChangesNothing(t *testing.T) {
 	m, rec := woundTwo(t, 80, 24)
 	before, entries := snap(m), len(rec.all())
-	cur := m.c.prog.current()
+	cur := m.c.prog.Current()
 	keys(t, m, "left", "[")
 	at, ok := m.guide.lookedAt()
 	if !ok || at != cur-2 {
@@ -130,15 +134,15 @@ func TestLookAtDoneCoilShowsItsRecord(t *testing.T) {
 	}
 	// Stepping forward onto the current step ends the look; one more looks
 	// ahead.
-	for range m.c.prog.current() - first {
+	for range m.c.prog.Current() - first {
 		keys(t, m, "right")
 	}
 	if _, ok := m.guide.lookedAt(); ok {
 		t.Errorf("still looking after stepping forward onto the current step")
 	}
 	keys(t, m, "right")
-	if at, ok := m.guide.lookedAt(); !ok || at != m.c.prog.current()+1 {
-		t.Errorf("lookedAt() = %d, %v one step past the current; want %d, true", at, ok, m.c.prog.current()+1)
+	if at, ok := m.guide.lookedAt(); !ok || at != m.c.prog.Current()+1 {
+		t.Errorf("lookedAt() = %d, %v one step past the current; want %d, true", at, ok, m.c.prog.Current()+1)
 	}
 }
 
@@ -164,25 +168,25 @@ func TestLookAheadShowsTheStep(t *testing.T) {
 		}
 	}
 	keys(t, m, "enter")
-	if s := curStep(m); s.Index != 2 || m.c.prog.done[1] || len(rec.all()) != entries {
-		t.Errorf("enter while looking ahead: current %d, coil 1 done %v, %d entries; want step 2, not done, none", s.Index, m.c.prog.done[1], len(rec.all())-entries)
+	if s := curStep(m); s.Index != 2 || m.c.prog.Steps[1].Done || len(rec.all()) != entries {
+		t.Errorf("enter while looking ahead: current %d, coil 1 done %v, %d entries; want step 2, not done, none", s.Index, m.c.prog.Steps[1].Done, len(rec.all())-entries)
 	}
 }
 
 func TestUndoWhileLookingReturns(t *testing.T) {
 	m, _ := woundTwo(t, 80, 24)
-	cur := m.c.prog.current()
+	cur := m.c.prog.Current()
 	keys(t, m, "left", "left", "left")
 	keys(t, m, "u")
 	if _, ok := m.guide.lookedAt(); ok || m.guide.mode != modeConfirmUndo {
 		t.Fatalf("u while looking: looking %v, mode %v; want the look ended and the undo question", ok, m.guide.mode)
 	}
 	keys(t, m, "y")
-	if got := m.c.prog.current(); got >= cur {
+	if got := m.c.prog.Current(); got >= cur {
 		t.Fatalf("current() = %d after undo; want before %d", got, cur)
 	}
-	if m.guide.shown() != m.c.prog.current() {
-		t.Errorf("shown() = %d after undo; want the current step %d", m.guide.shown(), m.c.prog.current())
+	if m.guide.shown() != m.c.prog.Current() {
+		t.Errorf("shown() = %d after undo; want the current step %d", m.guide.shown(), m.c.prog.Current())
 	}
 }
 
@@ -191,20 +195,20 @@ func TestAnyProgressChangeEndsTheLook(t *testing.T) {
 	keys(t, m, "left")
 	// A change that did not come through the look (as a resumed record or
 	// another screen would make) ends it too.
-	m.c.record(Entry{Kind: EntryTurns, Step: m.c.prog.current() + 1, Turns: 3})
+	m.c.record(Entry{Kind: EntryTurns, Step: m.c.prog.Current() + 1, Turns: 3})
 	if _, ok := m.guide.lookedAt(); ok {
 		t.Error("still looking after a change of progress")
 	}
 	// A resumed guide starts on the step in hand.
 	m2 := New(Options{Plan: m.c.plan, History: m.c.out.rec.(*memRecorder).all(), Now: fixedNow})
-	if _, ok := m2.guide.lookedAt(); ok || m2.guide.shown() != m2.c.prog.current() {
+	if _, ok := m2.guide.lookedAt(); ok || m2.guide.shown() != m2.c.prog.Current() {
 		t.Error("a resumed guide starts looking at another step")
 	}
 }
 
 func TestOverviewEnterLooksAtTheLine(t *testing.T) {
 	m, rec := woundTwo(t, 80, 24)
-	cur, entries := m.c.prog.current(), len(rec.all())
+	cur, entries := m.c.prog.Current(), len(rec.all())
 	keys(t, m, "o")
 	if m.overview.sel != cur {
 		t.Fatalf("overview highlights step %d; want the current %d", m.overview.sel+1, cur+1)
@@ -250,8 +254,8 @@ func TestLookKeysGoIntoTypedFields(t *testing.T) {
 		t.Error("[ ] or left in a note moved the look")
 	}
 	keys(t, m, "n", "[", "]", "home", "x", "enter")
-	i := m.c.prog.current()
-	if got := m.c.prog.notes[i]; got != "x[]" {
+	i := m.c.prog.Current()
+	if got := m.c.prog.Steps[i].Note; got != "x[]" {
 		t.Errorf("note = %q; want %q (home moves the cursor in the field)", got, "x[]")
 	}
 	// In the readings of a test step too.

@@ -11,6 +11,7 @@ import (
 	"github.com/charmbracelet/x/ansi"
 
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // screen is the screen shown.
@@ -38,8 +39,8 @@ func (s screen) String() string {
 type Options struct {
 	Plan     *plan.Plan
 	Recorder Recorder // where progress goes; nil keeps it in memory only
-	History  []Entry  // the record so far, replayed to resume
-	Notice   string   // shown on the status line at start (e.g. a torn last line)
+	History  []Entry  // the record so far, folded against the plan to resume
+	Notice   string   // shown at start (e.g. a torn last line)
 	Where    string   // where progress is kept, in words, for the help screen
 	Judge    Judge    // verdicts of test readings; nil uses VerifyJudge
 	Now      func() time.Time
@@ -53,9 +54,11 @@ type Model struct {
 	overview overviewModel
 	help     helpModel
 	keyHelp  help.Model
-	notice   string
+	notice   string   // the status line until the next key
+	banner   []string // what the resume or the record file needs said, above the guide until a key
 	quitting bool
-	ignored  int // history entries that did not fit the plan
+	stopped  bool // a signal asked the guide to stop
+	ignored  int  // history entries that did not fit the plan
 }
 
 // New builds the guide and replays the history so it resumes where the work
@@ -89,16 +92,13 @@ func New(o Options) *Model {
 			}
 		}
 	}
-	c.prog = newProgress(len(c.steps()))
-	m := &Model{c: c, notice: o.Notice, keyHelp: newHelpView()}
-	for _, e := range o.History {
-		if !c.prog.apply(e) {
-			m.ignored++
-		}
+	c.prog = progress.Fold(o.Plan, o.History)
+	m := &Model{c: c, keyHelp: newHelpView(), ignored: len(c.prog.Dropped)}
+	if o.Notice != "" {
+		m.banner = append(m.banner, o.Notice)
 	}
-	if m.ignored > 0 {
-		m.notice = strings.TrimSpace(m.notice + fmt.Sprintf(" %d entries of the record do not match this plan (was the job changed?) and were left out.", m.ignored))
-	}
+	m.banner = append(m.banner, c.prog.Summary()...)
+	c.said = append(c.said, m.banner...)
 	m.guide = newGuide(c)
 	m.overview = newOverview(c)
 	m.help = newHelp(c)
@@ -120,12 +120,19 @@ func (m *Model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		m.overview = m.overview.open(bw, bh)
 		m.help = m.help.open(bw, bh)
 	case savedMsg:
+		m.banner = append(m.banner, msg.notices...)
+		m.c.said = append(m.c.said, msg.notices...)
 		cmd = m.c.out.saved(msg)
 		if m.quitting && m.c.out.settled() {
 			return m, tea.Quit
 		}
 	case retryMsg:
 		cmd = m.c.out.retry()
+	case stopMsg:
+		m.quitting, m.stopped = true, true
+		if m.c.out.settled() || m.c.out.err != nil {
+			return m, tea.Quit // what waits is written by Run, or kept in the error
+		}
 	case tea.KeyMsg:
 		cmd = m.key(msg)
 		if m.quitting && m.c.out.settled() {
@@ -143,7 +150,7 @@ func (m *Model) key(msg tea.KeyMsg) tea.Cmd {
 		m.quitting = true
 		return tea.Quit
 	}
-	m.notice = ""
+	m.notice, m.banner = "", nil
 	if m.screen == screenGuide && m.guide.typing() {
 		var cmd tea.Cmd
 		m.guide, cmd = m.guide.update(msg)
@@ -194,6 +201,8 @@ func (m *Model) View() string {
 		return m.smallView()
 	}
 	bw, bh := m.bodySize()
+	top := m.bannerLines(bw, bh/3)
+	bh -= len(top)
 	var body string
 	switch m.screen {
 	case screenOverview:
@@ -204,16 +213,40 @@ func (m *Model) View() string {
 		body = m.guide.view(bw, bh)
 	}
 	body = fit(body, bw, bh)
+	if len(top) > 0 {
+		body = strings.Join(top, "\n") + "\n" + body
+		bh += len(top)
+	}
 	if n := strings.Count(body, "\n") + 1; n < bh {
 		body += strings.Repeat("\n", bh-n)
 	}
 	return fit(m.header()+"\n"+body+"\n"+m.status()+"\n"+m.helpLine(), c.width, c.height)
 }
 
+// bannerLines is what the resume or the record file needs said, wrapped
+// to the width and cut to at most h lines (the last says so), until the next
+// key.
+func (m *Model) bannerLines(w, h int) []string {
+	if len(m.banner) == 0 || h < 1 {
+		return nil
+	}
+	var out []string
+	for _, b := range m.banner {
+		out = append(out, wrapPlain(b, w)...)
+	}
+	if len(out) > h {
+		out = append(out[:h-1], "... (more on the help screen, ?)")
+	}
+	for i, l := range out {
+		out[i] = m.c.st.notice.Render(fit(l, w, 1))
+	}
+	return out
+}
+
 // header is the top line: program, job, winding, and where the work stands.
 func (m *Model) header() string {
 	c := m.c
-	right := fmt.Sprintf("coils %d/%d  steps %d/%d", c.prog.coilsDone(c.steps()), c.coils, c.prog.count(), len(c.steps()))
+	right := fmt.Sprintf("coils %d/%d  steps %d/%d", c.prog.CoilsDone(), c.coils, c.prog.DoneCount(), len(c.steps()))
 	if m.screen != screenGuide {
 		right = m.screen.String() + "  " + right
 	}

@@ -8,7 +8,6 @@ import (
 
 	tea "github.com/charmbracelet/bubbletea"
 
-	"coilwright/winding/journal"
 	"coilwright/winding/plan"
 )
 
@@ -25,7 +24,7 @@ func newTest(t *testing.T, w, h int) (*Model, *memRecorder) {
 
 // curStep is the current plan step.
 func curStep(m *Model) plan.Step {
-	s, _ := m.c.step(m.c.prog.current())
+	s, _ := m.c.step(m.c.prog.Current())
 	return s
 }
 
@@ -55,7 +54,7 @@ func windCoil(t *testing.T, m *Model) {
 
 func TestOpensOnFirstStepAndReachesCoilOne(t *testing.T) {
 	m, _ := newTest(t, 80, 24)
-	if got := m.c.prog.current(); got != 0 {
+	if got := m.c.prog.Current(); got != 0 {
 		t.Fatalf("current() = %d; want 0 (the first step)", got)
 	}
 	v := plain(m)
@@ -79,7 +78,7 @@ func TestOpensOnFirstStepAndReachesCoilOne(t *testing.T) {
 // M" shows exactly on coil steps, with N the coil's order.
 func TestCoilWordsOnlyOnCoilSteps(t *testing.T) {
 	m, _ := newTest(t, 100, 30)
-	for i := 0; i < 200 && m.c.prog.current() < len(m.c.steps()); i++ {
+	for i := 0; i < 200 && m.c.prog.Current() < len(m.c.steps()); i++ {
 		s := curStep(m)
 		v := plain(m)
 		got := coilOfRE.FindAllStringSubmatch(v, -1)
@@ -101,14 +100,14 @@ func TestCoilWordsOnlyOnCoilSteps(t *testing.T) {
 				keys(t, m, "9", "0", "0", "enter")
 			}
 			keys(t, m, "enter")
-			if !m.c.prog.done[s.Index-1] {
+			if !m.c.prog.Steps[s.Index-1].Done {
 				t.Fatalf("test step %d not done after readings (mode %v, error %q)", s.Index, m.guide.mode, m.guide.inErr)
 			}
 			continue
 		}
 		keys(t, m, "enter")
 	}
-	if c := m.c.prog.current(); c != len(m.c.steps()) {
+	if c := m.c.prog.Current(); c != len(m.c.steps()) {
 		t.Fatalf("walk stopped at step %d of %d", c+1, len(m.c.steps()))
 	}
 	if v := plain(m); !strings.Contains(v, "all steps done") {
@@ -119,7 +118,7 @@ func TestCoilWordsOnlyOnCoilSteps(t *testing.T) {
 func TestTurnCounter(t *testing.T) {
 	m, rec := newTest(t, 80, 24)
 	toNextCoil(t, m)
-	i := m.c.prog.current()
+	i := m.c.prog.Current()
 	tests := []struct {
 		name string
 		keys []string
@@ -136,11 +135,11 @@ func TestTurnCounter(t *testing.T) {
 	}
 	for _, tc := range tests {
 		keys(t, m, tc.keys...)
-		if got := m.c.prog.turns[i]; got != tc.want {
+		if got := m.c.prog.Steps[i].Turns; got != tc.want {
 			t.Errorf("%s: turns = %d; want %d", tc.name, got, tc.want)
 		}
 	}
-	if m.c.prog.done[i] {
+	if m.c.prog.Steps[i].Done {
 		t.Fatal("the coil is done before enter")
 	}
 	// Every change went to the record as a turns entry.
@@ -163,11 +162,11 @@ func TestCountDifferentFromPlanAsksAndRecordsActual(t *testing.T) {
 		t.Errorf("confirmation not shown:\n%s", v)
 	}
 	keys(t, m, "esc")
-	if m.guide.mode != modeWork || m.c.prog.done[s.Index-1] {
-		t.Fatalf("esc: mode %v, done %v; want back to counting", m.guide.mode, m.c.prog.done[s.Index-1])
+	if m.guide.mode != modeWork || m.c.prog.Steps[s.Index-1].Done {
+		t.Fatalf("esc: mode %v, done %v; want back to counting", m.guide.mode, m.c.prog.Steps[s.Index-1].Done)
 	}
 	keys(t, m, "enter", "y")
-	if !m.c.prog.done[s.Index-1] {
+	if !m.c.prog.Steps[s.Index-1].Done {
 		t.Fatal("coil not done after confirming")
 	}
 	es := rec.all()
@@ -180,13 +179,13 @@ func TestCountDifferentFromPlanAsksAndRecordsActual(t *testing.T) {
 func TestUndoLastStep(t *testing.T) {
 	m, _ := newTest(t, 80, 24)
 	windCoil(t, m)
-	before := m.c.prog.current()
+	before := m.c.prog.Current()
 	keys(t, m, "u")
 	if m.guide.mode != modeConfirmUndo {
 		t.Fatalf("mode = %v after u; want confirm-undo", m.guide.mode)
 	}
 	keys(t, m, "n")
-	if m.c.prog.current() != before {
+	if m.c.prog.Current() != before {
 		t.Fatalf("n undid the step")
 	}
 	keys(t, m, "u", "y")
@@ -194,7 +193,7 @@ func TestUndoLastStep(t *testing.T) {
 	if s.Kind != plan.StepCoil || s.Coil.Order != 1 {
 		t.Fatalf("after undo the current step is %d (%s); want coil 1", s.Index, s.Kind)
 	}
-	if got := m.c.prog.turns[s.Index-1]; got != s.Coil.Turns {
+	if got := m.c.prog.Steps[s.Index-1].Turns; got != s.Coil.Turns {
 		t.Errorf("undone coil shows %d turns; want the %d it had", got, s.Coil.Turns)
 	}
 }
@@ -210,8 +209,8 @@ func TestNoteTakesTypedKeys(t *testing.T) {
 		t.Fatalf("typing a note quit or left the guide (quitting %v, screen %v)", m.quitting, m.screen)
 	}
 	keys(t, m, "enter")
-	i := m.c.prog.current()
-	if got := m.c.prog.notes[i]; got != "q? o loose turn" {
+	i := m.c.prog.Current()
+	if got := m.c.prog.Steps[i].Note; got != "q? o loose turn" {
 		t.Errorf("note = %q; want %q", got, "q? o loose turn")
 	}
 	if !strings.Contains(plain(m), "q? o loose turn") {
@@ -224,7 +223,7 @@ func TestQuitWaitsForTheRecord(t *testing.T) {
 	toNextCoil(t, m)
 	rec.setFail(errDiskFull)
 	keys(t, m, " ", " ")
-	if got := m.c.prog.turns[m.c.prog.current()]; got != 2 {
+	if got := m.c.prog.Steps[m.c.prog.Current()].Turns; got != 2 {
 		t.Fatalf("turns = %d; want 2 kept in memory", got)
 	}
 	v := plain(m)
@@ -262,7 +261,7 @@ func TestResumeFromHistory(t *testing.T) {
 	keys(t, m, " ", " ", " ", " ", " ")
 	m2 := New(Options{Plan: m.c.plan, Recorder: &memRecorder{}, History: rec.all(), Now: fixedNow})
 	drive(t, m2, tea.WindowSizeMsg{Width: 80, Height: 24})
-	if a, b := m.c.prog.current(), m2.c.prog.current(); a != b {
+	if a, b := m.c.prog.Current(), m2.c.prog.Current(); a != b {
 		t.Fatalf("resumed at step %d; want %d", b+1, a+1)
 	}
 	v := plain(m2)
@@ -301,7 +300,7 @@ func TestGlobalKeys(t *testing.T) {
 
 func TestTestStepReadings(t *testing.T) {
 	m, rec := newTest(t, 100, 30)
-	for m.c.prog.current() < len(m.c.steps()) && curStep(m).Test != plan.TestInsulation {
+	for m.c.prog.Current() < len(m.c.steps()) && curStep(m).Test != plan.TestInsulation {
 		switch s := curStep(m); {
 		case s.Kind == plan.StepCoil:
 			windCoil(t, m)
@@ -329,12 +328,12 @@ func TestTestStepReadings(t *testing.T) {
 		t.Errorf("verdict not on screen:\n%s", plain(m))
 	}
 	keys(t, m, "enter")
-	if !m.c.prog.done[s.Index-1] {
+	if !m.c.prog.Steps[s.Index-1].Done {
 		t.Fatal("the test step is not done after recording")
 	}
 	es := rec.all()
 	r := es[len(es)-2]
-	if r.Kind != EntryReading || r.Verdict != "fail" || len(r.Values) != 4 || r.Values[0] != 2.5 || r.Values[1] != 500 || r.Values[3] != 0 {
+	if r.Kind != EntryReading || r.Verdict != "fail" || len(r.Readings) != 4 || r.Readings[plan.KeyIR1] != 2.5 || r.Readings[plan.KeyVolts] != 500 || r.Readings[plan.KeyIR10] != 0 {
 		t.Errorf("reading entry = %+v; want 2.5 MΩ at 500 V, IR10 not taken (0), fail", r)
 	}
 }
@@ -392,24 +391,21 @@ func TestRecordOfAChangedJob(t *testing.T) {
 	m, rec := newTest(t, 80, 24)
 	windCoil(t, m)
 	windCoil(t, m)
-	var events []journal.Event
-	for _, e := range rec.all() {
-		events = append(events, EventOf(m.c.plan, e))
-	}
+	events := rec.all()
 	// 9/6 winds U on teeth 1, 4, 7: the first coil still fits, the second
 	// (tooth 2 in the record) does not.
 	other := handPlan(t, 9, 6, 2)
-	m2 := New(Options{Plan: other, History: EntriesOf(other, events), Now: fixedNow})
+	m2 := New(Options{Plan: other, History: events, Now: fixedNow})
 	drive(t, m2, tea.WindowSizeMsg{Width: 80, Height: 24})
-	if got := m2.c.prog.coilsDone(other.Steps); got != 1 {
+	if got := m2.c.prog.CoilsDone(); got != 1 {
 		t.Errorf("coils done on the changed plan = %d; want 1", got)
 	}
-	if m2.ignored == 0 || !strings.Contains(plain(m2), "do not match") {
+	if m2.ignored == 0 || !strings.Contains(plain(m2), "left out") {
 		t.Errorf("ignored %d; screen lacks the notice:\n%s", m2.ignored, plain(m2))
 	}
 	// The same record on its own plan still resumes.
-	m3 := New(Options{Plan: m.c.plan, History: EntriesOf(m.c.plan, events), Now: fixedNow})
-	if got := m3.c.prog.coilsDone(m.c.plan.Steps); got != 2 || m3.ignored != 0 {
+	m3 := New(Options{Plan: m.c.plan, History: events, Now: fixedNow})
+	if got := m3.c.prog.CoilsDone(); got != 2 || m3.ignored != 0 {
 		t.Errorf("own plan: coils done %d, ignored %d; want 2, 0", got, m3.ignored)
 	}
 }

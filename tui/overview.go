@@ -93,12 +93,12 @@ func (o overviewModel) content() string {
 	c := o.c
 	st := c.st
 	var b strings.Builder
-	cur := c.prog.current()
+	cur := c.prog.Current()
 	steps := c.steps()
-	fmt.Fprintf(&b, "%s  %d of %d steps done, %d of %d coils\n", st.title.Render("all steps"), c.prog.count(), len(steps), c.prog.coilsDone(steps), c.coils)
+	fmt.Fprintf(&b, "%s  %d of %d steps done, %d of %d coils\n", st.title.Render("all steps"), c.prog.DoneCount(), len(steps), c.prog.CoilsDone(), c.coils)
 	digits := len(strconv.Itoa(len(steps)))
 	for i, s := range steps {
-		done := c.prog.done[i]
+		done := c.prog.Steps[i].Done
 		pick := "  "
 		if i == o.sel {
 			pick = "->"
@@ -132,10 +132,10 @@ func stepLine(c *shared, s plan.Step, i int) string {
 	case s.Coil != nil:
 		cs := s.Coil
 		t = fmt.Sprintf("coil %d of %d  tooth %d %s %s  %d turns", cs.Order, cs.Of, cs.Tooth, cs.Phase, cs.Direction, cs.Turns)
-		if c.prog.done[i] && c.prog.turns[i] != cs.Turns {
-			t += fmt.Sprintf(" (wound %d)", c.prog.turns[i])
-		} else if !c.prog.done[i] && c.prog.turns[i] > 0 {
-			t += fmt.Sprintf(" (%d so far)", c.prog.turns[i])
+		if c.prog.Steps[i].Done && c.prog.Steps[i].Turns != cs.Turns {
+			t += fmt.Sprintf(" (wound %d)", c.prog.Steps[i].Turns)
+		} else if !c.prog.Steps[i].Done && c.prog.Steps[i].Turns > 0 {
+			t += fmt.Sprintf(" (%d so far)", c.prog.Steps[i].Turns)
 		}
 	default:
 		title := s.Title
@@ -144,11 +144,11 @@ func stepLine(c *shared, s plan.Step, i int) string {
 		}
 		t = fmt.Sprintf("%-9s %s", s.Kind, title)
 	}
-	if r := c.prog.readings[i]; r != nil {
-		t += " -> " + strings.ToUpper(r.verdict)
+	if r := c.prog.Steps[i].Reading; r != nil {
+		t += " -> " + strings.ToUpper(r.Verdict)
 	}
-	if c.prog.notes[i] != "" {
-		t += "  note: " + c.prog.notes[i]
+	if c.prog.Steps[i].Note != "" {
+		t += "  note: " + c.prog.Steps[i].Note
 	}
 	return t
 }

@@ -128,11 +128,11 @@ func (g guideModel) panelLines(cw int, compact bool) *lines {
 	}
 	if ok && g.mode == modeNote {
 		b.raw("", g.note.View())
-	} else if ok && c.prog.notes[cur] != "" {
-		b.kv("note", c.prog.notes[cur])
+	} else if ok && c.prog.Steps[cur].Note != "" {
+		b.kv("note", c.prog.Steps[cur].Note)
 	}
 	if g.mode == modeConfirmUndo {
-		if last := c.prog.lastDone(); last >= 0 {
+		if last := c.prog.LastDone(); last >= 0 {
 			ls, _ := c.step(last)
 			b.raw("")
 			b.text(fmt.Sprintf("Undo step %d (%s)? enter/y undoes it, esc keeps it.", ls.Index, ls.Title), c.st.warn.Render)
@@ -143,20 +143,20 @@ func (g guideModel) panelLines(cw int, compact bool) *lines {
 
 // lookBanner says which step is looked at and what was recorded on it.
 func (g guideModel) lookBanner(s plan.Step) string {
-	p := g.c.prog
+	p := g.c.prog.Steps
 	i := s.Index - 1
 	state := "to do"
 	switch {
-	case p.done[i] && s.Coil != nil && p.turns[i] == s.Coil.Turns:
-		state = fmt.Sprintf("done, %d turns counted = plan", p.turns[i])
-	case p.done[i] && s.Coil != nil:
-		state = fmt.Sprintf("done, %d turns counted, plan %d", p.turns[i], s.Coil.Turns)
-	case p.done[i] && p.readings[i] != nil:
-		state = "done, " + strings.ToUpper(p.readings[i].verdict)
-	case p.done[i]:
+	case p[i].Done && s.Coil != nil && p[i].Turns == s.Coil.Turns:
+		state = fmt.Sprintf("done, %d turns counted = plan", p[i].Turns)
+	case p[i].Done && s.Coil != nil:
+		state = fmt.Sprintf("done, %d turns counted, plan %d", p[i].Turns, s.Coil.Turns)
+	case p[i].Done && p[i].Reading != nil:
+		state = "done, " + strings.ToUpper(p[i].Reading.Verdict)
+	case p[i].Done:
 		state = "done"
-	case s.Coil != nil && p.turns[i] > 0:
-		state = fmt.Sprintf("to do, %d of %d turns counted so far", p.turns[i], s.Coil.Turns)
+	case s.Coil != nil && p[i].Turns > 0:
+		state = fmt.Sprintf("to do, %d of %d turns counted so far", p[i].Turns, s.Coil.Turns)
 	}
 	return fmt.Sprintf("looking at step %d of %d (%s)", s.Index, len(g.c.steps()), state)
 }
@@ -174,7 +174,7 @@ func (g guideModel) coilView(b *lines, s plan.Step, compact bool) {
 	b.raw(fmt.Sprintf("tooth %s  phase %s  path %d, coil %d on the path",
 		c.st.strong.Render(strconv.Itoa(cs.Tooth)), c.st.phaseStyle(c.phaseIndex(cs.Phase)).Render(cs.Phase), cs.Path, cs.Position))
 	b.kvStrong("wind", cs.HowToWind)
-	n := c.prog.turns[s.Index-1]
+	n := c.prog.Steps[s.Index-1].Turns
 	if !compact {
 		b.raw("")
 	}
@@ -205,7 +205,7 @@ func (g guideModel) counter(b *lines, n, want int, compact bool, i int) {
 	of := fmt.Sprintf("of %d turns", want)
 	_, looking := g.lookedAt()
 	switch {
-	case looking && !g.c.prog.done[i]:
+	case looking && !g.c.prog.Steps[i].Done:
 		of += "  not wound yet"
 	case looking && n == want:
 		of += "  wound as planned"
@@ -307,8 +307,8 @@ func (g guideModel) testView(b *lines, s plan.Step) {
 		g.verdictView(b, g.verdict)
 		b.text("enter/y records it and goes on; esc types the readings again.", c.st.statusNow.Render)
 	default:
-		if r := c.prog.readings[s.Index-1]; r != nil {
-			b.kv("last", fmt.Sprintf("%v -> %s", r.values, strings.ToUpper(r.verdict)))
+		if r := c.prog.Steps[s.Index-1].Reading; r != nil {
+			b.kv("last", fmt.Sprintf("%s -> %s", c.readingText(s, r), strings.ToUpper(r.Verdict)))
 		}
 		if _, looking := g.lookedAt(); looking {
 			return
@@ -346,8 +346,8 @@ func limitText(t plan.Test) string { return plan.LimitText(t) }
 // doneView is the panel once every step is done.
 func (g guideModel) doneView(b *lines) {
 	c := g.c
-	b.titled("all steps done", fmt.Sprintf("%d of %d", c.prog.count(), len(c.steps())))
-	b.text(fmt.Sprintf("Every step of %s is recorded: %d coils wound.", c.planName(), c.prog.coilsDone(c.steps())), c.st.value.Render)
+	b.titled("all steps done", fmt.Sprintf("%d of %d", c.prog.DoneCount(), len(c.steps())))
+	b.text(fmt.Sprintf("Every step of %s is recorded: %d coils wound.", c.planName(), c.prog.CoilsDone()), c.st.value.Render)
 	b.text("o shows every step with its record; u takes back the last one; q quits.", c.st.dim.Render)
 }
 

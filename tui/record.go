@@ -5,46 +5,46 @@ import (
 	"time"
 
 	tea "github.com/charmbracelet/bubbletea"
+
+	"coilwright/winding/journal"
 )
 
-// EntryKind says what a progress entry records.
-type EntryKind string
+// Entry is one change of progress, in the order it happened: an event of
+// the progress record. The guide names the step by its 1-based Step.Index
+// and the kind, turns, note, readings and verdict; record stamps the time
+// and what the step is.
+type Entry = journal.Event
 
+// The kinds of entry the guide makes.
 const (
-	EntryTurns   EntryKind = "turns"   // the turn count of a coil in progress
-	EntryDone    EntryKind = "done"    // a step completed (coil steps carry the turns wound)
-	EntryUndo    EntryKind = "undo"    // the last completed step taken back
-	EntryNote    EntryKind = "note"    // a note attached to a step
-	EntryReading EntryKind = "reading" // readings of a test step and their verdict
+	EntryTurns   = journal.Turns   // the turn count of a coil in progress
+	EntryDone    = journal.Done    // a step completed (coil steps carry the turns wound)
+	EntryUndo    = journal.Undo    // the last completed step taken back
+	EntryNote    = journal.Note    // a note attached to a step
+	EntryReading = journal.Reading // readings of a test step and their verdict
 )
 
-// Entry is one change of progress, in the order it happened. Step is the
-// 1-based Step.Index in the plan.
-type Entry struct {
-	Kind    EntryKind
-	Step    int
-	Turns   int       // EntryTurns, EntryDone of a coil
-	Note    string    // EntryNote
-	Values  []float64 // EntryReading, in the order of the test's fields
-	Verdict string    // EntryReading: "pass", "warn" or "fail"
-	At      time.Time // set by the guide when the entry is made
-}
-
-// Recorder is the progress record the guide writes to. Append hands one
-// entry over and returns nil once it is durable. On an error the recorder
-// keeps the entry (and any after it) and writes it, in order, before the next
-// one or at Retry, which returns nil once nothing waits. The guide calls the
-// recorder only from tea.Cmds, one call at a time, never from Update or View.
+// Recorder is the progress record the guide writes to. Append hands entries
+// over, all that waited since the last write, and returns nil once they are
+// durable (written together and synced once). On an error the recorder keeps
+// them (and any after) and writes them, in order, before the next ones or at
+// Retry, which returns nil once nothing waits. The guide calls the recorder
+// only from tea.Cmds, one call at a time, never from Update or View.
 type Recorder interface {
-	Append(Entry) error
+	Append(...Entry) error
 	Retry() error
 }
+
+// noticer is a recorder that can say what it had to do about its file
+// (the record was removed or replaced and written again).
+type noticer interface{ Notices() []string }
 
 // savedMsg reports a write: err is nil when everything handed over is
 // durable; held is how many entries the recorder still keeps unwritten.
 type savedMsg struct {
-	err  error
-	held int
+	err     error
+	held    int
+	notices []string
 }
 
 // retryMsg asks the writer to try again after a failure.
@@ -70,6 +70,7 @@ type writer struct {
 	err      error // last write error, nil once everything is durable
 	held     int   // entries the recorder keeps unwritten
 	failures int
+	sent     int // writes started (Append or Retry calls handed to commands)
 }
 
 // push queues an entry.
@@ -91,19 +92,22 @@ func (w *writer) kick() tea.Cmd {
 		return nil
 	}
 	w.inflight = true
+	w.sent++
 	batch := w.queue
 	w.queue = nil
 	rec := w.rec
 	held := w.held
 	return func() tea.Msg {
-		var last error
-		for _, e := range batch {
-			if err := rec.Append(e); err != nil {
-				last = err
-			}
-		}
-		return savedMsg{err: last, held: heldAfter(last, held+len(batch))}
+		err := rec.Append(batch...)
+		return savedMsg{err: err, held: heldAfter(err, held+len(batch)), notices: noticesOf(rec)}
 	}
+}
+
+func noticesOf(rec Recorder) []string {
+	if n, ok := rec.(noticer); ok {
+		return n.Notices()
+	}
+	return nil
 }
 
 // heldAfter is how many entries wait after a write that ended with err.
@@ -144,10 +148,11 @@ func (w *writer) retry() tea.Cmd {
 		return w.kick()
 	}
 	w.inflight = true
+	w.sent++
 	rec := w.rec
 	held := w.held
 	return func() tea.Msg {
 		err := rec.Retry()
-		return savedMsg{err: err, held: heldAfter(err, held)}
+		return savedMsg{err: err, held: heldAfter(err, held), notices: noticesOf(rec)}
 	}
 }

@@ -4,11 +4,17 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"os"
+	"os/signal"
+	"sync"
+	"syscall"
+	"time"
 
 	tea "github.com/charmbracelet/bubbletea"
 
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // RunOptions say where the guide keeps progress and which terminal it uses.
@@ -19,23 +25,46 @@ type RunOptions struct {
 	AltScreen  bool      // use the terminal's alternate screen
 }
 
-// Run opens the progress record (locking it), replays it, runs the guide
-// until the user quits, then writes what is pending and releases the lock. A
-// record held by another guide is refused with a *journal.LockedError naming
-// the holder.
+// ErrStopped is returned by Run when a signal (SIGTERM, SIGINT, SIGHUP)
+// stopped the guide: what was counted is saved, but the work was cut short.
+var ErrStopped = errors.New("tui: stopped by a signal")
+
+// PanicError is returned by Run when the guide stopped on an internal error.
+// The terminal is restored, and everything written before it is in the record.
+type PanicError struct {
+	Record string // the progress record
+	Err    error
+}
+
+func (e *PanicError) Error() string {
+	return fmt.Sprintf("tui: the guide stopped on an internal error (%v); the terminal was restored and the work saved up to the last entry in %s. Start the guide again to go on, and please report the error with the lines printed above", e.Err, e.Record)
+}
+
+func (e *PanicError) Unwrap() error { return e.Err }
+
+// Run opens the progress record (locking it), folds it against the plan,
+// runs the guide until the user quits, then writes what is pending and
+// releases the lock. A record held by another guide is refused with a
+// *journal.LockedError naming the holder. A signal saves and returns
+// ErrStopped; a panic inside the guide restores the terminal and returns a
+// *PanicError.
 func Run(p *plan.Plan, o RunOptions) error {
 	store, events, torn, err := journal.Open(o.RecordPath, "bench")
 	if err != nil {
 		return err
 	}
+	rec := &lockedRecorder{JournalRecorder: JournalRecorder{Store: store}}
+	if progress.Fold(p, events).NeedsFingerprint() {
+		rec.Head = []journal.Event{progress.FingerprintEvent(p)}
+	}
 	m := New(Options{
 		Plan:     p,
-		Recorder: JournalRecorder{Store: store, Plan: p},
-		History:  EntriesOf(p, events),
+		Recorder: rec,
+		History:  events,
 		Notice:   TornNotice(torn),
 		Where:    o.RecordPath,
 	})
-	var popts []tea.ProgramOption
+	popts := []tea.ProgramOption{tea.WithoutSignalHandler()}
 	if o.In != nil {
 		popts = append(popts, tea.WithInput(o.In))
 	}
@@ -45,13 +74,90 @@ func Run(p *plan.Plan, o RunOptions) error {
 	if o.AltScreen {
 		popts = append(popts, tea.WithAltScreen())
 	}
-	_, runErr := tea.NewProgram(m, popts...).Run()
-	closeErr := store.Close()
-	if runErr != nil && !errors.Is(runErr, tea.ErrProgramKilled) {
-		return fmt.Errorf("tui: %w", runErr)
+	prog := tea.NewProgram(m, popts...)
+	sig := make(chan os.Signal, 1)
+	signal.Notify(sig, syscall.SIGTERM, syscall.SIGINT, syscall.SIGHUP)
+	stopSignals := make(chan struct{})
+	go func() {
+		for {
+			select {
+			case <-sig:
+				prog.Send(stopMsg{})
+			case <-stopSignals:
+				return
+			}
+		}
+	}()
+	final, runErr := prog.Run()
+	signal.Stop(sig)
+	close(stopSignals)
+
+	// Whatever the guide had not yet handed over is written now, after any
+	// write still running.
+	fm, _ := final.(*Model)
+	if fm == nil {
+		fm = m
 	}
-	if closeErr != nil {
+	rec.wait(fm.c.out.sent, 5*time.Second)
+	var flushErr error
+	if q := fm.c.out.queue; len(q) > 0 {
+		flushErr = rec.Append(q...)
+	}
+	closeErr := store.Close()
+	switch {
+	case errors.Is(runErr, tea.ErrProgramPanic):
+		return &PanicError{Record: store.Path(), Err: runErr}
+	case runErr != nil && !errors.Is(runErr, tea.ErrProgramKilled):
+		return fmt.Errorf("tui: %w", runErr)
+	case closeErr != nil:
 		return fmt.Errorf("tui: progress not fully saved: %w", closeErr)
+	case flushErr != nil:
+		return fmt.Errorf("tui: progress not fully saved: %w", flushErr)
+	case fm.stopped:
+		return ErrStopped
 	}
 	return nil
+}
+
+// stopMsg asks the guide to save and stop (a signal arrived).
+type stopMsg struct{}
+
+// lockedRecorder lets Run write what is left after the program ended while
+// a write the program started may still run, and counts the writes done.
+type lockedRecorder struct {
+	mu    sync.Mutex
+	calls int
+	JournalRecorder
+}
+
+func (r *lockedRecorder) Append(es ...Entry) error {
+	r.mu.Lock()
+	defer r.mu.Unlock()
+	r.calls++
+	return r.JournalRecorder.Append(es...)
+}
+
+func (r *lockedRecorder) Retry() error {
+	r.mu.Lock()
+	defer r.mu.Unlock()
+	r.calls++
+	return r.JournalRecorder.Retry()
+}
+
+func (r *lockedRecorder) Notices() []string {
+	r.mu.Lock()
+	defer r.mu.Unlock()
+	return r.JournalRecorder.Notices()
+}
+
+// wait returns once the recorder has done n writes, or after d.
+func (r *lockedRecorder) wait(n int, d time.Duration) {
+	for end := time.Now().Add(d); time.Now().Before(end); time.Sleep(5 * time.Millisecond) {
+		r.mu.Lock()
+		done := r.calls >= n
+		r.mu.Unlock()
+		if done {
+			return
+		}
+	}
 }

@@ -33,8 +33,10 @@ record, so the guide opens where the work stopped, even after a crash:
                  (~/.local/state/coilwright/demo.progress when XDG_STATE_HOME
                  is not set)
   --progress F   keeps it in F instead
-Only one guide at a time may use a record; a second is refused with the name
-of the holder. Delete the record to start the job again.`,
+Only one guide at a time may use a record (however its path is written); a
+second is refused with the name of the holder. If the job was edited since
+(other turns, another winding), the guide says what changed and which
+entries no longer fit. Delete the record to start the job again.`,
 		Example: "  coilwright bench --demo\n  coilwright bench stator.toml\n  coilwright bench --demo --progress /tmp/try.progress",
 		Args:    maxArgs(1),
 		RunE: func(cmd *cobra.Command, args []string) error {
@@ -55,8 +57,11 @@ of the holder. Delete the record to start the job again.`,
 			}
 			err = tui.Run(p, tui.RunOptions{RecordPath: rec, AltScreen: true})
 			var le *journal.LockedError
-			if errors.As(err, &le) {
+			switch {
+			case errors.As(err, &le):
 				return fmt.Errorf("bench: another guide has this job open: %w", err)
+			case errors.Is(err, tui.ErrStopped):
+				return fmt.Errorf("bench: stopped by a signal; everything counted is saved in %s", rec)
 			}
 			return err
 		},

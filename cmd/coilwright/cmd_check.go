@@ -12,6 +12,7 @@ import (
 
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 	"coilwright/winding/verify"
 )
 
@@ -344,82 +345,21 @@ func anyChanged(ch func(string) bool, names ...string) bool {
 }
 
 // recordCheck appends the readings and the verdict to the progress record:
-// one event for the whole check, then one per plan test it judged, on that
-// test's step, so the bench guide and the printed test record show them.
-// Events of no step are the check command's: the bench guide shows them apart.
+// one event per plan test the check judged, on that test's step, so the bench
+// guide and the printed test record show them (progress.CheckEvents). The
+// plan's fingerprint goes first when the record lacks it.
 func recordCheck(path string, p *plan.Plan, r verify.Readings, rep *verify.Report) error {
-	s, _, _, err := journal.Open(path, "coilwright check")
+	s, events, _, err := journal.Open(path, "coilwright check")
 	if err != nil {
 		return err
 	}
-	ev := journal.Event{Kind: journal.Reading, Test: "check", Verdict: string(rep.Verdict), Readings: map[string]float64{}}
-	var open []string
-	put := func(name string, v float64) {
-		if math.IsInf(v, 1) {
-			open = append(open, name)
-			return
-		}
-		ev.Readings[name] = v
+	evs := progress.CheckEvents(p, r, rep)
+	if progress.Fold(p, events).NeedsFingerprint() {
+		evs = append([]journal.Event{progress.FingerprintEvent(p)}, evs...)
 	}
-	if len(r.PerPhase) == 3 {
-		put("per_phase_u", r.PerPhase[0])
-		put("per_phase_v", r.PerPhase[1])
-		put("per_phase_w", r.PerPhase[2])
-	} else if r.HasResistance() {
-		put("uv", r.UV)
-		put("vw", r.VW)
-		put("wu", r.WU)
-	}
-	if r.HasResistance() || r.Insulation != nil {
-		put("temp", r.TempC)
-	}
-	if r.LeadOhm > 0 {
-		put("lead_ohm", r.LeadOhm)
-	}
-	if r.FourWire {
-		put("four_wire", 1)
-	}
-	if in := r.Insulation; in != nil {
-		put("ir1", in.IR1MOhm)
-		if in.IR10MOhm > 0 {
-			put("ir10", in.IR10MOhm)
-		}
-		put("ir_volts", in.Volts)
-	}
-	if w := r.Withstand; w != nil {
-		put("hv_volts", w.Volts)
-		put("hv_passed", map[bool]float64{true: 1, false: 0}[w.Passed])
-	}
-	if e := r.EMF; e != nil {
-		put("emf_uv", e.UV)
-		put("emf_vw", e.VW)
-		put("emf_wu", e.WU)
-		put("rpm", e.RPM)
-	}
-	for _, o := range r.Polarity {
-		put(plan.PoleKey(o.Tooth), o.Pole.Value())
-	}
-	if len(open) > 0 {
-		ev.Note = "open (OL): " + strings.Join(open, ", ")
-	}
-	for _, fd := range rep.Findings {
-		msg := string(fd.Severity) + ": "
-		if fd.Phase != "" {
-			msg += "phase " + fd.Phase + ": "
-		}
-		ev.Findings = append(ev.Findings, msg+fd.Message)
-	}
-	if err := s.Append(ev); err != nil {
+	if err := s.Append(evs...); err != nil {
 		s.Close()
 		return err
-	}
-	for _, tr := range verify.PerTest(p, r, rep) {
-		e := journal.Event{Kind: journal.Reading, Step: tr.Step, Test: tr.Test, Readings: tr.Values,
-			Verdict: string(tr.Verdict), Note: "recorded by coilwright check"}
-		if err := s.Append(e); err != nil {
-			s.Close()
-			return err
-		}
 	}
 	return s.Close()
 }

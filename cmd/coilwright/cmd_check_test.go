@@ -11,6 +11,7 @@ import (
 	"coilwright/winding/job"
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 	"coilwright/winding/verify"
 	"coilwright/winding/wire"
 )
@@ -174,36 +175,38 @@ func TestCheckRecord(t *testing.T) {
 	if err != nil || torn != nil {
 		t.Fatalf("record: %v, %v", torn, err)
 	}
-	// Each check writes one summary event, then one per plan test it judged,
-	// on that test's step: resistance and balance for the two line checks,
-	// resistance alone for the open phase (no balance of an open winding).
-	var ev []journal.Event
-	perTest := map[string]int{}
+	// The plan's fingerprint once, then each check writes one event per plan
+	// test it judged, on that test's step: resistance and balance for the two
+	// line checks, resistance alone for the open phase (no balance of an open
+	// winding). No summary event of the whole check: nobody reads one.
+	perTest := map[string][]journal.Event{}
+	plans := 0
 	for _, e := range all {
-		if e.Test == "check" {
-			ev = append(ev, e)
+		if e.Kind == journal.Plan {
+			plans++
 			continue
 		}
-		perTest[e.Test]++
-		if e.Step == 0 {
-			t.Errorf("per-test event %+v has no step", e)
+		perTest[e.Test] = append(perTest[e.Test], e)
+		if e.Step == 0 || e.Key == "" {
+			t.Errorf("per-test event %+v has no step or key", e)
 		}
 	}
-	if len(ev) != 3 || perTest[plan.TestResistance] != 3 || perTest[plan.TestBalance] != 2 {
-		t.Fatalf("record = %d check events and per-test %v; want 3, resistance 3, balance 2", len(ev), perTest)
+	if plans != 1 || len(perTest[plan.TestResistance]) != 3 || len(perTest[plan.TestBalance]) != 2 || len(perTest) != 2 {
+		t.Fatalf("record = %d plan events and per-test %v; want 1, resistance 3, balance 2", plans, perTest)
 	}
-	e := ev[0]
-	if e.Kind != journal.Reading || e.Test != "check" || e.Verdict != "pass" || e.Readings["temp"] != 21 || e.Readings["uv"] == 0 || len(e.Findings) == 0 {
-		t.Errorf("recorded event = %+v; want a check reading with uv, temp 21, pass and findings", e)
+	r := perTest[plan.TestResistance]
+	if r[0].Verdict != "pass" || r[0].Readings["temp"] != 21 || r[0].Readings["uv"] == 0 || r[1].Seq <= r[0].Seq {
+		t.Errorf("first resistance event = %+v; want pass with uv and temp 21, seq rising", r[0])
 	}
-	if ev[1].Seq <= ev[0].Seq {
-		t.Errorf("second check event seq = %d; want after %d", ev[1].Seq, ev[0].Seq)
+	if r[2].Verdict != "fail" || !strings.Contains(r[2].Note, "open (OL): phase W") {
+		t.Errorf("open-phase event = %+v; want fail with the open reading noted", r[2])
 	}
-	if ev[2].Verdict != "fail" || !strings.Contains(ev[2].Note, "per_phase_w") {
-		t.Errorf("open-phase event = %+v; want fail with the open reading noted", ev[2])
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		t.Fatal(err)
 	}
-	st := journal.Replay(ev)
-	if st.Readings["check"].Seq != ev[2].Seq {
-		t.Errorf("Replay latest check = seq %d; want %d", st.Readings["check"].Seq, ev[2].Seq)
+	st := progress.Fold(p, all)
+	if len(st.Dropped) != 0 || st.Tests[plan.TestResistance].Verdict != "fail" {
+		t.Errorf("Fold(record) dropped %+v, resistance %+v; want none dropped, the latest (fail) standing", st.Dropped, st.Tests[plan.TestResistance])
 	}
 }

@@ -37,23 +37,17 @@ not overwrite a file unless --force is given. Use -o - to write to standard outp
 				_, err := cmd.OutOrStdout().Write(data)
 				return err
 			}
-			flags := os.O_WRONLY | os.O_CREATE | os.O_EXCL
-			if force {
-				flags = os.O_WRONLY | os.O_CREATE | os.O_TRUNC
+			if !force {
+				if _, err := os.Lstat(out); err == nil {
+					return badInputf("%s already exists; give --force to overwrite it, or another name", out)
+				}
 			}
-			f, err := os.OpenFile(out, flags, 0o644)
-			if errors.Is(err, fs.ErrExist) {
-				return badInputf("%s already exists; give --force to overwrite it, or another name", out)
-			}
-			if err != nil {
+			if err := writeOutput("-o", out, data); err != nil {
+				var ue *usageError
+				if errors.As(err, &ue) {
+					return err
+				}
 				return badInputf("cannot write %s: %v", out, pathErr(err))
-			}
-			if _, err := f.Write(data); err != nil {
-				f.Close()
-				return fmt.Errorf("writing %s: %w", out, err)
-			}
-			if err := f.Close(); err != nil {
-				return fmt.Errorf("writing %s: %w", out, err)
 			}
 			what := "job template"
 			if demo {

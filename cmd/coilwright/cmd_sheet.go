@@ -12,6 +12,8 @@ import (
 
 	"coilwright/printout"
 	"coilwright/winding/journal"
+	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 func init() { register(newSheetCmd) }
@@ -58,11 +60,20 @@ letter and a line pattern so the pack reads on a monochrome printer.`,
 				return err
 			}
 			rec, explicit := recordPath(progress, path)
-			readings, pr, err := loadProgress(cmd, rec, explicit)
+			if out != "-" {
+				keep := []protected{{"the job file", path}, {"the progress record", rec}, {"the progress record's lock", lockOf(rec)}}
+				if path != "" {
+					keep = append(keep, protected{"the job's progress record", journal.PathFor(path)}, protected{"the job's progress record's lock", lockOf(journal.PathFor(path))})
+				}
+				if err := refuseProtected("-o", out, keep...); err != nil {
+					return err
+				}
+			}
+			st, err := loadProgress(cmd, p, rec, explicit)
 			if err != nil {
 				return err
 			}
-			pk, err := printout.Build(p, printout.Options{Paper: pp, Date: when, Readings: readings, Progress: pr})
+			pk, err := printout.Build(p, printout.Options{Paper: pp, Date: when, Progress: st})
 			if err != nil {
 				return err
 			}
@@ -74,8 +85,8 @@ letter and a line pattern so the pack reads on a monochrome printer.`,
 				_, err = cmd.OutOrStdout().Write(buf.Bytes())
 				return err
 			}
-			if err := os.WriteFile(out, buf.Bytes(), 0o644); err != nil {
-				return fmt.Errorf("sheet: write %s: %w", out, err)
+			if err := writeOutput("-o", out, buf.Bytes()); err != nil {
+				return fmt.Errorf("sheet: %w", err)
 			}
 			fmt.Fprintf(cmd.ErrOrStderr(), "wrote %s: %d sheets, %d KiB\n", out, len(pk.Pages), (buf.Len()+1023)/1024)
 			return nil
@@ -107,63 +118,42 @@ func recordPath(flag, jobPath string) (path string, explicit bool) {
 	return path, false
 }
 
-// loadProgress reads and replays the progress record: the readings, latest
-// per test, and the steps done with their dates, turns and notes. No record
-// (a file that does not exist) gives nil for both; a torn last line is left
-// out, as the bench guide does, and said on stderr.
-func loadProgress(cmd *cobra.Command, path string, explicit bool) (map[string]printout.Reading, *printout.Progress, error) {
+// lockOf is the lock file of a record, "" for none.
+func lockOf(rec string) string {
+	if rec == "" {
+		return ""
+	}
+	return journal.LockPathFor(rec)
+}
+
+// loadProgress reads the progress record and folds it against the plan. No
+// record (a file that does not exist) gives nil; a torn last line is left
+// out, as the bench guide does, and said on stderr, with what the fold found
+// (a changed job, entries left out).
+func loadProgress(cmd *cobra.Command, p *plan.Plan, path string, explicit bool) (*progress.State, error) {
 	if path == "" {
-		return nil, nil, nil
+		return nil, nil
 	}
 	data, err := os.ReadFile(path)
 	if errors.Is(err, fs.ErrNotExist) {
 		if explicit {
-			return nil, nil, badInputf("--progress %s: no such record; give the file the bench or check --record wrote", path)
+			return nil, badInputf("--progress %s: no such record; give the file the bench or check --record wrote", path)
 		}
-		return nil, nil, nil
+		return nil, nil
 	}
 	if err != nil {
-		return nil, nil, fmt.Errorf("sheet: read progress record: %w", err)
+		return nil, fmt.Errorf("sheet: read progress record: %w", err)
 	}
 	events, torn, err := journal.Decode(data)
 	if err != nil {
-		return nil, nil, badInput(err)
+		return nil, badInputf("sheet: progress record %s: %v", path, err)
 	}
 	if torn != nil {
 		fmt.Fprintf(cmd.ErrOrStderr(), "sheet: the last line of %s was cut short (%s) and is left out\n", path, torn)
 	}
-	st := journal.Replay(events)
-	readings := make(map[string]printout.Reading, len(st.Readings))
-	for name, e := range st.Readings {
-		readings[name] = printout.Reading{Values: e.Readings, Taken: e.Time, Verdict: e.Verdict}
+	st := progress.Fold(p, events)
+	for _, line := range st.Summary() {
+		fmt.Fprintf(cmd.ErrOrStderr(), "sheet: %s\n", line)
 	}
-	return readings, progressOf(events, st), nil
-}
-
-// progressOf puts a replayed record as the printout's plain data: each done
-// step with the time of the done event that stands and, for a coil, its
-// tooth and actual turns; the notes in order; the time of the latest entry.
-func progressOf(events []journal.Event, st journal.State) *printout.Progress {
-	pr := &printout.Progress{Steps: make(map[int]printout.StepProgress, len(st.Done))}
-	standing := map[int]journal.Event{} // the latest done event of each step
-	for _, e := range events {
-		if e.Time.After(pr.Recorded) {
-			pr.Recorded = e.Time
-		}
-		if e.Kind == journal.Done {
-			standing[e.Step] = e
-		}
-	}
-	for _, step := range st.Done {
-		e := standing[step]
-		sp := printout.StepProgress{Done: true, When: e.Time, Tooth: e.Tooth}
-		if e.Tooth > 0 {
-			sp.Turns = st.CoilTurns[e.Tooth]
-		}
-		pr.Steps[step] = sp
-	}
-	for _, n := range st.Notes {
-		pr.Notes = append(pr.Notes, printout.Note{Step: n.Step, Tooth: n.Tooth, Text: n.Note, When: n.Time})
-	}
-	return pr
+	return st, nil
 }

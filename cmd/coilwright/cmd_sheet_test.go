@@ -13,6 +13,7 @@ import (
 	"coilwright/winding/job"
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 func TestSheetDemo(t *testing.T) {
@@ -141,6 +142,11 @@ func TestSheetPrintsTheRecord(t *testing.T) {
 	}
 	at := time.Date(2026, 11, 21, 10, 0, 0, 0, time.FixedZone("bench", 3600))
 	const note = "17 fit on the last layer, not 18"
+	// as the guide records them: the plan's fingerprint, then each entry
+	// stamped with what its step is
+	if err := s.Append(progress.FingerprintEvent(p)); err != nil {
+		t.Fatal(err)
+	}
 	for _, e := range []journal.Event{
 		{Time: at, Kind: journal.Done, Step: 1},
 		{Time: at, Kind: journal.Done, Step: a.Index, Tooth: a.Coil.Tooth, Turns: a.Coil.Turns},
@@ -150,7 +156,7 @@ func TestSheetPrintsTheRecord(t *testing.T) {
 		{Time: at, Kind: journal.Done, Step: coils[2].Index, Tooth: coils[2].Coil.Tooth, Turns: 99},
 		{Time: at.Add(time.Hour), Kind: journal.Undo, Step: coils[2].Index},
 	} {
-		if err := s.Append(e); err != nil {
+		if err := s.Append(progress.Stamp(p, e)); err != nil {
 			t.Fatal(err)
 		}
 	}
@@ -204,7 +210,11 @@ func TestSheetDemoRecord(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	line, _ := journal.Line(journal.Event{Seq: 1, Time: time.Date(2026, 11, 22, 9, 0, 0, 0, time.UTC), Kind: journal.Done, Step: 1})
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		t.Fatal(err)
+	}
+	line, _ := journal.Line(progress.Stamp(p, journal.Event{Seq: 1, Time: time.Date(2026, 11, 22, 9, 0, 0, 0, time.UTC), Kind: journal.Done, Step: 1}))
 	if err := os.WriteFile(rec, append(line, []byte(`{"seq":2,"kind":"do`)...), 0o644); err != nil {
 		t.Fatal(err)
 	}
@@ -229,4 +239,44 @@ func demoSteps(t *testing.T) int {
 		t.Fatal(err)
 	}
 	return len(p.Steps)
+}
+
+// sheet never writes over the job, its record or the record's lock, however
+// the name is written (a symbolic link, another spelling of the path).
+func TestSheetRefusesJobAndRecord(t *testing.T) {
+	dir := t.TempDir()
+	jobPath := filepath.Join(dir, "leat.toml")
+	os.WriteFile(jobPath, job.DemoTOML(), 0o644)
+	rec := journal.PathFor(jobPath)
+	os.WriteFile(rec, nil, 0o644)
+	link := filepath.Join(dir, "link.pdf")
+	if err := os.Symlink(rec, link); err != nil {
+		t.Skip("no symbolic links here:", err)
+	}
+	other := filepath.Join(dir, "elsewhere.progress")
+	os.WriteFile(other, nil, 0o644)
+	cases := []struct{ name, out string }{
+		{"the job", jobPath},
+		{"the job spelt otherwise", filepath.Join(dir, ".", "..", filepath.Base(dir), "leat.toml")},
+		{"the record", rec},
+		{"the record through a link", link},
+		{"the record's lock, not there yet", journal.LockPathFor(rec)},
+		{"--progress", other},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			before, _ := os.ReadFile(c.out)
+			args := []string{"sheet", jobPath, "-o", c.out}
+			if c.name == "--progress" {
+				args = append(args, "--progress", other)
+			}
+			code, _, stderr := runCLI(t, args...)
+			if code != 2 || strings.Count(strings.TrimSpace(stderr), "\n") != 0 || !strings.Contains(stderr, "would destroy") {
+				t.Errorf("sheet -o %s = exit %d, %q; want 2 and one line", c.out, code, stderr)
+			}
+			if after, _ := os.ReadFile(c.out); string(after) != string(before) {
+				t.Errorf("sheet -o %s changed the file", c.out)
+			}
+		})
+	}
 }

@@ -101,7 +101,9 @@ func Changes(was, is map[string]string) []string {
 			keys = append(keys, k)
 		}
 	}
-	sort.Slice(keys, func(i, j int) bool { return order(keys[i]) < order(keys[j]) || order(keys[i]) == order(keys[j]) && keys[i] < keys[j] })
+	sort.Slice(keys, func(i, j int) bool {
+		return order(keys[i]) < order(keys[j]) || order(keys[i]) == order(keys[j]) && keys[i] < keys[j]
+	})
 	var out []string
 	for _, k := range keys {
 		a, b := was[k], is[k]

@@ -19,8 +19,8 @@ func Fold(p *plan.Plan, events []journal.Event) *State {
 	var last map[string]string
 	for _, e := range events {
 		s.LastSeq = max(s.LastSeq, e.Seq)
-		if e.Time.After(s.Recorded) {
-			s.Recorded = e.Time
+		if e.Kind != journal.Plan && e.Time.After(s.Recorded) {
+			s.Recorded = e.Time // work, not the plan's fingerprint
 		}
 		if e.Kind == journal.Plan {
 			last = e.Plan

@@ -3,6 +3,7 @@ package progress
 import (
 	"fmt"
 	"strconv"
+	"strings"
 
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
@@ -26,6 +27,8 @@ func baseKey(s plan.Step) string {
 		return fmt.Sprintf("jumper %d>%d", s.Jumper.FromTooth, s.Jumper.ToTooth)
 	case s.Kind == plan.StepSeparator && s.Slot > 0:
 		return "separator " + strconv.Itoa(s.Slot)
+	case s.Kind == plan.StepTest && s.Test != "" && len(s.Phases) > 0:
+		return "test " + s.Test + " " + strings.Join(s.Phases, ",")
 	case s.Kind == plan.StepTest && s.Test != "":
 		return "test " + s.Test
 	}

@@ -230,3 +230,25 @@ func TestCheckEventsStamped(t *testing.T) {
 }
 
 func itoa(n int) string { return strconv.Itoa(n) }
+
+// Poles seen with check --polarity go on the polarity step of their phase.
+func TestCheckEventsPolarity(t *testing.T) {
+	p := demoPlan(t, nil)
+	var r verify.Readings
+	for _, tp := range p.Polarity {
+		if tp.Phase == "U" {
+			r.Polarity = append(r.Polarity, verify.PoleReading{Phase: tp.Phase, Tooth: tp.Tooth, Pole: tp.Pole})
+		}
+	}
+	rep, err := verify.Check(p, r)
+	if err != nil {
+		t.Fatal(err)
+	}
+	evs := progress.CheckEvents(p, r, rep)
+	if len(evs) != 1 || evs[0].Key != "test polarity U" || evs[0].Verdict != "pass" || len(evs[0].Readings) != len(r.Polarity) {
+		t.Fatalf("CheckEvents(poles of U as planned) = %+v; want one pass on the polarity step of U with every pole", evs)
+	}
+	if s := progress.Fold(p, evs); len(s.Dropped) != 0 || s.Steps[evs[0].Step-1].Reading == nil {
+		t.Errorf("Fold(polarity event) dropped %+v; want it on its step", s.Dropped)
+	}
+}
