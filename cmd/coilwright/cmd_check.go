@@ -196,7 +196,7 @@ func fmtReading(v float64) string {
 }
 
 // readings gathers the readings from the file and the flags. Resistance and
-// temperature are required.
+// temperature are required unless only other tests are given.
 func (f *checkFlags) readings(cmd *cobra.Command) (verify.Readings, error) {
 	var r verify.Readings
 	haveTemp := false
@@ -269,20 +269,6 @@ func (f *checkFlags) readings(cmd *cobra.Command) (verify.Readings, error) {
 		!anyChanged(ch, "uv", "vw", "wu", "per-phase", "temp", "ir1", "ir10", "ir-volts", "hv-pass", "hv-fail", "hv-volts", "emf-uv", "emf-vw", "emf-wu", "rpm") {
 		return r, nil // a polarity test on its own needs no resistance or temperature
 	}
-	if len(r.PerPhase) == 0 {
-		for _, x := range []struct {
-			name string
-			v    float64
-		}{{"uv", r.UV}, {"vw", r.VW}, {"wu", r.WU}} {
-			if x.v == 0 && !ch(x.name) {
-				return r, badInputf("--%s is missing: give all three line-to-line readings --uv, --vw and --wu in ohm (or --per-phase U,V,W)", x.name)
-			}
-		}
-	}
-	if !haveTemp {
-		return r, badInputf("--temp is missing: the winding temperature in °C is needed to correct the readings to 20 °C")
-	}
-
 	// Insulation.
 	if ch("ir1") || ch("ir10") || ch("ir-volts") {
 		if r.Insulation == nil {
@@ -331,6 +317,28 @@ func (f *checkFlags) readings(cmd *cobra.Command) (verify.Readings, error) {
 				return r, badInputf("--%s is missing: a back-EMF check needs --emf-uv, --emf-vw, --emf-wu and --rpm", name)
 			}
 		}
+	}
+	// Resistance is required unless the check is of other tests only (a
+	// withstand, insulation or back-EMF test on its own); the temperature
+	// wherever a reading is corrected by it (resistance, insulation).
+	other := r.Insulation != nil || r.Withstand != nil || r.EMF != nil
+	if r.HasResistance() || anyChanged(ch, "uv", "vw", "wu", "per-phase", "lead-ohm", "four-wire") || !other {
+		if len(r.PerPhase) == 0 {
+			for _, x := range []struct {
+				name string
+				v    float64
+			}{{"uv", r.UV}, {"vw", r.VW}, {"wu", r.WU}} {
+				if x.v == 0 && !ch(x.name) {
+					return r, badInputf("--%s is missing: give all three line-to-line readings --uv, --vw and --wu in ohm (or --per-phase U,V,W)", x.name)
+				}
+			}
+		}
+		if !haveTemp {
+			return r, badInputf("--temp is missing: the winding temperature in °C is needed to correct the readings to 20 °C")
+		}
+	}
+	if r.Insulation != nil && !haveTemp {
+		return r, badInputf("--temp is missing: the winding temperature in °C is needed to correct the insulation resistance to 40 °C")
 	}
 	return r, nil
 }

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -208,5 +209,40 @@ func TestCheckRecord(t *testing.T) {
 	st := progress.Fold(p, all)
 	if len(st.Dropped) != 0 || st.Tests[plan.TestResistance].Verdict != "fail" {
 		t.Errorf("Fold(record) dropped %+v, resistance %+v; want none dropped, the latest (fail) standing", st.Dropped, st.Tests[plan.TestResistance])
+	}
+}
+
+// check --hv-pass --hv-volts V on its own judges the withstand test against
+// the plan's test voltage (IEC 60034-1 clause 9.2, from memory: under 1 kW
+// and 100 V 500 V + 2·U_N, else 1000 V + 2·U_N and at least 1500 V). By hand:
+// the template (24 V) 548 V rounded up to 550 V; rated 230 V, 1500 V. It
+// passes there and does not pass at 40 % of it.
+func TestCheckWithstandAgainstPlan(t *testing.T) {
+	dir := t.TempDir()
+	for _, c := range []struct {
+		rated, test string
+		low         string
+	}{{"24", "550", "220"}, {"230", "1500", "600"}} {
+		src := strings.Replace(string(job.TemplateTOML()), "voltage_v = 24 ", "voltage_v = "+c.rated+" ", 1)
+		path := filepath.Join(dir, "t"+c.rated+".toml")
+		if err := os.WriteFile(path, []byte(src), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		for _, k := range []struct{ volts, want string }{{c.test, "pass"}, {c.low, "fail"}} {
+			code, out, errs := runCLI(t, "check", path, "--hv-pass", "--hv-volts", k.volts, "--json")
+			var rep struct {
+				Verdict   string `json:"verdict"`
+				Withstand struct {
+					Verdict     string  `json:"verdict"`
+					Recommended float64 `json:"recommended_v"`
+				} `json:"withstand"`
+			}
+			if err := json.Unmarshal([]byte(out), &rep); err != nil {
+				t.Fatalf("rated %s V, check --hv-volts %s: exit %d, %v; stderr %s", c.rated, k.volts, code, err, errs)
+			}
+			if rep.Withstand.Verdict != k.want || strconv.FormatFloat(rep.Withstand.Recommended, 'f', -1, 64) != c.test {
+				t.Errorf("rated %s V, withstand held at %s V: %s against %g V; want %s against %s V", c.rated, k.volts, rep.Withstand.Verdict, rep.Withstand.Recommended, k.want, c.test)
+			}
+		}
 	}
 }

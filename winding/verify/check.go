@@ -77,6 +77,10 @@ type checker struct {
 	p   *plan.Plan
 	r   Readings
 	rep *Report
+	// connectionProven: the resistance readings of this check fit the
+	// plan's connection (every phase within 25 % of the plan, far from the
+	// 1/3 or 3 that star and delta confused give).
+	connectionProven bool
 }
 
 func (c *checker) add(f Finding) {

@@ -145,8 +145,22 @@ func (c *checker) backEMF() {
 		res.DeviationPercent = 100 * (ratio - 1)
 		dev := math.Abs(res.DeviationPercent)
 		switch {
+		case (math.Abs(ratio/math.Sqrt(3)-1) < 0.05 || math.Abs(ratio*math.Sqrt(3)-1) < 0.05) && c.connectionProven:
+			// The line resistances have shown the connection (a star
+			// plan connected delta reads a third, IEC 60028 series and
+			// parallel sums), so a √3 factor in the EMF is not star and
+			// delta confused: the flux estimate behind the prediction (an
+			// air-gap flux density or test-coil figure) is the likely
+			// cause, or the speed.
+			sev := Warn
+			if dev > EMFLevelFailPercent {
+				sev = Fail
+			}
+			add(sev, fmt.Sprintf("back-EMF %.3g V is about %s the predicted %.3g V line to line at %.0f rpm; the resistance readings of this check prove the %s connection, so star and delta are not confused: the magnet flux per pole is about %s the plan's estimate (check the air-gap flux density or test-coil figure it came from), or the speed reading is off",
+				mean, map[bool]string{true: "√3×", false: "1/√3 of"}[ratio > 1], res.ExpectedLineV, e.RPM, c.p.Connection,
+				map[bool]string{true: "√3×", false: "1/√3 of"}[ratio > 1]), nil)
 		case math.Abs(ratio/math.Sqrt(3)-1) < 0.05 || math.Abs(ratio*math.Sqrt(3)-1) < 0.05:
-			add(Fail, fmt.Sprintf("back-EMF %.3g V is about %s the predicted %.3g V line to line at %.0f rpm: star and delta confused, or phase voltage read as line voltage",
+			add(Fail, fmt.Sprintf("back-EMF %.3g V is about %s the predicted %.3g V line to line at %.0f rpm: star and delta confused, a phase voltage read as line voltage, or the magnet flux per pole that far from the plan's estimate; the line resistances (--uv --vw --wu) tell the connection",
 				mean, map[bool]string{true: "√3×", false: "1/√3 of"}[ratio > 1], res.ExpectedLineV, e.RPM), nil)
 		case dev <= EMFLevelWarnPercent:
 			add(Pass, fmt.Sprintf("back-EMF %.3g V line to line at %.0f rpm, %+.1f %% from the predicted %.3g V", mean, e.RPM, res.DeviationPercent, res.ExpectedLineV), nil)

@@ -195,6 +195,7 @@ type ratioCause struct {
 
 // level judges the (balanced) level of the good phases against the plan.
 func (c *checker) level(level float64, good []int) {
+	c.connectionProven = math.Abs(level-1) <= 0.25
 	b := c.rep.Band
 	dev := 100 * (level - 1)
 	names := make([]string, len(good))

@@ -66,14 +66,15 @@ func (r *Report) Text() string {
 		b.WriteString("\n")
 	}
 	if hv := r.Withstand; hv != nil {
-		res := "passed"
+		res := "held"
 		if !hv.Passed {
-			res = "FAILED"
+			res = "BROKE DOWN"
 		}
-		w("\nWithstand   %s at %.0f V", res, hv.Volts)
+		w("\nWithstand   %s at %s", res, plan.FormatValue(hv.Volts, plan.UnitVolt))
 		if hv.Recommended > 0 {
-			w(" (IEC 60034-1 for a new winding: %.0f V)", hv.Recommended)
+			w("; the plan's test voltage %s (IEC 60034-1 clause 9.2), a repeat test at 80 %%", plan.FormatValue(hv.Recommended, plan.UnitVolt))
 		}
+		w(": %s", strings.ToUpper(string(hv.Verdict)))
 		b.WriteString("\n")
 	}
 	if e := r.EMF; e != nil {

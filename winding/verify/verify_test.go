@@ -288,13 +288,17 @@ func TestInsulationAndWithstand(t *testing.T) {
 	}{
 		{"good IR and PI", &verify.Insulation{IR1MOhm: 800, IR10MOhm: 2400, Volts: 500}, nil, verify.Pass, "below IEEE 43's 750 W scope"},
 		{"IR low at 40 °C", &verify.Insulation{IR1MOhm: 15, Volts: 500}, nil, verify.Fail, "below the 5 MΩ minimum"},
-		{"PI low", &verify.Insulation{IR1MOhm: 800, IR10MOhm: 1000, Volts: 500}, nil, verify.Fail, "polarization index 1.25"},
+		// IEEE 43-2013: the PI may not apply to small random-wound machines;
+		// the demo (about 250 W) is below its 750 W scope: IR 1000 MΩ with
+		// PI 1.2 is a warning, not a failure.
+		{"PI low, small machine", &verify.Insulation{IR1MOhm: 1000, IR10MOhm: 1200, Volts: 500}, nil, verify.Warn, "polarization index 1.20"},
 		{"PI moot above 5 GΩ", &verify.Insulation{IR1MOhm: 30000, IR10MOhm: 33000, Volts: 500}, nil, verify.Pass, "disregarded"},
 		{"low test voltage", &verify.Insulation{IR1MOhm: 800, Volts: 250}, nil, verify.Warn, "500 V DC"},
 		{"withstand failed", nil, &verify.Withstand{Passed: false, Volts: 568}, verify.Fail, "failed"},
-		// Demo: 34.1 V line, about 384 W: IEC 60034-1 500 + 2·34.1 = 568 V.
-		{"withstand at the IEC value", nil, &verify.Withstand{Passed: true, Volts: 570}, verify.Pass, "568 V"},
-		{"withstand too low", nil, &verify.Withstand{Passed: true, Volts: 250}, verify.Warn, "below 80 %"},
+		// Demo: 34.1 V line, about 250 W: IEC 60034-1 500 + 2·34.1 = 568.2 V,
+		// the plan rounds up to 570 V.
+		{"withstand at the plan's voltage", nil, &verify.Withstand{Passed: true, Volts: 570}, verify.Pass, "the plan's 570 V"},
+		{"withstand too low", nil, &verify.Withstand{Passed: true, Volts: 250}, verify.Fail, "proves nothing"},
 	}
 	for _, c := range cases {
 		rep, err := verify.Check(p, verify.Readings{TempC: 20, Insulation: c.in, Withstand: c.hv})
@@ -310,12 +314,67 @@ func TestInsulationAndWithstand(t *testing.T) {
 	}
 }
 
-func TestRecommendedWithstand(t *testing.T) {
-	// IEC 60034-1 (from memory): < 1 kW and < 100 V: 500 + 2·U_N; else 1000 + 2·U_N, at least 1500.
-	cases := []struct{ un, p, want float64 }{{24, 300, 548}, {48, 2000, 1500}, {400, 5000, 1800}, {0, 100, 0}}
+// The withstand test is judged against the plan's test voltage, which IEC
+// 60034-1 clause 9.2 (from memory) sets from the rated line voltage U_N and
+// the rated output: under 1 kW and under 100 V, 500 V + 2·U_N; otherwise
+// 1000 V + 2·U_N, at least 1500 V. Worked by hand: the template job (24 V,
+// 1.2 A, about 50 W) 500 + 48 = 548, rounded up to 550 V; the same job
+// rated 230 V: 1000 + 460 = 1460, so the 1500 V minimum. Each passes at its
+// test voltage and does not pass at 40 % of it (220 V, 600 V), below the
+// 80 % of a repeat test.
+// Within IEEE 43's scope (here the demo plan rated 3 kW) a PI below 2.0
+// fails (IEEE 43-2013, minimum 2.0 for class B and above, from memory).
+func TestPILowInScope(t *testing.T) {
+	p := demoPlan(t)
+	p.RatedPowerW = 3000
+	rep, err := verify.Check(p, verify.Readings{TempC: 20, Insulation: &verify.Insulation{IR1MOhm: 1000, IR10MOhm: 1200, Volts: 500}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if rep.Verdict != verify.Fail || findText(rep, verify.Fail, "polarization index 1.20") == nil {
+		t.Errorf("Check(3 kW, PI 1.2) = %s, %+v; want fail on the polarization index", rep.Verdict, rep.Findings)
+	}
+}
+
+func TestWithstandAgainstPlanVoltage(t *testing.T) {
+	cases := []struct {
+		name  string
+		volts string
+		want  float64
+	}{
+		{"template, 24 V", "voltage_v = 24 ", 550},
+		{"template, 230 V", "voltage_v = 230 ", 1500},
+	}
 	for _, c := range cases {
-		if got := verify.RecommendedWithstandV(c.un, c.p); got != c.want {
-			t.Errorf("RecommendedWithstandV(%g, %g) = %g; want %g", c.un, c.p, got, c.want)
+		src := strings.Replace(string(job.TemplateTOML()), "voltage_v = 24 ", c.volts, 1)
+		j, err := job.Parse([]byte(src), "template")
+		if err != nil {
+			t.Fatalf("%s: %v", c.name, err)
+		}
+		p, err := plan.Build(j)
+		if err != nil {
+			t.Fatalf("%s: %v", c.name, err)
+		}
+		var tv float64
+		for _, tt := range p.Tests {
+			if tt.Name == plan.TestHighVoltage {
+				tv = tt.Voltage
+			}
+		}
+		if tv != c.want {
+			t.Fatalf("%s: plan test voltage %g V; want %g V (IEC 60034-1 clause 9.2)", c.name, tv, c.want)
+		}
+		for _, k := range []struct {
+			frac float64
+			want verify.Verdict
+		}{{1, verify.Pass}, {0.4, verify.Fail}} {
+			rep, err := verify.Check(p, verify.Readings{TempC: 20, Withstand: &verify.Withstand{Passed: true, Volts: k.frac * tv}})
+			if err != nil {
+				t.Fatal(err)
+			}
+			if rep.Withstand.Verdict != k.want {
+				t.Errorf("%s: withstand held at %g V (%.0f %% of %g V) = %s, %+v; want %s", c.name, k.frac*tv, 100*k.frac, tv, rep.Withstand.Verdict, rep.Findings, k.want)
+			}
 		}
 	}
 }
@@ -382,5 +441,34 @@ func TestImbalanceLargestDeviation(t *testing.T) {
 		if f.Test == plan.TestBalance && f.Severity != verify.Pass {
 			t.Errorf("balance finding %+v; want pass at 1.65 %%", f)
 		}
+	}
+}
+
+// Back-EMF at 1/√3 of the prediction. With line resistances that fit the
+// plan's star (each reading two phases in series, R_UV = R_U + R_V), the
+// connection is proven and the cause named is the flux estimate; without
+// resistance readings star and delta confused stays among the causes.
+func TestBackEMFRootThreeLow(t *testing.T) {
+	p := demoPlan(t)
+	const rpm = 300
+	// Star: the line EMF is √3 × the phase EMF, so 1/√3 of it is the phase value.
+	line := p.EMF.VoltsPerRPMPhase * rpm
+	emf := &verify.BackEMF{UV: line, VW: line, WU: line, RPM: rpm}
+	r := linesFor(p, scaled(p.PhaseResistance20C, [3]float64{1, 1, 1}), 20)
+	r.EMF = emf
+	rep, err := verify.Check(p, r)
+	if err != nil {
+		t.Fatal(err)
+	}
+	f := findText(rep, verify.Fail, "flux per pole")
+	if f == nil || !strings.Contains(f.Message, "not confused") || f.Test != plan.TestBackEMF {
+		t.Errorf("Check(star proven, EMF 1/√3) findings = %+v; want the flux estimate named, star and delta ruled out", rep.Findings)
+	}
+	rep, err = verify.Check(p, verify.Readings{TempC: 20, EMF: emf})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if findText(rep, verify.Fail, "star and delta confused") == nil || findText(rep, verify.Fail, "flux per pole") == nil {
+		t.Errorf("Check(EMF 1/√3 alone) findings = %+v; want star and delta confused and the flux both offered", rep.Findings)
 	}
 }
