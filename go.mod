@@ -13,6 +13,7 @@ require (
 	github.com/pelletier/go-toml/v2 v2.4.3
 	github.com/spf13/cobra v1.10.2
 	golang.org/x/image v0.48.0
+	gonum.org/v1/gonum v0.17.0
 )
 
 require (

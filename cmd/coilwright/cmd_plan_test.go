@@ -233,7 +233,7 @@ func TestPlanBrokenFiles(t *testing.T) {
 		want      []string
 	}{
 		{"unknown key", strings.Replace(demo, "slots = 24", "slot_count = 24", 1), []string{"winding.slot_count", ":16:", `unknown key "slot_count"`}},
-		{"truncated at a line", demo[:len(demo)/3], []string{"stator.rotor", "must be"}},
+		{"truncated at a line", demo[:strings.Index(demo, `rotor = "outer"`)], []string{"stator.rotor", "must be"}},
 		{"truncated in a value", demo[:strings.Index(demo, `rotor = "outer"`)+11], []string{"(syntax)", ":24:"}},
 		{"mistyped value", strings.Replace(demo, "slots = 24", `slots = "24"`, 1), []string{"winding.slots", ":16:", "whole number"}},
 		{"mis-valued", strings.Replace(demo, "poles = 28", "poles = 27", 1), []string{"winding.poles = 27", ":17:", "even"}},
@@ -272,4 +272,57 @@ func mustRead(t *testing.T, path string) []byte {
 		t.Fatal(err)
 	}
 	return b
+}
+
+// TestPlanMachineJSON reads the machine figures of the demo as a script
+// would: the inductance in a plausible range, K_t = m·E_ph/ω_m, the tooth
+// flux density, the losses by kind with the hot copper loss of the plan,
+// the efficiency from them, and a charging curve that starts at zero.
+func TestPlanMachineJSON(t *testing.T) {
+	code, out, errs := runCLI(t, "plan", "--demo", "--json")
+	if code != 0 {
+		t.Fatalf("plan --demo --json = %d (%s)", code, errs)
+	}
+	var p struct {
+		CopperLossW float64 `json:"copper_loss_w"`
+		CopperTempC float64 `json:"copper_loss_temperature_c"`
+		RatedPowerW float64 `json:"rated_power_w"`
+		EMF         struct {
+			Phase float64 `json:"phase_rms_at_rated_v"`
+			Speed float64 `json:"rated_speed_rpm"`
+			CutIn float64 `json:"cut_in_speed_rpm"`
+		} `json:"emf"`
+		Machine struct {
+			L      float64            `json:"phase_inductance_mh"`
+			Kt     float64            `json:"torque_constant_nm_per_a"`
+			Bt     float64            `json:"tooth_flux_density_t"`
+			Losses map[string]float64 `json:"losses_w"`
+			Eff    float64            `json:"efficiency"`
+			Curve  []struct {
+				Speed float64 `json:"speed_rpm"`
+				Idc   float64 `json:"dc_current_a"`
+				P     float64 `json:"power_w"`
+			} `json:"load_curve"`
+		} `json:"machine"`
+	}
+	if err := json.Unmarshal([]byte(out), &p); err != nil {
+		t.Fatal(err)
+	}
+	m := p.Machine
+	wm := 2 * math.Pi * p.EMF.Speed / 60
+	total := m.Losses["copper"] + m.Losses["iron"] + m.Losses["mechanical"]
+	switch {
+	case m.L < 0.2 || m.L > 3:
+		t.Errorf("machine.phase_inductance_mh = %g; want 0.2 to 3", m.L)
+	case math.Abs(m.Kt-3*p.EMF.Phase/wm) > 0.01*m.Kt:
+		t.Errorf("machine.torque_constant_nm_per_a = %g; want m·E_ph/ω_m = %g", m.Kt, 3*p.EMF.Phase/wm)
+	case m.Bt < 0.8 || m.Bt > 1.9:
+		t.Errorf("machine.tooth_flux_density_t = %g; want 0.8 to 1.9", m.Bt)
+	case m.Losses["iron"] <= 0 || m.Losses["copper"] != p.CopperLossW || p.CopperTempC < 75:
+		t.Errorf("machine.losses_w = %v; want positive iron and copper = copper_loss_w %g at %g °C (≥ 75)", m.Losses, p.CopperLossW, p.CopperTempC)
+	case math.Abs(m.Eff-p.RatedPowerW/(p.RatedPowerW+total)) > 0.01:
+		t.Errorf("machine.efficiency = %g; want P/(P + Σ losses) = %g", m.Eff, p.RatedPowerW/(p.RatedPowerW+total))
+	case len(m.Curve) == 0 || m.Curve[0].Speed >= p.EMF.CutIn || m.Curve[0].Idc != 0:
+		t.Errorf("machine.load_curve starts %v; want zero below the cut-in %g rpm", m.Curve, p.EMF.CutIn)
+	}
 }

@@ -15,6 +15,7 @@ type Job struct {
 	Flux    Flux    `toml:"flux"`
 	Rating  Rating  `toml:"rating"`
 	Build   Build   `toml:"build"`
+	Machine Machine `toml:"machine"`
 
 	pos  map[string]Pos // where each key was written, by dotted key
 	file string         // name given to Parse, for messages
@@ -144,6 +145,35 @@ func (b Build) Ambient() float64 {
 		return 20
 	}
 	return *b.AmbientC
+}
+
+// Operations of the machine, for the efficiency.
+const (
+	OperationGenerator = "generator"
+	OperationMotor     = "motor"
+)
+
+// Machine holds the magnetic circuit and the iron: what the plan needs to
+// estimate the inductance, the flux densities, the losses and the charging
+// curve. Every length is in mm. A value left at 0 has no default unless one
+// is named in Normalize; the plan then says what it could not estimate.
+type Machine struct {
+	AirGapMM          float64 `toml:"air_gap_mm"`          // mechanical gap between tooth tips and magnets
+	MagnetThicknessMM float64 `toml:"magnet_thickness_mm"` // radial, surface magnets
+	// MagnetRecoilPermeability is the relative recoil permeability of the
+	// magnets; default 1.05.
+	MagnetRecoilPermeability float64 `toml:"magnet_recoil_permeability"`
+	ToothTipHeightMM         float64 `toml:"tooth_tip_height_mm"` // radial height of the tips over the slot opening
+	YokeThicknessMM          float64 `toml:"yoke_thickness_mm"`   // radial, behind the slots
+	StackingFactor           float64 `toml:"stacking_factor"`     // iron / stack length; default 0.95
+	// LaminationLossWPerKg is the specific loss of the lamination at 1.5 T,
+	// 50 Hz; default that of LaminationGrade M400-50A.
+	LaminationLossWPerKg float64 `toml:"lamination_loss_w_per_kg"`
+	LaminationGrade      string  `toml:"lamination_grade"`
+	// MechanicalLossW is the bearing and windage loss at the rated speed;
+	// when 0 an allowance of DefaultMechanicalPercent of the rated power.
+	MechanicalLossW float64 `toml:"mechanical_loss_w"`
+	Operation       string  `toml:"operation"` // "generator" (default) or "motor"
 }
 
 // Pos is a place in the job file, 1-based.

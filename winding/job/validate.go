@@ -24,6 +24,25 @@ const (
 	DefaultThermalClass = 130
 )
 
+// Defaults of the magnetic circuit and the iron, each a typical value named
+// where it comes from.
+const (
+	// DefaultRecoilPermeability: sintered NdFeB 1.03–1.10, ferrite 1.05–1.2
+	// (magnet makers' data sheets, from memory).
+	DefaultRecoilPermeability = 1.05
+	// DefaultStackingFactor: 0.5 mm laminations stack to 0.95–0.97 of the
+	// stack length (EN 10106 minimum stacking factors, from memory).
+	DefaultStackingFactor = 0.95
+	// DefaultLaminationGrade and DefaultLaminationLoss: non-oriented
+	// electrical steel M400-50A, 0.5 mm thick, guaranteed at most 4.00 W/kg
+	// at 1.5 T and 50 Hz (EN 10106, from memory).
+	DefaultLaminationGrade = "M400-50A"
+	DefaultLaminationLoss  = 4.00
+	// DefaultMechanicalPercent: bearing and windage loss of a small machine
+	// taken as 1 % of its rated power (common practice).
+	DefaultMechanicalPercent = 1.0
+)
+
 // ReferenceTemperatureC gives the reference temperature of IEC 60034-1
 // (clause 8, the temperature to which losses are corrected) for each thermal
 // class of IEC 60085: 75 °C for 105 (A), 95 °C for 130 (B), 115 °C for 155 (F),
@@ -55,6 +74,22 @@ func (j *Job) Normalize() {
 	if j.Build.PracticalFill == 0 {
 		j.Build.PracticalFill = DefaultPracticalFill
 	}
+	m := &j.Machine
+	if m.MagnetRecoilPermeability == 0 {
+		m.MagnetRecoilPermeability = DefaultRecoilPermeability
+	}
+	if m.StackingFactor == 0 {
+		m.StackingFactor = DefaultStackingFactor
+	}
+	if m.LaminationLossWPerKg == 0 {
+		m.LaminationLossWPerKg = DefaultLaminationLoss
+		if m.LaminationGrade == "" {
+			m.LaminationGrade = DefaultLaminationGrade
+		}
+	}
+	if m.Operation == "" {
+		m.Operation = OperationGenerator
+	}
 }
 
 // Validate checks every field on its own and against its neighbours. It
@@ -62,7 +97,7 @@ func (j *Job) Normalize() {
 // balanced layout or check that the turns fit; package plan does that.
 func (j *Job) Validate() error {
 	for _, check := range []func() *FieldError{j.checkHeader, j.checkWinding, j.checkStator, j.checkSlot,
-		j.checkWire, j.checkTurns, j.checkFlux, j.checkRating, j.checkBuild} {
+		j.checkWire, j.checkTurns, j.checkFlux, j.checkRating, j.checkBuild, j.checkMachine} {
 		if e := check(); e != nil {
 			return e
 		}
@@ -394,4 +429,45 @@ func (j *Job) checkBuild() *FieldError {
 		return e
 	}
 	return j.rangeCheck("build.practical_fill", b.PracticalFill, 0.1, 0.7, "(a fraction)", "0.30 to 0.45 for round wire wound by hand (common practice)")
+}
+
+func (j *Job) checkMachine() *FieldError {
+	m := j.Machine
+	const f = "machine."
+	for _, c := range []struct {
+		key     string
+		v, hi   float64
+		typical string
+	}{
+		{"air_gap_mm", m.AirGapMM, 50, "the mechanical gap between the tooth tips and the magnets, typically 0.5 to 2 mm"},
+		{"magnet_thickness_mm", m.MagnetThicknessMM, 100, "the radial thickness of the surface magnets, typically 2 to 10 mm"},
+		{"tooth_tip_height_mm", m.ToothTipHeightMM, 50, "the radial height of the tooth tips beside the slot opening, typically 0.5 to 3 mm"},
+		{"yoke_thickness_mm", m.YokeThicknessMM, 1000, "the radial thickness of the stator iron behind the slots"},
+		{"mechanical_loss_w", m.MechanicalLossW, 1e7, "the bearing and windage loss at rated speed"},
+	} {
+		if c.v != 0 {
+			if e := j.positive(f+c.key, c.v, c.hi, "mm", c.typical); e != nil {
+				if c.key == "mechanical_loss_w" {
+					e.Reason = fmt.Sprintf("must be more than 0 and at most %g W", c.hi)
+				}
+				return e
+			}
+		}
+	}
+	if e := j.rangeCheck(f+"magnet_recoil_permeability", m.MagnetRecoilPermeability, 1, 2, "(relative)", "about 1.05 for NdFeB and ferrite magnets"); e != nil {
+		return e
+	}
+	if e := j.rangeCheck(f+"stacking_factor", m.StackingFactor, 0.5, 1, "(a fraction)", "0.95 to 0.97 for 0.5 mm laminations"); e != nil {
+		return e
+	}
+	if e := j.positive(f+"lamination_loss_w_per_kg", m.LaminationLossWPerKg, 50, "W/kg", "the specific loss at 1.5 T, 50 Hz from the steel's grade: 4.00 for M400-50A, 2.70 for M270-35A (EN 10106)"); e != nil {
+		return e
+	}
+	if len(m.LaminationGrade) > 40 || strings.IndexFunc(m.LaminationGrade, unicode.IsControl) >= 0 {
+		return j.Fail(f+"lamination_grade", fmt.Sprintf("%q", m.LaminationGrade), "must be a short plain text", `e.g. lamination_grade = "M400-50A"`)
+	}
+	if m.Operation != OperationGenerator && m.Operation != OperationMotor {
+		return j.Fail(f+"operation", fmt.Sprintf("%q", m.Operation), `must be "generator" or "motor"`, "it decides the form of the efficiency and of the voltage under load")
+	}
+	return nil
 }

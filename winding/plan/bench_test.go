@@ -3,6 +3,8 @@ package plan
 import (
 	"strings"
 	"testing"
+
+	"coilwright/winding/job"
 )
 
 // bench120 is a 120-slot, 112-pole outer-rotor stator (a large direct-drive
@@ -27,6 +29,18 @@ func BenchmarkBuild120Slots(b *testing.B) {
 
 func BenchmarkBuild12Slots(b *testing.B) {
 	j := mustJob(b, handJob)
+	for b.Loop() {
+		if _, err := Build(j); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkBuildDemo is the whole demo plan, machine figures and charging
+// curve included; the target is under 1 ms.
+func BenchmarkBuildDemo(b *testing.B) {
+	j := job.Demo()
+	b.ReportAllocs()
 	for b.Loop() {
 		if _, err := Build(j); err != nil {
 			b.Fatal(err)

@@ -27,7 +27,7 @@ func Build(j *job.Job) (*Plan, error) {
 	}
 	b := &builder{j: &jc, p: &Plan{}}
 	for _, step := range []func() error{b.header, b.layout, b.wire, b.slot, b.flux, b.turns, b.fit,
-		b.lengths, b.electrical, b.materials, b.steps, b.polarity, b.tests, b.cautions} {
+		b.lengths, b.electrical, b.machine, b.materials, b.steps, b.polarity, b.tests, b.cautions} {
 		if err := step(); err != nil {
 			return nil, err
 		}

@@ -76,8 +76,17 @@
 // and JumperStep.Words gives its instruction: "leaves slot 2 at the lead end,
 // enters slot 6: 4 slot pitches, counter-clockwise seen from the lead end".
 //
+// The machine figures (machine.go) are analytical estimates at the rated
+// point: the phase inductance as the sum of air-gap (with the harmonic
+// leakage of the winding's whole MMF spectrum), slot, tooth-tip and
+// end-winding parts; the reactance and voltage under load; the torque and EMF
+// constants; the flux densities of teeth and yoke with a saturation warning;
+// copper, iron and mechanical losses and the efficiency; and for a DC-bus
+// job the charging curve of a time-stepped diode bridge (bridge.go). Inputs
+// the job leaves out are named in Machine.Notes, never guessed.
+//
 // Build does no I/O and keeps no state: a Plan is plain data that screens and
-// printouts only read. The plan does not model saturation, armature reaction,
-// the voltage drop under load or the losses in iron and magnets: the EMFs are
-// open-circuit values.
+// printouts only read. The plan does not model saturation (it warns of it),
+// armature reaction beyond the synchronous reactance, or the losses in the
+// magnets and the rotor.
 package plan

@@ -100,6 +100,7 @@ func (p *Plan) Text() string {
 	row("", "copper loss %.1f W at %g °C working (%s); %.1f W at %g °C", p.CopperLossW, p.CopperLossTemperatureC, p.CopperLossTemperatureBasis, p.CopperLossAmbientW, p.AmbientC)
 	row("Copper", "%.1f m in the winding with leads (%.3f kg); buy %.1f m (%.3f kg)", p.CopperLengthM, p.CopperMassKg, p.BuyLengthM, p.BuyMassKg)
 	tw.Flush()
+	p.machineText(&b)
 
 	b.WriteString("\nPolarity (DC into X1 of one phase at a time, all its paths at once; compass at each tooth face)\n")
 	for _, n := range l.PhaseNames {

@@ -54,6 +54,10 @@ type Plan struct {
 	JumperPitchMM       float64    `json:"jumper_pitch_mm"`  // jumper length per slot pitch round the lead end
 	JumperRadiusMM      float64    `json:"jumper_radius_mm"` // the radius jumpers run at round the lead end (mid slot depth)
 
+	// Machine is what the wound machine does under load: inductance, torque
+	// constant, flux densities, losses, efficiency, charging curve.
+	Machine *Machine `json:"machine,omitempty"`
+
 	CopperLengthM float64 `json:"copper_length_m"` // all coils, jumpers and leads, one strand counted per strand
 	CopperMassKg  float64 `json:"copper_mass_kg"`
 	BuyLengthM    float64 `json:"buy_length_m"` // with the spool margin
