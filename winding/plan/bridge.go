@@ -34,6 +34,19 @@ type Bridge struct {
 // reverse recovery. Current flows only while the peak line EMF √2·√3·E
 // exceeds BusV + DiodesV, the peak-conduction cut-in.
 func (br Bridge) MeanDCCurrent() float64 {
+	var st bridgeState
+	return br.run(&st)
+}
+
+// bridgeState is the state of the bridge at the start of a period: the phase
+// currents and the rail each phase is held at (+1, −1, or 0 floating).
+type bridgeState struct {
+	i, rail [3]float64
+}
+
+// run simulates from st, leaves the state at the end of the last period in
+// st (a warm start for a nearby speed), and returns the mean DC current.
+func (br Bridge) run(st *bridgeState) float64 {
 	vdc := br.BusV + br.DiodesV
 	if !(br.PhaseEMF > 0) || !(br.Hz > 0) || !(br.R > 0) || br.L < 0 || math.Sqrt(6)*br.PhaseEMF <= vdc {
 		return 0
@@ -46,8 +59,7 @@ func (br Bridge) MeanDCCurrent() float64 {
 		a = math.Exp(-br.R * dt / br.L)
 	}
 	amp := math.Sqrt2 * br.PhaseEMF
-	var i [3]float64
-	var rail [3]float64 // +1 at the + rail, −1 at the − rail, 0 floating
+	i, rail := &st.i, &st.rail
 	var mean float64
 	// Run whole periods until the mean DC current of one period differs
 	// from the last by less than 1e-4 of it (at most 100 periods).
@@ -55,7 +67,7 @@ func (br Bridge) MeanDCCurrent() float64 {
 		var q float64 // charge into the + rail over this period
 		for s := range steps {
 			e := [3]float64{amp * bridgeSin[s], amp * bridgeSin[(s+2*steps/3)%steps], amp * bridgeSin[(s+steps/3)%steps]}
-			turnOn(&rail, e, vdc)
+			turnOn(rail, e, vdc)
 			vn, n := 0.0, 0
 			for k := range 3 {
 				if rail[k] != 0 {
@@ -73,7 +85,7 @@ func (br Bridge) MeanDCCurrent() float64 {
 					i[k] = i[k]*a + (1-a)*drive
 				}
 			}
-			turnOff(&rail, &i)
+			turnOff(rail, i)
 			for k := range 3 {
 				if rail[k] > 0 {
 					q += i[k] * dt
@@ -89,9 +101,9 @@ func (br Bridge) MeanDCCurrent() float64 {
 	return mean
 }
 
-// bridgeSteps is the number of time steps per electrical period (1.5°; a
+// bridgeSteps is the number of time steps per electrical period (2°; a
 // multiple of 3 so the phases fall on the same samples).
-const bridgeSteps = 240
+const bridgeSteps = 180
 
 // bridgeSin is sin(2π·s/bridgeSteps); phase k reads it 1/3 period later.
 var bridgeSin = func() (t [bridgeSteps]float64) {

@@ -363,12 +363,13 @@ func (b *builder) loadCurve(e *EMF, r, lH float64) []ChargePoint {
 	}
 	sort.Float64s(speeds)
 	var out []ChargePoint
+	var st bridgeState // carried from speed to speed: each run starts near its steady state
 	for _, n := range speeds {
 		if len(out) > 0 && n-out[len(out)-1].SpeedRPM < 1e-6*hi {
 			continue
 		}
 		br := Bridge{PhaseEMF: e.VoltsPerRPMPhase * n, Hz: ElectricalHz(b.j.Winding.Poles, n), R: r, L: lH, BusV: t.Volts, DiodesV: t.BridgeDropV}
-		idc := br.MeanDCCurrent()
+		idc := br.run(&st)
 		out = append(out, ChargePoint{SpeedRPM: n, DCCurrentA: idc, PowerW: idc * t.Volts})
 	}
 	return out

@@ -108,8 +108,6 @@ func TestHarmonicLeakage(t *testing.T) {
 	}
 }
 
-func sq(x float64) float64 { return x * x }
-
 // kSquared is the squared MMF winding factor at order nu from the coil
 // phasors (0 at multiples of Q, where the pitch factor vanishes).
 func kSquared(l *winding.Layout, nu, q, m int, coils float64) float64 {
