@@ -3,11 +3,13 @@ package printout
 import (
 	"fmt"
 	"math"
+	"math/cmplx"
 	"sort"
 	"strings"
 
 	"coilwright/winding"
 	"coilwright/winding/plan"
+	"coilwright/winding/verify"
 )
 
 // figures draws the design figures on one sheet, each with its caption:
@@ -34,15 +36,10 @@ func caption(c *canvas, x, y, w float64, n int, title, text string) {
 }
 
 // coilPhasor is the page angle (degrees) of the EMF phasor of the coil on
-// a tooth: the tooth's place in electrical degrees at the working order p,
-// turned half round for a counter-clockwise coil. Teeth counted
-// counter-clockwise, so the angle grows with the tooth number.
+// a tooth, as the check models it (verify.CoilPhasor), drawn with 0° at the
+// top of the star.
 func coilPhasor(cl winding.Coil, q, p int) float64 {
-	a := float64((cl.Tooth-1)*p) * 360 / float64(q)
-	if cl.Direction == winding.CCW {
-		a += 180
-	}
-	return 90 - math.Mod(a, 360)
+	return 90 + cmplx.Phase(verify.CoilPhasor(cl.Tooth, q, p, cl.Direction))*180/math.Pi
 }
 
 // starOfSlots draws the coil phasors numbered by tooth, the phase bands
@@ -111,11 +108,14 @@ func (b *builder) starOfSlots(c *canvas, o Point, r float64, x, capY, capW float
 		// cover another; left out where neither place is clear
 		tw := textWidth(Regular, sizeMin, lbl)
 		hh := sizeMin * ptMM
-		for _, rr := range []float64{r + 2.5, r + 6} {
+		for _, rr := range []float64{r + 2.5, r + 6, r + 9.5, r + 13} {
 			lp := polar(o, rr, g.a)
 			// push the label out so its near edge, not its centre, sits at rr
 			lp.X += math.Cos(g.a*math.Pi/180) * tw / 2
 			box := tagRect{lp.X - tw/2, lp.Y - hh/2, lp.X + tw/2, lp.Y + hh/2}
+			if box.x0 < marginMM || box.x1 > b.paper.W-marginMM {
+				continue
+			}
 			free := true
 			for _, u := range placed {
 				if u.grow(0.4).overlaps(box) {
@@ -146,7 +146,7 @@ func (b *builder) starOfSlots(c *canvas, o Point, r float64, x, capY, capW float
 		b.phaseMark(c, polar(o, r*0.55+4, a), 2.2, i)
 	}
 	caption(c, x, capY, capW, 1, "Star of slots",
-		fmt.Sprintf("the EMF phasor of every coil at the working order p = %d, numbered by tooth (a counter-clockwise coil turned half round); "+
+		fmt.Sprintf("the EMF phasor of every coil at the working order p = %d, numbered by tooth (a counter-clockwise coil turned half round), the phasor of tooth 1 at the top; "+
 			"tinted wedges are the phase bands, the heavy arrows each phase's sum. The sums lie %s electrical apart.",
 			p, degrees(360/float64(m))))
 }

@@ -45,10 +45,19 @@ func TestStarOfSlotsPhasors(t *testing.T) {
 			pk := buildFixture(t, i)
 			fig := pagesOf(pk, FiguresPage)[0]
 			l, _ := winding.Design(fx.spec)
+			// the star's labels: the words above its caption, left half
 			numbers := map[string]bool{}
-			for _, s := range fig.Texts() {
-				for _, n := range strings.Split(s, ",") {
-					numbers[n] = true
+			capY := 0.0
+			for _, s := range fig.Shapes {
+				if tx, ok := s.(*Text); ok && tx.S == "Figure 1. Star of slots." {
+					capY = tx.Y
+				}
+			}
+			for _, s := range fig.Shapes {
+				if tx, ok := s.(*Text); ok && tx.Y < capY && tx.X < fig.W/2 {
+					for _, n := range strings.Split(tx.S, ",") {
+						numbers[n] = true
+					}
 				}
 			}
 			if len(l.Coils) <= 48 {

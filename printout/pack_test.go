@@ -193,7 +193,7 @@ func TestTestRecordReadingsAndCautions(t *testing.T) {
 	}
 	texts := textsOf(pagesOf(pk, TestRecordPage))
 	all := strings.Join(texts, "\n")
-	for _, want := range []string{"Caution", "U 1200, V 1150 MΩ · pass", "taken 2025-03-20", "at least 5 MΩ", "within ±2 %", "at most 1 mA", "local codes and licensed practice"} {
+	for _, want := range []string{"Caution", "read: U 1.2 GΩ, V 1.15 GΩ", "taken 2025-03-20", "at least 5 MΩ", "within ±2 % of expected", "at most 1 mA", "local codes and licensed practice"} {
 		if !strings.Contains(all, want) {
 			t.Errorf("test record lacks %q", want)
 		}

@@ -2,33 +2,16 @@ package printout
 
 import (
 	"fmt"
+	"math"
+	"sort"
 	"strings"
 	"unicode"
 	"unicode/utf8"
 
+	"coilwright/winding"
 	"coilwright/winding/plan"
+	"coilwright/winding/verify"
 )
-
-// readingText is how a recorded reading prints: its values by the names
-// and units of the test's reading schema (plan.FormatReadings), what was
-// written, and the verdict.
-func readingText(r Reading, t plan.Test) string {
-	var parts []string
-	if len(r.Values) > 0 {
-		s := plan.FormatReadings(t.Readings, r.Values)
-		if len(t.Readings) == 0 && t.Unit != "" && t.Unit != plan.UnitPercent {
-			s += " " + string(t.Unit) // a test without a reading schema: its values are in its unit
-		}
-		parts = append(parts, s)
-	}
-	if r.Text != "" {
-		parts = append(parts, r.Text)
-	}
-	if r.Verdict != "" {
-		parts = append(parts, r.Verdict)
-	}
-	return strings.Join(parts, " · ")
-}
 
 // takenText says when and by whom a reading was taken, "" when unknown.
 func takenText(r Reading) string {
@@ -42,9 +25,11 @@ func takenText(r Reading) string {
 	return strings.Join(parts, " ")
 }
 
-// testRecord lists each test with its expected value, acceptance band and a
-// space for the reading (filled from the progress record where one exists),
-// then the cautions and the sign-off.
+// testRecord lists each test with its acceptance, its conditions, one cell
+// per reading with the value the meter should show and its window, cells
+// for the meter, and pass / fail; readings from the progress record fill
+// their cells with the results worked out from them. Cautions first, the
+// sign-off last.
 func (b *builder) testRecord() {
 	p := b.p
 	f := b.startFlow(TestRecordPage, "Test record")
@@ -54,13 +39,16 @@ func (b *builder) testRecord() {
 	// expected values
 	f.heading("Expected values")
 	exp := []string{
-		fmt.Sprintf("phase resistance at 20 °C: %.4g Ω", p.PhaseResistance20C),
+		"phase resistance at 20 °C: " + plan.FormatValue(p.PhaseResistance20C, plan.UnitOhm),
 	}
 	if p.PhaseResistanceAmbient > 0 && p.AmbientC != 0 {
-		exp = append(exp, fmt.Sprintf("at %.0f °C: %.4g Ω", p.AmbientC, p.PhaseResistanceAmbient))
+		exp = append(exp, "at "+plan.FormatValue(p.AmbientC, plan.UnitCelsius)+": "+plan.FormatValue(p.PhaseResistanceAmbient, plan.UnitOhm))
+	}
+	if ln := b.lineOhmText(); ln != "" {
+		exp = append(exp, ln)
 	}
 	if p.EMF != nil && p.EMF.VoltsPerRPMPhase > 0 {
-		exp = append(exp, fmt.Sprintf("back-EMF %.4g V rms per 1000 rpm per phase", 1000*p.EMF.VoltsPerRPMPhase))
+		exp = append(exp, "back-EMF "+plan.FormatValue(1000*p.EMF.VoltsPerRPMPhase, plan.UnitVolt)+" rms per 1000 rpm per phase")
 	}
 	f.y = f.c.para(x0, f.y+1, w, sizeBody, Regular, Ink, strings.Join(exp, "   ·   "))
 	f.y += 1
@@ -80,6 +68,185 @@ func (b *builder) testRecord() {
 	}
 	f.y += 6
 	b.signOff(f, "Tests passed, stator accepted")
+}
+
+// lineOhmText says what the meter reads between two line terminals of the
+// connected winding and why, for the plan's connection and phase count:
+// "a meter across U–V reads 285.5 mΩ at 15 °C (star: two phases in
+// series)". "" when the plan has no line readings.
+func (b *builder) lineOhmText() string {
+	for _, t := range b.p.Tests {
+		if t.Name != plan.TestResistance || len(t.Readings) == 0 || t.Readings[0].Expected == nil {
+			continue
+		}
+		r := t.Readings[0]
+		how := "star: two phases in series"
+		if b.p.Connection == winding.Delta {
+			how = fmt.Sprintf("delta: one phase in parallel with the other %d in series", len(b.p.Layout.PhaseNames)-1)
+		}
+		return fmt.Sprintf("a meter across %s reads %s at %s (%s)", r.Label, plan.FormatValue(r.Expected.Value, r.Unit),
+			plan.FormatValue(r.Expected.AtC, plan.UnitCelsius), how)
+	}
+	return ""
+}
+
+// conditionsText writes a test's voltage and time out in full, from its
+// reading schema: "570 V AC, 60 s, no breakdown", "500 V DC, read after
+// 1 min". "" for a test without a test voltage.
+func conditionsText(t plan.Test) string {
+	if t.Voltage <= 0 {
+		return ""
+	}
+	kind := "DC"
+	var secs float64
+	held := false
+	for _, r := range t.Readings {
+		switch r.Key {
+		case plan.KeyVolts:
+			if strings.Contains(r.Label, "AC") {
+				kind = "AC"
+			}
+		case plan.KeySeconds:
+			if r.Preset != nil {
+				secs = *r.Preset
+			}
+		case plan.KeyPassed:
+			held = true
+		case plan.KeyIR1:
+			secs = -60 // read after a minute
+		}
+	}
+	s := plan.FormatValue(t.Voltage, plan.UnitVolt) + " " + kind
+	switch {
+	case secs > 0:
+		s += ", " + plan.FormatValue(secs, plan.UnitSecond)
+	case secs < 0:
+		s += ", read after 1 min"
+	}
+	if held {
+		s += ", no breakdown"
+	}
+	return s
+}
+
+// windowText is the acceptance window of one reading: "265.9 mΩ .. 305.8 mΩ",
+// "up to 178.4 mΩ".
+func windowText(r plan.Reading) string {
+	e := r.Expected
+	if e == nil {
+		return ""
+	}
+	if e.Low <= 0 {
+		return "up to " + plan.FormatValue(e.High, r.Unit)
+	}
+	return plan.FormatValue(e.Low, r.Unit) + " .. " + plan.FormatValue(e.High, r.Unit)
+}
+
+// expectedText is what the meter should show for one reading of test t:
+// the plan's expected value, the test's limit where the reading is in the
+// limit's unit, the value to set where the plan presets it.
+func expectedText(t plan.Test, r plan.Reading) string {
+	switch {
+	case r.Expected != nil:
+		return plan.FormatValue(r.Expected.Value, r.Unit)
+	case r.Preset != nil && r.Key == plan.KeyTemp:
+		return "about " + plan.FormatValue(*r.Preset, r.Unit)
+	case r.Preset != nil:
+		return "set " + plan.FormatValue(*r.Preset, r.Unit)
+	case r.Unit == plan.UnitPassFail:
+		return "held"
+	case r.Unit == t.Unit && r.Unit != "" && t.Compare == plan.AtLeast:
+		return "at least " + plan.FormatValue(t.Limit, t.Unit)
+	case r.Unit == t.Unit && r.Unit != "" && t.Compare == plan.AtMost:
+		return "at most " + plan.FormatValue(t.Limit, t.Unit)
+	}
+	return ""
+}
+
+// unitCell is the unit printed at the end of an empty reading cell.
+func unitCell(u plan.Unit) string {
+	if u == plan.UnitPassFail {
+		return "held / broke down"
+	}
+	return string(u)
+}
+
+// resultLines are the results worked out from a recorded test by the check
+// (winding/verify): phase values at 20 °C with their deviation, the
+// imbalance and the verdict; nil where the check does not judge the test or
+// the record has no values.
+func (b *builder) resultLines(t plan.Test, values map[string]float64) []string {
+	if len(values) == 0 {
+		return nil
+	}
+	rd, ok := verify.ReadingsOf(b.p, t, values)
+	if !ok {
+		return nil
+	}
+	rep, err := verify.Check(b.p, rd)
+	if err != nil || rep == nil {
+		return nil
+	}
+	var out []string
+	switch t.Name {
+	case plan.TestResistance, plan.TestBalance:
+		var ph []string
+		for _, x := range rep.Phases {
+			if x.Open {
+				ph = append(ph, x.Phase+" open")
+				continue
+			}
+			ph = append(ph, fmt.Sprintf("%s %s (%s %%)", x.Phase, plan.FormatValue(x.Ohm20C, plan.UnitOhm), signedPct(x.DeviationPercent)))
+		}
+		if len(ph) > 0 {
+			out = append(out, "phases at 20 °C: "+strings.Join(ph, ", "))
+		}
+		out = append(out, fmt.Sprintf("imbalance %s (limit %s)", plan.FormatValue(rep.ImbalancePercent, plan.UnitPercent), plan.FormatValue(rep.ImbalanceLimit, plan.UnitPercent)))
+	case plan.TestInsulation:
+		if ins := rep.Insulation; ins != nil {
+			s := "at 40 °C: " + plan.FormatValue(ins.IR1At40C, plan.UnitMegaohm)
+			if ins.PI > 0 {
+				s += fmt.Sprintf(", polarization index %.2f", ins.PI)
+			}
+			out = append(out, s)
+		}
+	case plan.TestBackEMF:
+		if e := rep.EMF; e != nil {
+			out = append(out, fmt.Sprintf("expected %s line, mean %s %%, imbalance %s",
+				plan.FormatValue(e.ExpectedLineV, plan.UnitVolt), signedPct(e.DeviationPercent), plan.FormatValue(e.ImbalancePercent, plan.UnitPercent)))
+		}
+	}
+	v := testVerdict(t, rep)
+	if v != "" {
+		out = append(out, "verdict: "+string(v))
+	}
+	return out
+}
+
+// testVerdict is the check's verdict on one test: the worst of its findings.
+func testVerdict(t plan.Test, rep *verify.Report) verify.Verdict {
+	var v verify.Verdict
+	for _, f := range rep.Findings {
+		if f.Test != t.Name {
+			continue
+		}
+		if v == "" {
+			v = f.Severity
+		} else {
+			v = verify.Worst(v, f.Severity)
+		}
+	}
+	return v
+}
+
+// signedPct writes a percentage with its sign and a true minus sign.
+func signedPct(v float64) string {
+	s := strings.TrimPrefix(plan.FormatValue(math.Abs(v), plan.UnitPercent), "")
+	s = strings.TrimSuffix(s, " %")
+	if v < 0 {
+		return "−" + s
+	}
+	return "+" + s
 }
 
 // cautionPanel prints the plan's cautions beside the warning sign.
@@ -106,88 +273,165 @@ func (b *builder) cautionPanel(f *flow) {
 	f.y += h + 2
 }
 
+// Test block geometry, mm.
+const (
+	tbCellH = 6.2 // one reading row
+	tbPad   = 2.0
+)
+
+// readingCols are the columns of a test's reading cells, as fractions of
+// the width: what is read, what the meter should show, its window, the
+// reading.
+var readingCols = [...]struct {
+	head string
+	w    float64
+}{{"reading", 0.24}, {"meter should show", 0.2}, {"window", 0.24}, {"read", 0.32}}
+
+// testBlock draws one test: title and acceptance, conditions, what to do,
+// one cell per reading, the meter, the results of a recorded reading and
+// pass / fail.
 func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	w := b.width()
 	x0 := float64(marginMM)
-	left0 := w * 0.58
+	inner := w - 2*tbPad
 	what := t.What
-	if v := fmt.Sprintf("%.0f V", t.Voltage); t.Voltage > 0 && !strings.Contains(what, v) {
-		what = strings.TrimSuffix(what, ".") + ". Test voltage " + v + "."
-	}
 	if t.Note != "" {
 		// the note is a sentence of its own
 		what = strings.TrimSuffix(what, ".") + ". " + sentence(t.Note)
 	}
 	src := "source: " + t.Source
-	hText := 11 + paraHeight(left0-4, sizeSmall, Regular, what) + paraHeight(left0-4, sizeTiny, Regular, src)
-	if t.Caution != "" {
-		hText += paraHeight(left0-10, sizeSmall, Bold, t.Caution) + 1
-	}
-	rw := w - left0
-	accept := wrap(clean(Bold, plan.LimitText(t)), rw-4, sizeBody+1, Bold)
-	// the acceptance may take more lines; the reading part moves down
-	dy := float64(max(0, len(accept)-1)) * lineStep(sizeBody+1)
-	h := max(hText, 30+dy)
-	if r, ok := b.o.Readings[t.Name]; ok {
-		// a long reading pushes the pass / fail line down
-		rh := paraHeight(rw-4, sizeBody, Mono, readingText(r, t))
-		if tk := takenText(r); tk != "" {
-			rh += paraHeight(rw-4, sizeSmall, Regular, tk)
-		}
-		h = max(h, dy+18.5+rh+6)
-	}
-	f.need(h + 2)
-	c := f.c
-	y := f.y
-	c.box(x0, y, w, h, Pen{Width: 0.4, Colour: Ink}, nil)
 	title := t.Title
 	if title == "" {
 		title = t.Name
 	}
-	c.text(x0+2, y+4.5, sizeBody+1, Bold, Ink, left, fmt.Sprintf("%d. %s", n, title))
-	ty := c.para(x0+2, y+9, left0-4, sizeSmall, Regular, Ink, what)
-	if t.Caution != "" {
-		c.warningSign(x0+4.5, ty-2.4, 4.6)
-		ty = c.para(x0+8, ty+0.6, left0-10, sizeSmall, Bold, Ink, t.Caution)
+	accept := "accept when " + plan.LimitText(t)
+	cond := conditionsText(t)
+	rec, recorded := b.o.Readings[t.Name]
+	rows := t.Readings
+	if len(rows) == 0 {
+		// a test without a reading schema: one cell in its unit
+		rows = []plan.Reading{{Key: "", Label: "result", Unit: t.Unit}}
 	}
-	c.para(x0+2, ty+0.5, left0-4, sizeTiny, Regular, Colour{90, 90, 90}, src)
-	// right part: acceptance and reading
-	rx := x0 + left0
-	c.line(rx, y, rx, y+h, thin)
-	c.text(rx+2, y+4, sizeTiny, Regular, Colour{90, 90, 90}, left, "accept when")
-	for i, l := range accept {
-		c.text(rx+2, y+8.5+float64(i)*lineStep(sizeBody+1), sizeBody+1, Bold, Ink, left, l)
-	}
-	ry := y + dy // the reading part, below the acceptance
-	c.line(rx, ry+11, rx+rw, ry+11, Pen{Width: 0.15, Colour: Faint})
-	c.text(rx+2, ry+14, sizeTiny, Regular, Colour{90, 90, 90}, left, "reading")
-	if r, ok := b.o.Readings[t.Name]; ok {
-		ty := c.para(rx+2, ry+18.5, rw-4, sizeBody, Mono, Ink, readingText(r, t))
-		if tk := takenText(r); tk != "" {
-			c.para(rx+2, ty, rw-4, sizeSmall, Regular, Ink, tk)
+	var results []string
+	if recorded {
+		results = b.resultLines(t, rec.Values)
+		if len(t.Readings) == 0 && len(rec.Values) > 0 {
+			// no schema to lay the values out by: each under its own name
+			// in the test's unit
+			keys := make([]string, 0, len(rec.Values))
+			for k := range rec.Values {
+				keys = append(keys, k)
+			}
+			sort.Strings(keys)
+			vs := make([]string, len(keys))
+			for i, k := range keys {
+				vs[i] = k + " " + plan.FormatValue(rec.Values[k], t.Unit)
+			}
+			results = append([]string{"read: " + strings.Join(vs, ", ")}, results...)
 		}
-	} else {
-		c.line(rx+2, ry+20.5, rx+rw-2, ry+20.5, Pen{Width: 0.2, Colour: Ink})
-		c.text(rx+rw-2, ry+19.8, sizeSmall, Regular, Faint, right, string(t.Unit))
+	}
+	// heights
+	h := tbPad + lineStep(sizeBody+1) + 1
+	h += paraHeight(inner, sizeBody, Bold, accept)
+	if cond != "" {
+		h += paraHeight(inner, sizeBody, Bold, "test: "+cond)
+	}
+	h += paraHeight(inner, sizeSmall, Regular, what) + 0.5
+	if t.Caution != "" {
+		h += paraHeight(inner-6, sizeSmall, Bold, t.Caution) + 1
+	}
+	h += paraHeight(inner, sizeTiny, Regular, src) + 1
+	h += tbCellH * float64(len(rows)+2) // header, readings, meter
+	extra := ""
+	if recorded {
+		extra = strings.TrimSpace(strings.Join([]string{rec.Text, takenText(rec)}, " · "))
+		extra = strings.Trim(extra, " ·")
+	}
+	for _, l := range append(append([]string{}, results...), extra) {
+		if l != "" {
+			h += paraHeight(inner, sizeBody, Regular, l)
+		}
+	}
+	h += 9 // pass / fail line
+	f.need(h + 2)
+	c := f.c
+	y := f.y
+	c.box(x0, y, w, h, Pen{Width: 0.4, Colour: Ink}, nil)
+	tx := x0 + tbPad
+	ty := y + tbPad + 0.75*(sizeBody+1)*ptMM
+	c.text(tx, ty, sizeBody+1, Bold, Ink, left, fit(fmt.Sprintf("%d. %s", n, title), inner, sizeBody+1, Bold))
+	ty += lineStep(sizeBody + 1)
+	ty = c.para(tx, ty+1, inner, sizeBody, Bold, Ink, accept)
+	if cond != "" {
+		ty = c.para(tx, ty, inner, sizeBody, Bold, Ink, "test: "+cond)
+	}
+	ty = c.para(tx, ty, inner, sizeSmall, Regular, Ink, what) + 0.5
+	if t.Caution != "" {
+		c.warningSign(tx+2.5, ty-2.6, 4.6)
+		ty = c.para(tx+6, ty+0.6, inner-6, sizeSmall, Bold, Ink, t.Caution) + 0.4
+	}
+	ty = c.para(tx, ty, inner, sizeTiny, Regular, Colour{90, 90, 90}, src) + 0.2
+	// reading cells
+	cy := ty - 0.75*sizeTiny*ptMM + 0.6
+	xs := []float64{tx}
+	for _, col := range readingCols {
+		xs = append(xs, xs[len(xs)-1]+col.w*inner)
+	}
+	c.box(tx, cy, inner, tbCellH, Pen{}, &Fill{Colour{215, 215, 215}})
+	for i, col := range readingCols {
+		c.text(xs[i]+1.2, cy+tbCellH/2+1.1, sizeTiny, Bold, Ink, left, col.head)
+	}
+	cy += tbCellH
+	for _, r := range rows {
+		base := cy + tbCellH/2 + 1.2
+		c.text(xs[0]+1.2, base, sizeBody, Bold, Ink, left, fit(r.Label, xs[1]-xs[0]-2.4, sizeBody, Bold))
+		c.text(xs[1]+1.2, base, sizeBody, Regular, Ink, left, fit(expectedText(t, r), xs[2]-xs[1]-2.4, sizeBody, Regular))
+		c.text(xs[2]+1.2, base, sizeSmall, Regular, Ink, left, fit(windowText(r), xs[3]-xs[2]-2.4, sizeSmall, Regular))
+		if v, ok := rec.Values[r.Key]; recorded && ok && r.Key != "" {
+			c.text(xs[3]+1.2, base, sizeBody, Bold, Ink, left, plan.FormatValue(v, r.Unit))
+		} else {
+			c.line(xs[3]+1.2, cy+tbCellH-1.2, xs[4]-1.2, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
+			c.text(xs[4]-1.2, base-0.4, sizeTiny, Regular, Colour{90, 90, 90}, right, unitCell(r.Unit))
+		}
+		c.line(tx, cy+tbCellH, tx+inner, cy+tbCellH, Pen{Width: 0.15, Colour: Faint})
+		cy += tbCellH
+	}
+	// the meter used
+	base := cy + tbCellH/2 + 1.2
+	c.text(xs[0]+1.2, base, sizeSmall, Regular, Ink, left, "meter (make, model)")
+	c.line(xs[1]+1.2, cy+tbCellH-1.2, xs[3]-4, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
+	c.text(xs[3]+1.2, base, sizeSmall, Regular, Ink, left, "serial")
+	c.line(xs[3]+10, cy+tbCellH-1.2, xs[4]-1.2, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
+	for _, x := range xs[1:4] {
+		c.line(x, ty-0.75*sizeTiny*ptMM+0.6, x, cy, Pen{Width: 0.15, Colour: Faint})
+	}
+	cy += tbCellH
+	// results of a recorded reading
+	for _, l := range append(results, extra) {
+		if l != "" {
+			cy = c.para(tx, cy+0.75*sizeBody*ptMM, inner, sizeBody, Regular, Ink, l) - 0.75*sizeBody*ptMM
+		}
 	}
 	// pass / fail
-	py := y + h - 6.5
+	py := y + h - 6.8
 	pass, fail := false, false
-	if r, ok := b.o.Readings[t.Name]; ok {
-		pass, fail = r.Verdict == "pass", r.Verdict == "fail"
+	if recorded {
+		pass, fail = rec.Verdict == "pass", rec.Verdict == "fail"
 	}
-	c.checkbox(rx+2, py, ckBoxS)
+	c.checkbox(tx, py, ckBoxS)
 	if pass {
-		c.text(rx+2.6, py+3.6, sizeBody, Bold, Ink, left, "x")
+		c.tick(tx, py, ckBoxS)
 	}
-	c.text(rx+7.5, py+3.3, sizeSmall, Regular, Ink, left, "pass")
-	c.checkbox(rx+20, py, ckBoxS)
+	c.text(tx+5.5, py+3.3, sizeSmall, Regular, Ink, left, "pass")
+	c.checkbox(tx+18, py, ckBoxS)
 	if fail {
-		c.text(rx+20.6, py+3.6, sizeBody, Bold, Ink, left, "x")
+		c.tick(tx+18, py, ckBoxS)
 	}
-	c.text(rx+25.5, py+3.3, sizeSmall, Regular, Ink, left, "fail")
-	c.text(rx+36, py+3.3, sizeSmall, Regular, Ink, left, "initials")
-	c.line(rx+47, py+3.8, rx+rw-2, py+3.8, Pen{Width: 0.2, Colour: Ink})
+	c.text(tx+23.5, py+3.3, sizeSmall, Regular, Ink, left, "fail")
+	c.text(tx+36, py+3.3, sizeSmall, Regular, Ink, left, "initials")
+	c.line(tx+47, py+3.8, tx+90, py+3.8, Pen{Width: 0.2, Colour: Ink})
+	c.text(tx+95, py+3.3, sizeSmall, Regular, Ink, left, "date")
+	c.line(tx+102, py+3.8, tx+inner, py+3.8, Pen{Width: 0.2, Colour: Ink})
 	f.y += h + 2
 }
 

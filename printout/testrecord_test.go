@@ -1,0 +1,153 @@
+package printout
+
+import (
+	"slices"
+	"strings"
+	"testing"
+	"time"
+
+	"coilwright/printout/pdftext"
+	"coilwright/winding/job/jobtest"
+	"coilwright/winding/plan"
+)
+
+// recordTexts reads back the text runs of the test record sheets.
+func recordTexts(t *testing.T, p *plan.Plan, o Options) []string {
+	t.Helper()
+	pk, err := Build(p, o)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pages, err := pdftext.Pages(render(t, pk))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out []string
+	for k, pg := range pk.Pages {
+		if pg.Kind == TestRecordPage {
+			out = append(out, pages[k]...)
+		}
+	}
+	return out
+}
+
+// The test record has one cell per reading of the plan's schema, with the
+// value a meter shows between the line terminals worked out here from the
+// plan's phase resistances: star, two phases in series (R_U + R_V); delta of
+// three, one phase in parallel with the other two in series, R·2R/3R = 2R/3
+// for equal phases (series and parallel resistance, any circuits text).
+func TestTestRecordLineToLineCells(t *testing.T) {
+	for _, tc := range []struct {
+		name  string
+		delta bool
+	}{{"star", false}, {"delta", true}} {
+		t.Run(tc.name, func(t *testing.T) {
+			p, err := plan.Build(jobtest.DemoVariant(jobtest.Variant{Slots: 24, Poles: 28, Layers: 2, Paths: 1, Phases: 3, Delta: tc.delta, TurnsPerCoil: 18}))
+			if err != nil {
+				t.Fatal(err)
+			}
+			texts := recordTexts(t, p, Options{})
+			for _, cell := range []string{"U–V", "V–W", "W–U", "winding temperature", "U1–U2", "V1–V2", "W1–W2", "meter (make, model)", "serial"} {
+				if !slices.Contains(texts, cell) {
+					t.Errorf("test record lacks the cell %q", cell)
+				}
+			}
+			ph := map[string]float64{}
+			for _, o := range p.PhaseOhms {
+				ph[o.Phase] = o.OhmAmbient
+			}
+			var want float64
+			if tc.delta {
+				r, sum := ph["U"], ph["U"]+ph["V"]+ph["W"]
+				want = r * (sum - r) / sum
+			} else {
+				want = ph["U"] + ph["V"]
+			}
+			if !slices.Contains(texts, plan.FormatValue(want, plan.UnitOhm)) {
+				t.Errorf("test record lacks the U–V value the meter shows, %s (%s)", plan.FormatValue(want, plan.UnitOhm), tc.name)
+			}
+			all := strings.Join(texts, " ")
+			how := map[bool]string{false: "star: two phases in series", true: "delta: one phase in parallel with the other 2 in series"}[tc.delta]
+			if !strings.Contains(all, how) {
+				t.Errorf("test record does not say how a %s reads line to line (%q)", tc.name, how)
+			}
+			if other := map[bool]string{false: "delta:", true: "star:"}[tc.delta]; strings.Contains(all, other) {
+				t.Errorf("%s test record speaks of %q", tc.name, other)
+			}
+			for _, want := range []string{"test: 570 V AC, 60 s, no breakdown", "test: 500 V DC, read after 1 min"} {
+				if !tc.delta && !slices.Contains(texts, want) {
+					t.Errorf("test record lacks the conditions %q", want)
+				}
+			}
+		})
+	}
+}
+
+// Readings filled from a record print each with its own unit, and the
+// results the check works out from them: phase values at 20 °C with their
+// deviation, the imbalance and the verdict.
+func TestTestRecordFilledFromRecord(t *testing.T) {
+	p := demoPlan(t)
+	var res plan.Test
+	for _, tt := range p.Tests {
+		if tt.Name == plan.TestResistance {
+			res = tt
+		}
+	}
+	if len(res.Readings) < 4 {
+		t.Fatalf("demo resistance test has readings %v; want U–V, V–W, W–U and temperature", res.Readings)
+	}
+	taken := time.Date(2026, 11, 21, 9, 0, 0, 0, time.UTC)
+	texts := recordTexts(t, p, Options{Readings: map[string]Reading{
+		plan.TestResistance:  {Values: map[string]float64{"uv": 0.2855, "vw": 0.2861, "wu": 0.2858, "temp": 15}, Taken: taken, Verdict: "pass"},
+		plan.TestInsulation:  {Values: map[string]float64{"ir1": 200, "ir10": 600, "temp": 15, "volts": 500}, Verdict: "pass"},
+		plan.TestHighVoltage: {Values: map[string]float64{"volts": 570, "seconds": 60, "passed": 1}, Verdict: "pass"},
+	}})
+	all := strings.Join(texts, "\n")
+	for _, want := range []string{"285.5 mΩ", "286.1 mΩ", "15 °C", "200 MΩ", "600 MΩ", "500 V", "570 V", "60 s", "held", "imbalance", "verdict: pass", "taken 2026-11-21"} {
+		if !strings.Contains(all, want) {
+			t.Errorf("test record filled from a record lacks %q", want)
+		}
+	}
+	if !strings.Contains(all, "phases at 20 °C: U ") {
+		t.Errorf("test record lacks the phase values at 20 °C")
+	}
+	for _, bad := range []string{"volts 570", "Mohm", "ohm", "ir1 200"} {
+		if strings.Contains(all, bad) {
+			t.Errorf("test record prints %q", bad)
+		}
+	}
+}
+
+// A five-phase pack follows the job's phase count: it never says "three",
+// and its cells name five line pairs.
+func TestFivePhasePackNeverSaysThree(t *testing.T) {
+	p, err := plan.Build(jobtest.DemoVariant(jobtest.Variant{Slots: 20, Poles: 18, Layers: 2, Paths: 1, Phases: 5, TurnsPerCoil: 18}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pages, err := pdftext.Pages(render(t, pk))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var all []string
+	for _, pg := range pages {
+		all = append(all, pg...)
+	}
+	for _, s := range all {
+		if strings.Contains(strings.ToLower(s), "three") {
+			t.Errorf("five-phase pack says %q", s)
+		}
+	}
+	names := p.Layout.PhaseNames
+	for i := range names {
+		pair := names[i] + "–" + names[(i+1)%len(names)]
+		if !slices.Contains(all, pair) {
+			t.Errorf("five-phase test record lacks the cell %q", pair)
+		}
+	}
+}
