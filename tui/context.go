@@ -104,6 +104,8 @@ func (c *shared) toothOf(i int) int {
 		return s.Jumper.ToTooth
 	case s.Kind == plan.StepSeparator && s.Slot > 0:
 		return s.Slot
+	case isPolarity(s):
+		return c.polarityTooth(i)
 	}
 	return 0
 }

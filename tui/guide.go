@@ -243,6 +243,11 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 	g.looking = false
 	wasTyping := g.typed
 	g.typed = false
+	if ok && isPolarity(s) {
+		if pg, cmd, handled := g.polarityKey(msg, s); handled {
+			return pg, cmd
+		}
+	}
 	switch {
 	case key.Matches(msg, k.guide.Prev):
 		return g.lookAt(cur - 1), nil
@@ -451,6 +456,8 @@ func (g guideModel) shortHelp() []key.Binding {
 	case !ok:
 	case s.Kind == plan.StepCoil:
 		out = append(out, k.guide.Count, k.guide.Uncount, k.guide.Digits, withHelp(k.guide.Done, "coil done"))
+	case isPolarity(s):
+		out = append(out, g.polarityShortHelp()...)
 	case s.Kind == plan.StepTest:
 		out = append(out, k.guide.Readings)
 	default:
@@ -459,7 +466,7 @@ func (g guideModel) shortHelp() []key.Binding {
 	// The look keys come early: the line is cut at the right on narrow
 	// terminals, and the help screen lists every key anyway.
 	out = append(out, withHelp(k.guide.Look, "look"))
-	if ok {
+	if ok && !isPolarity(s) { // n reads north there
 		out = append(out, k.guide.Note)
 	}
 	return append(out, k.guide.Undo, k.global.Overview, k.global.Help, k.global.Quit)

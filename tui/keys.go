@@ -39,6 +39,8 @@ type keyMaps struct {
 	typing  typingKeys
 	confirm confirmKeys
 	scroll  scrollKeys
+
+	polarity polarityKeys
 }
 
 func newKeyMaps() *keyMaps {
@@ -71,6 +73,7 @@ func newKeyMaps() *keyMaps {
 			Yes: key.NewBinding(key.WithKeys("enter", "y"), key.WithHelp("enter/y", "yes")),
 			No:  key.NewBinding(key.WithKeys("esc", "n"), key.WithHelp("esc/n", "no, go back")),
 		},
+		polarity: newPolarityKeys(),
 		scroll: scrollKeys{
 			Up:       key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("up", "scroll up")),
 			Down:     key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("down", "scroll down")),
@@ -90,6 +93,7 @@ func (k *keyMaps) fullHelp() [][]key.Binding {
 		{k.guide.Note, k.guide.Undo, k.global.Overview, k.global.Help},
 		{k.guide.Prev, k.guide.Next, k.guide.Back, withHelp(k.scroll.Pick, "on all steps: look at it")},
 		{k.typing.Accept, k.typing.Next, k.typing.Cancel},
+		{withHelp(k.polarity.North, "polarity: north"), withHelp(k.polarity.South, "polarity: south"), k.polarity.Unsure, k.polarity.Reread},
 		{k.global.Quit, k.global.ForceQuit, k.scroll.Up, k.scroll.Down},
 	}
 }

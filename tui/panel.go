@@ -121,6 +121,8 @@ func (g guideModel) panelLines(cw int, compact bool) *lines {
 		g.doneView(b)
 	case s.Kind == plan.StepCoil && s.Coil != nil:
 		g.coilView(b, s, compact)
+	case isPolarity(s):
+		g.polarityView(b, s)
 	case s.Kind == plan.StepTest:
 		g.testView(b, s)
 	default:
