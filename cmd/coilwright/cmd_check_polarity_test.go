@@ -1,6 +1,7 @@
 package main
 
 import (
+	"encoding/json"
 	"os"
 	"path/filepath"
 	"reflect"
@@ -9,6 +10,7 @@ import (
 	"testing"
 
 	"coilwright/winding/job"
+	"coilwright/winding/journal"
 	"coilwright/winding/plan"
 )
 
@@ -126,4 +128,41 @@ func mustDemoPlan(t *testing.T, paths int) *plan.Plan {
 		t.Fatal(err)
 	}
 	return p
+}
+
+// --record keeps the poles in the progress record on the polarity step of
+// the phase read, where the bench guide shows them.
+func TestCheckPolarityRecord(t *testing.T) {
+	rec := filepath.Join(t.TempDir(), "demo.progress")
+	p := mustDemoPlan(t, 1)
+	args := append([]string{"check", "--demo", "--record", "--progress", rec}, polarityFlags(p, 7)[:2]...)
+	if code, _, errs := runCLI(t, args...); code != 0 {
+		t.Fatalf("check --polarity --record = exit %d (%s)", code, errs)
+	}
+	data, err := os.ReadFile(rec)
+	if err != nil {
+		t.Fatal(err)
+	}
+	uStep := 0
+	for _, s := range p.Steps {
+		if s.Test == plan.TestPolarity && len(s.Phases) == 1 && s.Phases[0] == "U" {
+			uStep = s.Index
+		}
+	}
+	var found bool
+	for _, line := range strings.Split(strings.TrimSpace(string(data)), "\n") {
+		var ev journal.Event
+		if err := json.Unmarshal([]byte(line), &ev); err != nil {
+			t.Fatal(err)
+		}
+		if ev.Test == plan.TestPolarity {
+			found = true
+			if ev.Step != uStep || ev.Verdict != "fail" || ev.Readings["tooth_1"] != -1 || ev.Readings["tooth_7"] != -1 || len(ev.Readings) != 8 {
+				t.Errorf("polarity event %+v; want step %d, fail, tooth_1 -1 (S), tooth_7 -1 (S, reversed), 8 teeth", ev, uStep)
+			}
+		}
+	}
+	if !found {
+		t.Errorf("no polarity event in the record:\n%s", data)
+	}
 }

@@ -218,19 +218,15 @@ func (b *builder) polarity() error {
 func (b *builder) polarityTest() Test {
 	p := b.p
 	amps, watts, volts := PolarityCurrent(p)
-	var exp []string
-	for _, n := range p.Layout.PhaseNames {
-		exp = append(exp, n+": "+PoleString(p.PolesOf(n)))
-	}
 	paths := ""
 	if p.Layout.Spec.Paths > 1 {
 		paths = " (all its parallel paths at once)"
 	}
 	return Test{Name: TestPolarity, Title: "Polarity of every tooth (DC and compass)",
 		What: fmt.Sprintf("Drive %g A DC through one phase at a time%s from its start terminal to its finish terminal and hold a compass "+
-			"(or a Hall probe, magnetic viewing film, a phone's magnetometer) at each wound tooth face: each shows the pole of the plan. Expected: %s.",
-			amps, paths, strings.Join(exp, "; ")),
-		Unit: UnitPole, Compare: Matches, Current: amps, HeatW: round3(watts),
+			"(or a Hall probe, magnetic viewing film, a phone's magnetometer) at each wound tooth face: each shows the pole of the plan.",
+			amps, paths),
+		Unit: UnitPole, Compare: Matches, Current: amps, HeatW: round3(watts), Readings: poleReadings(p.Polarity),
 		Source: "common practice (the DC polarity test of rewinders); poles by the right-hand rule: a coil wound clockwise seen from the air gap, current entering at its start, makes its tooth face a south pole (a compass's north end points at it), counter-clockwise a north pole",
 		Note: fmt.Sprintf("%g A is a fifth of the rated phase current (at most %g A); it needs about %s across the phase and makes %s of heat in it (I²R at %s), "+
 			"so the winding stays cool; a reversed coil shows the opposite pole of the plan, swapped start and finish leads reverse every tooth of the phase (or of the path)",
@@ -250,4 +246,18 @@ func formatWatts(w float64) string {
 		return fmt.Sprintf("%.0f mW", w*1000)
 	}
 	return fmt.Sprintf("%.2g W", w)
+}
+
+// poleReadings is the reading schema of the polarity test: the pole seen at
+// every wound tooth, in the order of Plan.Polarity, under PoleKey, with the
+// pole of the plan as its expected value (Pole.Value: +1 N, -1 S; no
+// window: a pole is right or it is not).
+func poleReadings(tps []ToothPole) []Reading {
+	out := make([]Reading, len(tps))
+	for i, tp := range tps {
+		v := tp.Pole.Value()
+		out[i] = Reading{Key: PoleKey(tp.Tooth), Label: tp.Phase + " tooth " + itoa(tp.Tooth), Unit: UnitPole,
+			Expected: &Expected{Value: v}}
+	}
+	return out
 }

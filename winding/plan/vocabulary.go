@@ -90,6 +90,11 @@ func FormatValue(v float64, u Unit) string {
 		return strconv.FormatFloat(math.Round(v), 'f', 0, 64) + " rpm"
 	case UnitPercent:
 		return sig(v, 3) + " %"
+	case UnitPole:
+		if pole, ok := PoleFromValue(v); ok {
+			return string(pole)
+		}
+		return "unsure"
 	case UnitPassFail:
 		if v >= 1 {
 			return "held"

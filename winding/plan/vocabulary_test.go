@@ -120,6 +120,8 @@ func TestReadingSchema(t *testing.T) {
 		TestInsulation:      "ir1,volts,temp,ir10",
 		TestHighVoltage:     "volts,seconds,passed",
 		TestBackEMF:         "uv,vw,wu,rpm",
+		// every wound tooth, phase by phase in tooth order (12/10: U on 1, 2, 7, 8)
+		TestPolarity: "tooth_1,tooth_2,tooth_7,tooth_8,tooth_3,tooth_4,tooth_9,tooth_10,tooth_5,tooth_6,tooth_11,tooth_12",
 	}
 	for _, tt := range p.Tests {
 		if got := keysOf(tt); got != want[tt.Name] {

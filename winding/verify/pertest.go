@@ -49,6 +49,10 @@ func PerTest(p *plan.Plan, r Readings, rep *Report) []TestReading {
 		}
 		tr := TestReading{Test: t.Name, Values: ValuesOf(p, t, r), Verdict: v}
 		for _, s := range p.Steps {
+			if t.Name == plan.TestPolarity {
+				tr.Step = polarityStepOf(p, r.Polarity)
+				break
+			}
 			if s.Kind == plan.StepTest && s.Test == t.Name {
 				tr.Step = s.Index
 				break

@@ -357,3 +357,26 @@ func (pr *PolarityResult) text() string {
 	}
 	return b.String()
 }
+
+// polarityStepOf is the plan's polarity step the observations belong to:
+// the step of their phase when they are of one phase, else the step that
+// tests every phase; 0 when the plan has none.
+func polarityStepOf(p *plan.Plan, obs []PoleReading) int {
+	phases := map[string]bool{}
+	for _, o := range obs {
+		phases[o.Phase] = true
+	}
+	whole := 0
+	for _, s := range p.Steps {
+		if s.Kind != plan.StepTest || s.Test != plan.TestPolarity {
+			continue
+		}
+		if len(s.Phases) == 1 && len(phases) == 1 && phases[s.Phases[0]] {
+			return s.Index
+		}
+		if len(s.Phases) > 1 {
+			whole = s.Index
+		}
+	}
+	return whole
+}

@@ -52,6 +52,10 @@ func ValuesOf(p *plan.Plan, t plan.Test, r Readings) map[string]float64 {
 			put(plan.KeyVolts, w.Volts)
 			put(plan.KeyPassed, map[bool]float64{true: 1, false: 0}[w.Passed])
 		}
+	case plan.TestPolarity:
+		for _, o := range r.Polarity {
+			put(plan.PoleKey(o.Tooth), o.Pole.Value())
+		}
 	case plan.TestBackEMF:
 		if e := r.EMF; e != nil {
 			lines([3]float64{e.UV, e.VW, e.WU})
