@@ -17,9 +17,22 @@ const (
 )
 
 // connections draws every phase and path as a chain of coils from its start
-// terminal to its finish terminal, the jumpers between them, then the star
-// point or delta joints.
+// terminal to its finish terminal, the jumpers between them, and the star
+// point or delta joints: after the chains where they fit on the chains' last
+// sheet, else above the chains on the first, so they never take a sheet of
+// their own.
 func (b *builder) connections() {
+	first := len(b.pages)
+	if !b.connectionSheets(false) {
+		b.pages = b.pages[:first]
+		b.connectionSheets(true)
+	}
+}
+
+// connectionSheets lays the connection sheets out, the joints first or
+// last; it reports whether the joints found room without a sheet of their
+// own.
+func (b *builder) connectionSheets(jointsFirst bool) bool {
 	l := b.p.Layout
 	title := "Connections"
 	c := b.newPage(ConnectionPage, title)
@@ -29,6 +42,10 @@ func (b *builder) connections() {
 			"The number on a jumper is the count of tooth pitches it runs round the lead end, up the tooth numbers; "+
 			"“reverse” marks a jumper after which the next coil is wound the other way round.")
 	y += 2
+	if jointsFirst {
+		b.joints(c, y)
+		y += b.jointsHeight() + 4
+	}
 	perLine := int((b.width() - 2*conTagW - 6 + conGap) / (conBoxW + conGap))
 	perLine = max(1, perLine)
 	for _, ch := range l.Chains {
@@ -44,12 +61,15 @@ func (b *builder) connections() {
 		}
 		y += 2
 	}
+	if jointsFirst {
+		return true
+	}
 	need := b.jointsHeight()
 	if y+need > b.bottom() {
-		c = b.newPage(ConnectionPage, title+" (continued)")
-		y = b.top() + 3
+		return false
 	}
 	b.joints(c, y)
+	return true
 }
 
 // pathWireM is the planned wire length of a path, 0 when the plan has none.
