@@ -17,7 +17,7 @@ const (
 
 // sideIntoStack reports whether the side of a coil in the slot before its
 // tooth (before true) or after it carries the path current into the stack,
-// away from the connection end. Derivation (DESIGN.md conventions): for an
+// away from the connection end. Derivation (the conventions of package winding): for an
 // inner rotor a person in the air gap facing the tooth, lead end up, has the
 // lower tooth numbers on the right; going clockwise the wire crosses the lead
 // end towards the right and so runs into the stack in the slot before the

@@ -18,7 +18,7 @@
 //
 // Conventions. Teeth are numbered 1..Q counter-clockwise seen from the
 // connection end, tooth 1 at the top of the slot map; slot k lies between
-// tooth k and tooth k+1 (DESIGN.md). A sense arrow shows the way round the
+// tooth k and tooth k+1 (package winding conventions). A sense arrow shows the way round the
 // tooth seen from the air gap facing the tooth, following the path from its
 // start terminal. In the developed layout a cross marks a coil side whose
 // current (from the start terminal) runs into the stack, away from the

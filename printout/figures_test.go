@@ -38,7 +38,7 @@ func TestFiguresCaptions(t *testing.T) {
 }
 
 // Every coil's phasor is drawn and numbered by its tooth; the phase sums
-// lie 360/m degrees apart (a balanced winding: DESIGN.md phase sequence).
+// lie 360/m degrees apart (a balanced winding: the phase sequence of package winding).
 func TestStarOfSlotsPhasors(t *testing.T) {
 	for i, fx := range fixtures {
 		t.Run(fx.name, func(t *testing.T) {

@@ -10,7 +10,7 @@ import (
 
 // toothAngle is the page angle (degrees, counter-clockwise) of tooth k of q:
 // tooth 1 at the top, numbers rising counter-clockwise as seen from the
-// connection end (DESIGN.md).
+// connection end (the conventions in package winding and the README).
 func toothAngle(k, q int) float64 { return 90 + float64(k-1)*360/float64(q) }
 
 // ringGeometry is the set of radii the slot map uses, in mm.

@@ -42,7 +42,7 @@ func angleDiff(a, b complex128) float64 {
 }
 
 // checkBalanceAndSequence: equal magnitudes, each phase lagging the one before
-// by 360/m (DESIGN.md phase sequence), tooth 1 a CW coil of phase U starting a
+// by 360/m (the phase sequence of the package doc), tooth 1 a CW coil of phase U starting a
 // run of U coils.
 func checkBalanceAndSequence(t *testing.T, l *Layout) {
 	t.Helper()

@@ -11,7 +11,7 @@ import (
 // permanent-magnet machines with concentrated windings", ICEM 2004, and
 // F. Meier, "Permanent-magnet synchronous machines with non-overlapping
 // concentrated windings for low-speed direct-drive applications", KTH thesis,
-// 2008 (values from memory, as listed in REFERENCES.md; every one is
+// 2008 (values from memory; every one is
 // re-derived below by the textbook phase-band formula in property_test.go).
 func TestPublishedWindingFactors(t *testing.T) {
 	cases := []struct {

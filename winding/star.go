@@ -46,7 +46,8 @@ func fundamentalAngle(i, sg int, s Spec) int {
 // On a circle of W = 4mQ steps, tooth index i lies at -p*i*4m; the axes lie at
 // j*2Q (j = 0..2m-1), each owning the half-open sector [j*2Q-Q, j*2Q+Q). Axis
 // j is phase ((s*m-j)/2) mod m with sign s = j mod 2 (negative when s = 1):
-// phase k's positive axis lies at -k*360/m, so V lags U (DESIGN.md).
+// phase k's positive axis lies at -k*360/m, so V lags U (the phase sequence
+// of the package doc).
 func (st *star) assign() bool {
 	s := st.s
 	m, q := s.Phases, s.Slots

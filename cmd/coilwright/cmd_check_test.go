@@ -63,7 +63,7 @@ func TestCheckDoneWhen(t *testing.T) {
 		}
 		for _, k := range []string{"temperature_c", "expected_phase_ohm", "phases", "imbalance_percent", "verdict", "findings"} {
 			if _, ok := m[k]; !ok {
-				t.Errorf("check --json lacks %q (DESIGN.md contract)", k)
+				t.Errorf("check --json lacks %q (README contract)", k)
 			}
 		}
 	})

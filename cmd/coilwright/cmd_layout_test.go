@@ -24,7 +24,7 @@ func TestLayoutText(t *testing.T) {
 	}
 }
 
-// The JSON contract of DESIGN.md: every listed field present, with values an
+// The JSON contract of the README: every listed field present, with values an
 // independent computation agrees with (12/10: Libert & Soulard 2004, from
 // memory: k_w 0.933; t = gcd(12,5) = 1; LCM(12,10) = 60; 2pQ/LCM = 2).
 func TestLayoutJSONContract(t *testing.T) {

@@ -197,7 +197,7 @@ func TestPlanJSONContract(t *testing.T) {
 	for _, k := range []string{"layout", "connection", "turns_per_coil", "wire", "mean_turn_length_mm", "slot_fill",
 		"paths", "phase_resistance_20c_ohm", "copper_mass_kg", "steps", "tests"} {
 		if _, ok := m[k]; !ok {
-			t.Errorf("plan --json lacks %q (DESIGN.md contract)", k)
+			t.Errorf("plan --json lacks %q (README contract)", k)
 		}
 	}
 	var w map[string]any

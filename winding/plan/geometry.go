@@ -163,7 +163,9 @@ func (b *builder) lengths() error {
 	t := j.Stator.LinerMM
 	// Mean turn: the coil sits on the tooth grown by the liner on every face
 	// (L+2t by w+2t), and its mean turn runs at half the build b, round the
-	// corners with radius b/2: 2·(L+2t) + 2·(w+2t) + π·b (REFERENCES.md).
+	// corners with radius b/2: 2·(L+2t) + 2·(w+2t) + π·b (geometry of a coil
+	// wound on a rectangular former; common practice for the mean length of
+	// turn of a bobbin or tooth coil, checked by hand in plan_test.go).
 	p.MeanTurnLengthMM = 2*(j.Stator.StackLengthMM+2*t) + 2*(j.Stator.ToothWidthMM+2*t) + math.Pi*p.Slot.CoilBuildMM
 	coilM := float64(p.TurnsPerCoil) * p.MeanTurnLengthMM / 1000
 	// Jumpers run round the lead end at mid slot depth, from the up slot of

@@ -8,7 +8,7 @@ import (
 
 // Plan is everything a person needs to wind, connect and prove one stator. It
 // is plain data built by Build from a job; screens and printouts only read it.
-// JSON names follow the contract in DESIGN.md.
+// JSON names follow the plan --json contract written out in the README.
 type Plan struct {
 	Name     string    `json:"name"`
 	Revision string    `json:"revision,omitempty"`

@@ -42,7 +42,7 @@ type Finding struct {
 }
 
 // Report is the whole check, in the shape of the `check --json` contract
-// (DESIGN.md) with extra fields.
+// (written out in the README) with extra fields.
 type Report struct {
 	TemperatureC float64 `json:"temperature_c"`
 	Connection   string  `json:"connection"`       // of the plan: "star" or "delta"

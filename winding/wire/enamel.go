@@ -7,8 +7,8 @@ import (
 
 // enamelRow is one line of IEC 60317-0-1 Table 1 for enamelled round copper
 // wire: the nominal bare diameter, its tolerance (±) and the maximum overall
-// diameter of grade 1 and grade 2 enamel. Values as listed in the project's
-// REFERENCES.md: partly from memory, cross-checked against the Indian reprint
+// diameter of grade 1 and grade 2 enamel. Values partly from memory,
+// cross-checked against the Indian adoption of the same standard,
 // IS 13730-0-1. Grade 1 at 0.400 mm is given as 0.439 (0.441 in one reading).
 type enamelRow struct {
 	nominal, tol, grade1, grade2 float64

@@ -76,8 +76,8 @@ func TestResistanceAndMass(t *testing.T) {
 }
 
 // ASTM B258: d = 0.127 mm · 92^((36−n)/39). The values below are the
-// standard's table to three decimals (AWG 18, 20, 24 as in REFERENCES.md;
-// the others from memory, and each follows from the formula).
+// standard's table to three decimals (from memory; each follows from the
+// formula).
 func TestAWGDiameterASTMB258(t *testing.T) {
 	cases := []struct {
 		awg  int
@@ -119,8 +119,8 @@ func TestAWGDiameterASTMB258(t *testing.T) {
 	}
 }
 
-// IEC 60317-0-1 Table 1 as listed in REFERENCES.md (partly from memory,
-// cross-checked against IS 13730-0-1).
+// IEC 60317-0-1 Table 1 (partly from memory, cross-checked against its
+// Indian adoption IS 13730-0-1).
 func TestEnamelIEC60317(t *testing.T) {
 	cases := []struct {
 		bare         float64
