@@ -141,6 +141,10 @@ func runCheck(cmd *cobra.Command, args []string, f *checkFlags) error {
 	case errors.As(err, &pe):
 		return badInputf("--polarity %s: %s", pe.Token, pe.Reason)
 	case errors.As(err, &ie):
+		if f.readingsFile != "" && !cmd.Flags().Changed(flagOf(ie.Field)) && !(flagOf(ie.Field) == "hv-volts" && (f.hvPass || f.hvFail)) {
+			// The value came from the readings file: name it by the file's key.
+			return badInputf("--readings %s: %s = %s: %s", f.readingsFile, verify.FileKey(ie.Field), fmtReading(ie.Value), ie.Reason)
+		}
 		return badInputf("--%s %s: %s", flagOf(ie.Field), fmtReading(ie.Value), ie.Reason)
 	case errors.Is(err, verify.ErrUnsupported):
 		return badInput(err)
@@ -329,9 +333,15 @@ func (f *checkFlags) readings(cmd *cobra.Command) (verify.Readings, error) {
 				v    float64
 			}{{"uv", r.UV}, {"vw", r.VW}, {"wu", r.WU}} {
 				if x.v == 0 && !ch(x.name) {
+					if f.readingsFile != "" {
+						return r, badInputf("--readings %s: %s is missing: give all three line-to-line readings uv, vw and wu in ohm (or per_phase = [U, V, W]), \"OL\" for an open circuit", f.readingsFile, x.name)
+					}
 					return r, badInputf("--%s is missing: give all three line-to-line readings --uv, --vw and --wu in ohm (or --per-phase U,V,W)", x.name)
 				}
 			}
+		}
+		if !haveTemp && f.readingsFile != "" {
+			return r, badInputf("--readings %s: temp is missing: the winding temperature in °C is needed to correct the readings to 20 °C (or give --temp)", f.readingsFile)
 		}
 		if !haveTemp {
 			return r, badInputf("--temp is missing: the winding temperature in °C is needed to correct the readings to 20 °C")

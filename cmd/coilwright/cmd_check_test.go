@@ -246,3 +246,33 @@ func TestCheckWithstandAgainstPlan(t *testing.T) {
 		}
 	}
 }
+
+// A readings file's errors name the file's own keys, not the flags, and the
+// file takes OL for an open circuit as the flags do.
+func TestCheckReadingsFileKeys(t *testing.T) {
+	dir := t.TempDir()
+	cases := []struct{ body, want string }{
+		{"temp = 20\nuv = 0.29\nvw = 0.29\nwu = 0.29\n[withstand]\npassed = true\nvolts = 0\n", "[withstand] volts = 0"},
+		{"temp = 20\nuv = 0.29\nvw = 0.29\n", "wu is missing"},
+		{"uv = 0.29\nvw = 0.29\nwu = 0.29\n", "temp is missing"},
+		{"temp = 20\nuv = 0.29\nvw = 0.29\nwu = -1\n", "wu = -1"},
+		{"temp = 20\nuv = 0.29\nvw = \"x\"\nwu = 0.29\n", `vw = "x"`},
+	}
+	for i, c := range cases {
+		path := filepath.Join(dir, fmt.Sprintf("r%d.toml", i))
+		if err := os.WriteFile(path, []byte(c.body), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		code, _, errs := runCLI(t, "check", "--demo", "--readings", path)
+		if code != 2 || !strings.Contains(errs, c.want) || strings.Contains(errs, "--wu") || strings.Contains(errs, "--hv-volts") || strings.Contains(errs, "--temp is") {
+			t.Errorf("check --readings with %q: exit %d, %q; want exit 2 naming %q by its file key", c.body, code, errs, c.want)
+		}
+	}
+	path := filepath.Join(dir, "open.toml")
+	if err := os.WriteFile(path, []byte("temp = 20\nuv = \"OL\"\nvw = \"OL\"\nwu = 0.29\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if code, out, errs := runCLI(t, "check", "--demo", "--readings", path); code != 0 || !strings.Contains(out, "open") {
+		t.Errorf("check --readings with uv and vw OL: exit %d, %q %q; want a check that finds an open phase", code, out, errs)
+	}
+}

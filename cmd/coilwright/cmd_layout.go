@@ -39,6 +39,18 @@ winding. The --json "sequence" field holds the same tokens as an array.`,
 					return badInputf("--%s is required (e.g. --slots 12 --poles 10)", f)
 				}
 			}
+			// A zero given on the command line is refused, not taken as the
+			// default (winding.Spec reads 0 as "not given").
+			for _, z := range []struct {
+				name, want string
+				v          int
+			}{{"phases", "an odd number, 3 or more, e.g. --phases 3", s.Phases},
+				{"layers", "1 (alternate teeth wound) or 2 (every tooth wound)", s.Layers},
+				{"paths", "1 or more parallel paths per phase, e.g. --paths 1", s.Paths}} {
+				if cmd.Flags().Changed(z.name) && z.v == 0 {
+					return badInputf("--%s 0: give %s", z.name, z.want)
+				}
+			}
 			l, err := winding.Design(s)
 			if err != nil {
 				return badInput(err)

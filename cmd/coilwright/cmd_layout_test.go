@@ -72,6 +72,10 @@ func TestLayoutRefusals(t *testing.T) {
 		{[]string{"layout", "--slots", "twelve", "--poles", "10"}, "twelve"},
 		{[]string{"layout", "--poles", "10"}, "--slots is required"},
 		{[]string{"layout", "--slots", "12", "--poles", "10", "--paths", "3"}, "feasible: [1 2]"},
+		// A zero is refused, not read as the default.
+		{[]string{"layout", "--slots", "12", "--poles", "10", "--phases", "0"}, "--phases 0"},
+		{[]string{"layout", "--slots", "12", "--poles", "10", "--layers", "0"}, "--layers 0"},
+		{[]string{"layout", "--slots", "12", "--poles", "10", "--paths", "0"}, "--paths 0"},
 		{[]string{"pairs", "--max-slots", "12"}, "--max-poles is required"},
 		{[]string{"pairs", "--max-slots", "12", "--max-poles", "12", "--layers", "3"}, "--layers"},
 		{[]string{"pairs", "--max-slots", "0", "--max-poles", "12"}, "max-slots"},

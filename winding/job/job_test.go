@@ -226,3 +226,24 @@ func TestFailWithoutParse(t *testing.T) {
 		t.Errorf("Fail on a Job built in code = %q line %d; want no position", e.Error(), e.Line)
 	}
 }
+
+// A job file saved with a UTF-8 byte-order mark (some editors write one) is
+// read as if it had none, positions unchanged; UTF-16 is refused saying so.
+func TestByteOrderMark(t *testing.T) {
+	plain, err := Parse(TemplateTOML(), "plain")
+	if err != nil {
+		t.Fatal(err)
+	}
+	j, err := Parse(append([]byte("\xef\xbb\xbf"), TemplateTOML()...), "bom")
+	if err != nil {
+		t.Fatalf("Parse(template with a UTF-8 BOM) = %v; want it read", err)
+	}
+	if j.Winding != plain.Winding || j.Name != plain.Name {
+		t.Errorf("Parse(template with a BOM) = %+v; want the template %+v", j.Winding, plain.Winding)
+	}
+	_, err = Parse([]byte("\xff\xfen\x00a\x00"), "utf16")
+	var fe *FieldError
+	if !errors.As(err, &fe) || !strings.Contains(fe.Reason, "UTF-16") {
+		t.Errorf("Parse(UTF-16) = %v; want a refusal that says UTF-16", err)
+	}
+}

@@ -25,6 +25,13 @@ func Parse(data []byte, name string) (*Job, error) {
 		return nil, &FieldError{File: name, Field: "(file)", Value: fmt.Sprintf("%d bytes", len(data)),
 			Reason: "too large for a job file", Hint: fmt.Sprintf("a job file is a few kilobytes; the limit is %d bytes", MaxFileSize)}
 	}
+	// A UTF-8 byte-order mark, as some editors write at the start of a file,
+	// is not part of the TOML: read past it. UTF-16 is refused saying so.
+	data = bytes.TrimPrefix(data, []byte("\xef\xbb\xbf"))
+	if bytes.HasPrefix(data, []byte("\xff\xfe")) || bytes.HasPrefix(data, []byte("\xfe\xff")) {
+		return nil, &FieldError{File: name, Field: "(file)", Reason: "is UTF-16 text (it starts with a UTF-16 byte-order mark); a job file is UTF-8",
+			Hint: "save the file as UTF-8 in the editor"}
+	}
 	if len(bytes.TrimSpace(data)) == 0 {
 		return nil, &FieldError{File: name, Field: "(file)", Reason: "is empty",
 			Hint: "`coilwright new -o FILE` writes a commented job file to start from"}

@@ -4,20 +4,22 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
+	"math"
 	"sort"
+	"strings"
 
 	"github.com/pelletier/go-toml/v2"
 )
 
 // readingsFile is the measurements file: TOML with the same names as the
 // check command's flags (underscores for dashes). An open circuit is written
-// inf (the meter shows OL).
+// "OL" as the meter shows it (or "open", or inf).
 type readingsFile struct {
-	Temp     *float64  `toml:"temp"`
-	UV       float64   `toml:"uv"`
-	VW       float64   `toml:"vw"`
-	WU       float64   `toml:"wu"`
-	PerPhase []float64 `toml:"per_phase"`
+	Temp     *float64 `toml:"temp"`
+	UV       any      `toml:"uv"`
+	VW       any      `toml:"vw"`
+	WU       any      `toml:"wu"`
+	PerPhase []any    `toml:"per_phase"`
 	LeadOhm  float64   `toml:"lead_ohm"`
 	FourWire bool      `toml:"four_wire"`
 
@@ -60,6 +62,7 @@ func (e *FileError) Error() string {
 // Readings.Validate (Check does).
 func ParseReadings(data []byte) (Readings, bool, error) {
 	var f readingsFile
+	data = bytes.TrimPrefix(data, []byte("\xef\xbb\xbf")) // a UTF-8 byte-order mark is not part of the TOML
 	dec := toml.NewDecoder(bytes.NewReader(data)).DisallowUnknownFields()
 	if err := dec.Decode(&f); err != nil {
 		var de *toml.DecodeError
@@ -73,7 +76,25 @@ func ParseReadings(data []byte) (Readings, bool, error) {
 		}
 		return Readings{}, false, &FileError{Reason: err.Error()}
 	}
-	r := Readings{UV: f.UV, VW: f.VW, WU: f.WU, PerPhase: f.PerPhase, LeadOhm: f.LeadOhm, FourWire: f.FourWire}
+	r := Readings{LeadOhm: f.LeadOhm, FourWire: f.FourWire}
+	for _, x := range []struct {
+		key string
+		v   any
+		dst *float64
+	}{{"uv", f.UV, &r.UV}, {"vw", f.VW, &r.VW}, {"wu", f.WU, &r.WU}} {
+		v, err := fileOhm(x.key, x.v)
+		if err != nil {
+			return Readings{}, false, err
+		}
+		*x.dst = v
+	}
+	for i, x := range f.PerPhase {
+		v, err := fileOhm(fmt.Sprintf("per_phase[%d]", i+1), x)
+		if err != nil {
+			return Readings{}, false, err
+		}
+		r.PerPhase = append(r.PerPhase, v)
+	}
 	if f.Temp != nil {
 		r.TempC = *f.Temp
 	}
@@ -102,4 +123,45 @@ func ParseReadings(data []byte) (Readings, bool, error) {
 		r.Polarity = append(r.Polarity, obs...)
 	}
 	return r, f.Temp != nil, nil
+}
+
+// fileOhm reads a resistance from the file: a number, or "OL" / "open" for
+// an open circuit (+Inf), as the meter shows it and as the flags take it.
+func fileOhm(key string, v any) (float64, error) {
+	switch x := v.(type) {
+	case nil:
+		return 0, nil
+	case float64:
+		return x, nil
+	case int64:
+		return float64(x), nil
+	case string:
+		if strings.EqualFold(strings.TrimSpace(x), "ol") || strings.EqualFold(strings.TrimSpace(x), "open") {
+			return math.Inf(1), nil
+		}
+		return 0, &FileError{Reason: fmt.Sprintf("%s = %q: not a resistance; write ohm as a number, or \"OL\" for an open circuit", key, x)}
+	}
+	return 0, &FileError{Reason: fmt.Sprintf("%s = %v: not a resistance; write ohm as a number, or \"OL\" for an open circuit", key, v)}
+}
+
+// FileKey names a reading by its key in the measurements file, for errors
+// about a value the file gave: the Field of an InputError ("hv-volts",
+// "per-phase U") becomes "[withstand] volts", "per_phase" and so on.
+func FileKey(field string) string {
+	switch field {
+	case "ir1", "ir10":
+		return "[insulation] " + field
+	case "ir-volts":
+		return "[insulation] volts"
+	case "hv-volts":
+		return "[withstand] volts"
+	case "emf-uv", "emf-vw", "emf-wu":
+		return "[emf] " + strings.TrimPrefix(field, "emf-")
+	case "rpm":
+		return "[emf] rpm"
+	}
+	if rest, ok := strings.CutPrefix(field, "per-phase"); ok {
+		return "per_phase" + rest
+	}
+	return strings.ReplaceAll(field, "-", "_")
 }

@@ -5,6 +5,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"strings"
 	"testing"
 
 	"coilwright/winding/verify"
@@ -72,4 +73,30 @@ func FuzzParseReadings(f *testing.F) {
 			t.Fatalf("Check(%+v) gave no verdict", r)
 		}
 	})
+}
+
+// An open circuit is written as the meter shows it, OL (or open), in the
+// file as on the command line; anything else that is not a number is refused
+// naming the file's own key.
+func TestParseReadingsOL(t *testing.T) {
+	r, _, err := verify.ParseReadings([]byte("temp = 20\nuv = 0.29\nvw = \"OL\"\nwu = 0.29\nper_phase = [0.14, \"open\", 0.14]\n"))
+	if err != nil || !math.IsInf(r.VW, 1) || len(r.PerPhase) != 3 || !math.IsInf(r.PerPhase[1], 1) || r.UV != 0.29 {
+		t.Errorf("ParseReadings(vw = \"OL\", per_phase open) = %+v, %v; want vw and per_phase[2] open", r, err)
+	}
+	_, _, err = verify.ParseReadings([]byte("uv = \"high\"\n"))
+	var fe *verify.FileError
+	if !errors.As(err, &fe) || !strings.Contains(fe.Reason, `uv = "high"`) || !strings.Contains(fe.Reason, "OL") {
+		t.Errorf("ParseReadings(uv = \"high\") err = %v; want a FileError naming uv and offering OL", err)
+	}
+}
+
+func TestFileKey(t *testing.T) {
+	for field, want := range map[string]string{
+		"hv-volts": "[withstand] volts", "ir-volts": "[insulation] volts", "ir1": "[insulation] ir1",
+		"emf-vw": "[emf] vw", "rpm": "[emf] rpm", "lead-ohm": "lead_ohm", "per-phase U": "per_phase U", "uv": "uv", "temp": "temp",
+	} {
+		if got := verify.FileKey(field); got != want {
+			t.Errorf("FileKey(%q) = %q; want %q", field, got, want)
+		}
+	}
 }
