@@ -20,8 +20,8 @@ type readingsFile struct {
 	VW       any      `toml:"vw"`
 	WU       any      `toml:"wu"`
 	PerPhase []any    `toml:"per_phase"`
-	LeadOhm  float64   `toml:"lead_ohm"`
-	FourWire bool      `toml:"four_wire"`
+	LeadOhm  float64  `toml:"lead_ohm"`
+	FourWire bool     `toml:"four_wire"`
 
 	Insulation *struct {
 		IR1   float64 `toml:"ir1"`
