@@ -39,6 +39,7 @@ func ExampleBuild() {
 	// Developed layout
 	// Connections
 	// Design figures
+	// Machine figures
 	// Cut list and materials
 	// Winding checklist
 	// Winding checklist (continued)

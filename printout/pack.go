@@ -68,6 +68,7 @@ func Build(p *plan.Plan, o Options) (*Pack, error) {
 	b.developed()
 	b.connections()
 	b.figures()
+	b.machine()
 	b.cutList()
 	b.checklist()
 	b.testRecord()
