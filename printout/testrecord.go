@@ -133,7 +133,7 @@ func conditionsText(t plan.Test) string {
 // "up to 178.4 mΩ".
 func windowText(r plan.Reading) string {
 	e := r.Expected
-	if e == nil {
+	if e == nil || r.Unit == plan.UnitPole || e.Low == e.High {
 		return ""
 	}
 	if e.Low <= 0 {
@@ -165,8 +165,11 @@ func expectedText(t plan.Test, r plan.Reading) string {
 
 // unitCell is the unit printed at the end of an empty reading cell.
 func unitCell(u plan.Unit) string {
-	if u == plan.UnitPassFail {
+	switch u {
+	case plan.UnitPassFail:
 		return "held / broke down"
+	case plan.UnitPole:
+		return "N / S"
 	}
 	return string(u)
 }
@@ -304,6 +307,7 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	if title == "" {
 		title = t.Name
 	}
+	head := fmt.Sprintf("%d. %s", n, title)
 	accept := "accept when " + plan.LimitText(t)
 	cond := conditionsText(t)
 	rec, recorded := b.o.Readings[t.Name]
@@ -329,37 +333,35 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 			}
 			results = append([]string{"read: " + strings.Join(vs, ", ")}, results...)
 		}
-	}
-	// heights
-	h := tbPad + lineStep(sizeBody+1) + 1
-	h += paraHeight(inner, sizeBody, Bold, accept)
-	if cond != "" {
-		h += paraHeight(inner, sizeBody, Bold, "test: "+cond)
-	}
-	h += paraHeight(inner, sizeSmall, Regular, what) + 0.5
-	if t.Caution != "" {
-		h += paraHeight(inner-6, sizeSmall, Bold, t.Caution) + 1
-	}
-	h += paraHeight(inner, sizeTiny, Regular, src) + 1
-	h += tbCellH * float64(len(rows)+2) // header, readings, meter
-	extra := ""
-	if recorded {
-		extra = strings.TrimSpace(strings.Join([]string{rec.Text, takenText(rec)}, " · "))
-		extra = strings.Trim(extra, " ·")
-	}
-	for _, l := range append(append([]string{}, results...), extra) {
-		if l != "" {
-			h += paraHeight(inner, sizeBody, Regular, l)
+		if extra := strings.Trim(strings.Join([]string{rec.Text, takenText(rec)}, " · "), " ·"); extra != "" {
+			results = append(results, extra)
 		}
 	}
-	h += 9 // pass / fail line
-	f.need(h + 2)
+	// heights: the head (title to source), the rows, the foot (meter,
+	// results, pass / fail)
+	headH := tbPad + lineStep(sizeBody+1) + 1
+	headH += paraHeight(inner, sizeBody, Bold, accept)
+	if cond != "" {
+		headH += paraHeight(inner, sizeBody, Bold, "test: "+cond)
+	}
+	headH += paraHeight(inner, sizeSmall, Regular, what) + 0.5
+	if t.Caution != "" {
+		headH += paraHeight(inner-6, sizeSmall, Bold, t.Caution) + 1
+	}
+	headH += paraHeight(inner, sizeTiny, Regular, src) + 1
+	footH := tbCellH + 9
+	for _, l := range results {
+		footH += paraHeight(inner, sizeBody, Regular, l)
+	}
+	whole := headH + tbCellH*float64(len(rows)+1) + footH
+	// the whole block on one sheet where it fits on one; else at least the
+	// head and a few rows before the sheet ends
+	f.need(min(whole, headH+tbCellH*4) + 2)
 	c := f.c
-	y := f.y
-	c.box(x0, y, w, h, Pen{Width: 0.4, Colour: Ink}, nil)
+	y0 := f.y
 	tx := x0 + tbPad
-	ty := y + tbPad + 0.75*(sizeBody+1)*ptMM
-	c.text(tx, ty, sizeBody+1, Bold, Ink, left, fit(fmt.Sprintf("%d. %s", n, title), inner, sizeBody+1, Bold))
+	ty := y0 + tbPad + 0.75*(sizeBody+1)*ptMM
+	c.text(tx, ty, sizeBody+1, Bold, Ink, left, fit(head, inner, sizeBody+1, Bold))
 	ty += lineStep(sizeBody + 1)
 	ty = c.para(tx, ty+1, inner, sizeBody, Bold, Ink, accept)
 	if cond != "" {
@@ -370,19 +372,44 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 		c.warningSign(tx+2.5, ty-2.6, 4.6)
 		ty = c.para(tx+6, ty+0.6, inner-6, sizeSmall, Bold, Ink, t.Caution) + 0.4
 	}
-	ty = c.para(tx, ty, inner, sizeTiny, Regular, Colour{90, 90, 90}, src) + 0.2
-	// reading cells
-	cy := ty - 0.75*sizeTiny*ptMM + 0.6
+	c.para(tx, ty, inner, sizeTiny, Regular, Colour{90, 90, 90}, src)
+	cy := y0 + headH
 	xs := []float64{tx}
 	for _, col := range readingCols {
 		xs = append(xs, xs[len(xs)-1]+col.w*inner)
 	}
-	c.box(tx, cy, inner, tbCellH, Pen{}, &Fill{Colour{215, 215, 215}})
-	for i, col := range readingCols {
-		c.text(xs[i]+1.2, cy+tbCellH/2+1.1, sizeTiny, Bold, Ink, left, col.head)
+	top := cy // top of the cells on this sheet
+	// closeSheet rules the columns and boxes the part of the block on this
+	// sheet, down to y
+	closeSheet := func(y float64) {
+		for _, x := range xs[1:4] {
+			c.line(x, top, x, y, Pen{Width: 0.15, Colour: Faint})
+		}
+		c.box(x0, y0, w, y-y0+0.01, Pen{Width: 0.4, Colour: Ink}, nil)
 	}
-	cy += tbCellH
-	for _, r := range rows {
+	columnHead := func() {
+		c.box(tx, cy, inner, tbCellH, Pen{}, &Fill{Colour{215, 215, 215}})
+		for i, col := range readingCols {
+			c.text(xs[i]+1.2, cy+tbCellH/2+1.1, sizeTiny, Bold, Ink, left, col.head)
+		}
+		cy += tbCellH
+	}
+	columnHead()
+	for i, r := range rows {
+		room := f.b.bottom() - tbPad
+		if i == len(rows)-1 {
+			room -= footH // the last row stays with the foot
+		}
+		if cy+tbCellH > room && cy > top+tbCellH {
+			closeSheet(cy + tbPad)
+			f.newPage()
+			c = f.c
+			y0 = f.y
+			c.text(tx, y0+tbPad+0.75*sizeBody*ptMM, sizeBody, Bold, Ink, left, fit(head+" (continued)", inner, sizeBody, Bold))
+			cy = y0 + tbPad + lineStep(sizeBody) + 1
+			top = cy
+			columnHead()
+		}
 		base := cy + tbCellH/2 + 1.2
 		c.text(xs[0]+1.2, base, sizeBody, Bold, Ink, left, fit(r.Label, xs[1]-xs[0]-2.4, sizeBody, Bold))
 		c.text(xs[1]+1.2, base, sizeBody, Regular, Ink, left, fit(expectedText(t, r), xs[2]-xs[1]-2.4, sizeBody, Regular))
@@ -396,24 +423,28 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 		c.line(tx, cy+tbCellH, tx+inner, cy+tbCellH, Pen{Width: 0.15, Colour: Faint})
 		cy += tbCellH
 	}
+	if cy+footH > f.b.bottom() {
+		closeSheet(cy + tbPad)
+		f.newPage()
+		c = f.c
+		y0 = f.y
+		cy = y0 + tbPad
+		top = cy
+	}
 	// the meter used
 	base := cy + tbCellH/2 + 1.2
 	c.text(xs[0]+1.2, base, sizeSmall, Regular, Ink, left, "meter (make, model)")
 	c.line(xs[1]+1.2, cy+tbCellH-1.2, xs[3]-4, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
 	c.text(xs[3]+1.2, base, sizeSmall, Regular, Ink, left, "serial")
 	c.line(xs[3]+10, cy+tbCellH-1.2, xs[4]-1.2, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
-	for _, x := range xs[1:4] {
-		c.line(x, ty-0.75*sizeTiny*ptMM+0.6, x, cy, Pen{Width: 0.15, Colour: Faint})
-	}
+	cells := cy
 	cy += tbCellH
 	// results of a recorded reading
-	for _, l := range append(results, extra) {
-		if l != "" {
-			cy = c.para(tx, cy+0.75*sizeBody*ptMM, inner, sizeBody, Regular, Ink, l) - 0.75*sizeBody*ptMM
-		}
+	for _, l := range results {
+		cy = c.para(tx, cy+0.75*sizeBody*ptMM, inner, sizeBody, Regular, Ink, l) - 0.75*sizeBody*ptMM
 	}
 	// pass / fail
-	py := y + h - 6.8
+	py := cy + 1.6
 	pass, fail := false, false
 	if recorded {
 		pass, fail = rec.Verdict == "pass", rec.Verdict == "fail"
@@ -432,7 +463,12 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	c.line(tx+47, py+3.8, tx+90, py+3.8, Pen{Width: 0.2, Colour: Ink})
 	c.text(tx+95, py+3.3, sizeSmall, Regular, Ink, left, "date")
 	c.line(tx+102, py+3.8, tx+inner, py+3.8, Pen{Width: 0.2, Colour: Ink})
-	f.y += h + 2
+	end := py + ckBoxS + 2.8
+	for _, x := range xs[1:4] {
+		c.line(x, top, x, min(cells, end), Pen{Width: 0.15, Colour: Faint})
+	}
+	c.box(x0, y0, w, end-y0, Pen{Width: 0.4, Colour: Ink}, nil)
+	f.y = end + 2
 }
 
 // sentence starts s with a capital letter.

@@ -151,3 +151,53 @@ func TestFivePhasePackNeverSaysThree(t *testing.T) {
 		}
 	}
 }
+
+// A test with more readings than a sheet holds (the polarity of every tooth
+// of a large stator) flows on over sheets: every reading keeps its cell,
+// nothing leaves the body, no words overlap.
+func TestTestRecordLongTestFlows(t *testing.T) {
+	j := jobtest.DemoVariant(jobtest.Variant{Slots: 72, Poles: 66, Layers: 2, Paths: 1, Phases: 3, TurnsPerCoil: 6})
+	j.Stator.DiameterMM = 450 // room for 72 teeth of the demo's width
+	p, err := plan.Build(j)
+	if err != nil {
+		t.Fatal(err)
+	}
+	most := 0
+	for _, tt := range p.Tests {
+		most = max(most, len(tt.Readings))
+	}
+	if most < 60 {
+		t.Fatalf("72/66 plan: the longest test has %d readings; want one per tooth", most)
+	}
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	b := &builder{p: p, paper: A4}
+	var texts []string
+	for _, pg := range pagesOf(pk, TestRecordPage) {
+		texts = append(texts, pg.Texts()...)
+		if o := overlappingTexts(pg); len(o) > 0 {
+			t.Errorf("%q: %d words overlap, first %s", pg.Title, len(o), o[0])
+		}
+		for _, s := range pg.Shapes {
+			_, y0, _, y1 := s.bounds()
+			if tx, ok := s.(*Text); ok && (tx.Y < b.top() || y1 > pg.H-marginMM-footerH) {
+				continue // header and footer
+			}
+			if l, ok := s.(*Line); ok && l.From.Y == l.To.Y && (l.From.Y < b.top() || l.From.Y > b.bottom()) && l.To.X-l.From.X > pg.W-2*marginMM-1 {
+				continue // the rules of the header and footer
+			}
+			if y0 < b.top()-0.01 || y1 > b.bottom()+0.01 {
+				t.Errorf("%q: %T at y %.1f..%.1f leaves the body %.1f..%.1f", pg.Title, s, y0, y1, b.top(), b.bottom())
+			}
+		}
+	}
+	for _, tt := range p.Tests {
+		for _, r := range tt.Readings {
+			if !slices.Contains(texts, r.Label) {
+				t.Errorf("test %s lacks the cell %q", tt.Name, r.Label)
+			}
+		}
+	}
+}
