@@ -5,6 +5,7 @@ import (
 	"math"
 	"sort"
 
+	"coilwright/winding"
 	"coilwright/winding/job"
 )
 
@@ -353,9 +354,16 @@ func (b *builder) iron(mc *Machine) *Iron {
 
 // loadCurve runs the bridge from below the cut-in to 1.5 times the rated
 // speed: 16 speeds evenly spaced, with the cut-in and the rated speed among
-// them.
+// them. A delta winding feeds the bridge as its equivalent star: the line
+// EMF over √3, a third of the phase impedance (delta–star transformation of
+// a balanced source).
 func (b *builder) loadCurve(e *EMF, r, lH float64) []ChargePoint {
 	t := b.j.Turns
+	emfPerRPM := e.VoltsPerRPMPhase
+	if b.p.Connection == winding.Delta {
+		emfPerRPM /= math.Sqrt(3)
+		r, lH = r/3, lH/3
+	}
 	lo, hi := 0.8*e.CutInSpeedRPM, 1.5*e.RatedSpeedRPM
 	speeds := []float64{e.CutInSpeedRPM, e.RatedSpeedRPM}
 	for k := 0; k <= 13; k++ {
@@ -368,7 +376,7 @@ func (b *builder) loadCurve(e *EMF, r, lH float64) []ChargePoint {
 		if len(out) > 0 && n-out[len(out)-1].SpeedRPM < 1e-6*hi {
 			continue
 		}
-		br := Bridge{PhaseEMF: e.VoltsPerRPMPhase * n, Hz: ElectricalHz(b.j.Winding.Poles, n), R: r, L: lH, BusV: t.Volts, DiodesV: t.BridgeDropV}
+		br := Bridge{PhaseEMF: emfPerRPM * n, Hz: ElectricalHz(b.j.Winding.Poles, n), R: r, L: lH, BusV: t.Volts, DiodesV: t.BridgeDropV}
 		idc := br.run(&st)
 		out = append(out, ChargePoint{SpeedRPM: n, DCCurrentA: idc, PowerW: idc * t.Volts})
 	}

@@ -418,3 +418,21 @@ func TestVoltageCurve(t *testing.T) {
 		}
 	}
 }
+
+// TestChargingCurveDelta: a delta winding charges through the bridge as its
+// equivalent star, E_Y = E_Δ/√3 and R_Y, L_Y a third of the delta phase's.
+func TestChargingCurveDelta(t *testing.T) {
+	p := demoWith(t, `connection = "star"`, `connection = "delta"`)
+	mc := p.Machine
+	at := curveAt(mc.LoadCurve, 500)
+	br := Bridge{PhaseEMF: p.EMF.PhaseRMSAtRated / math.Sqrt(3), Hz: 14 * 500 / 60.0,
+		R: p.PhaseResistanceHot / 3, L: mc.PhaseInductanceMH / 1000 / 3, BusV: 26, DiodesV: 1.6}
+	if want := br.MeanDCCurrent(); at <= 0 || math.Abs(at-want) > 0.01*want {
+		t.Errorf("delta demo: LoadCurve at 500 rpm = %.3f A; the equivalent star gives %.3f A", at, want)
+	}
+	for _, pt := range mc.LoadCurve {
+		if pt.SpeedRPM <= p.EMF.CutInSpeedRPM && pt.DCCurrentA != 0 {
+			t.Errorf("delta demo: %.3f A at %.1f rpm, at or below the cut-in %.1f rpm", pt.DCCurrentA, pt.SpeedRPM, p.EMF.CutInSpeedRPM)
+		}
+	}
+}
