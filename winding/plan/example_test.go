@@ -2,6 +2,7 @@ package plan_test
 
 import (
 	"fmt"
+	"math"
 
 	"coilwright/winding/job"
 	"coilwright/winding/plan"
@@ -44,4 +45,32 @@ func ExampleFluxFromTestCoil() {
 	e := plan.PhaseEMF(plan.ElectricalHz(28, 500), 8*18, 0.9330127, phi)
 	fmt.Printf("Φ = %.4f mWb, E = %.2f V rms\n", phi*1000, e)
 	// Output: Φ = 0.2830 mWb, E = 19.70 V rms
+}
+
+func ExampleCutInLineRMS() {
+	// A 26 V battery charged through two silicon diodes dropping 1.6 V
+	// together: current flows once the line EMF's peak passes 27.6 V.
+	v := plan.CutInLineRMS(26, 1.6)
+	fmt.Printf("%.2f V rms line, %.2f V peak\n", v, v*math.Sqrt2)
+	// Output: 19.52 V rms line, 27.60 V peak
+}
+
+func ExampleBridge_MeanDCCurrent() {
+	// The demo machine at 500 rpm (116.7 Hz) into its 26 V battery.
+	br := plan.Bridge{PhaseEMF: 19.70, Hz: 116.67, R: 0.189, L: 1.094e-3, BusV: 26, DiodesV: 1.6}
+	fmt.Printf("%.0f A DC\n", br.MeanDCCurrent())
+	// Output: 19 A DC
+}
+
+func ExampleCarterFactor() {
+	// 19.63 mm slot pitch, 3 mm openings, 4.81 mm magnetic gap (1 mm of
+	// air and 4 mm of magnet at μ_rec 1.05).
+	fmt.Printf("%.4f\n", plan.CarterFactor(19.635, 3, 4.8095))
+	// Output: 1.0172
+}
+
+func ExampleSpecificIronLoss() {
+	// M400-50A (4.00 W/kg at 1.5 T, 50 Hz) at 1.2 T and 116.7 Hz.
+	fmt.Printf("%.2f W/kg\n", plan.SpecificIronLoss(4.00, plan.HysteresisShare, 1.2, 116.67))
+	// Output: 8.36 W/kg
 }
