@@ -9,9 +9,9 @@ import (
 
 // Connection sheet geometry, mm.
 const (
-	conBoxW = 12
+	conBoxW = 11
 	conBoxH = 12
-	conGap  = 10 // holds "reverse" in bold at the smallest size
+	conGap  = 9.4 // holds "reverse" in bold at the smallest size (8.8 mm)
 	conTagW = 13
 	conLine = 19 // height of one line of coils
 )
@@ -55,7 +55,9 @@ func (b *builder) connectionSheets(jointsFirst bool) bool {
 			c = b.newPage(ConnectionPage, title+" (continued)")
 			y = b.top() + 3
 		}
-		y = b.chainRows(c, y, ch, perLine, title)
+		// a chain that wraps shares its coils evenly between its lines
+		per := (len(ch.Teeth) + lines - 1) / max(1, lines)
+		y = b.chainRows(c, y, ch, max(1, per), title)
 		if c != nil && len(b.pages) > 0 {
 			c = &canvas{page: b.pages[len(b.pages)-1]}
 		}
