@@ -49,10 +49,11 @@ func TestGoldenScreens(t *testing.T) {
 		keys    []string
 	}{
 		{name: "start_80x24", p: small, w: 80, h: 24},
-		{name: "coil_80x24", p: small, w: 80, h: 24, history: firstCoil(small), keys: []string{"1", "7"}},
+		{name: "coil_80x24", p: small, w: 80, h: 24, history: firstCoil(small), keys: []string{"1", "7", "enter"}},
+		{name: "typing_count_80x24", p: small, w: 80, h: 24, history: firstCoil(small), keys: []string{" ", "1", "7"}},
 		{name: "coil_100x30", p: small, w: 100, h: 30, history: firstCoil(small), keys: []string{" ", " ", " ", " ", " "}},
 		{name: "coil_60x18", p: small, w: 60, h: 18, history: firstCoil(small), keys: []string{" "}},
-		{name: "confirm_turns_80x24", p: small, w: 80, h: 24, history: firstCoil(small), keys: []string{"1", "6", "enter"}},
+		{name: "confirm_turns_80x24", p: small, w: 80, h: 24, history: firstCoil(small), keys: []string{"1", "6", "enter", "enter"}},
 		{name: "third_coil_120x40", p: small, w: 120, h: 40, history: doneUpTo(small, func(s plan.Step) bool { return s.Coil != nil && s.Coil.Order == 3 })},
 		{name: "jumper_80x24", p: small, w: 80, h: 24, history: doneUpTo(small, func(s plan.Step) bool { return s.Kind == plan.StepJumper })},
 		{name: "separator_80x24", p: small, w: 80, h: 24, history: doneUpTo(small, func(s plan.Step) bool { return s.Kind == plan.StepSeparator })},

@@ -50,8 +50,10 @@ const maxTurns = 99999
 type guideModel struct {
 	c *shared
 
-	mode    guideMode
-	typed   bool // digits are being typed into the count
+	mode guideMode
+	// entry holds the digits of a count being typed: nothing changes until
+	// enter applies it; esc drops it and the count stands.
+	entry   string
 	flash   string
 	note    textinput.Model
 	fields  []textinput.Model
@@ -93,7 +95,7 @@ func (g guideModel) shown() int {
 func (g guideModel) lookAt(i int) guideModel {
 	cur := g.c.prog.Current()
 	i = min(max(0, i), max(len(g.c.steps())-1, cur))
-	g.looking, g.at, g.atRev, g.typed, g.flash = i != cur, i, g.c.prog.Rev, false, ""
+	g.looking, g.at, g.atRev, g.flash = i != cur, i, g.c.prog.Rev, ""
 	return g
 }
 
@@ -122,7 +124,17 @@ func (g guideModel) lookKey(msg tea.KeyMsg, at int) (guideModel, tea.Cmd, bool) 
 	case key.Matches(msg, k.Undo):
 		g.looking = false
 		return g, nil, false
-	case key.Matches(msg, k.Count), key.Matches(msg, k.Uncount), key.Matches(msg, k.Digits), key.Matches(msg, k.Note):
+	case key.Matches(msg, k.Count):
+		// A turn wound while looking is a turn of the coil in hand.
+		g.looking = false
+		if s, ok := g.c.step(g.c.prog.Current()); ok && s.Coil != nil && g.entry == "" {
+			n := g.c.prog.Steps[s.Index-1].Turns + 1
+			g.setTurns(s, n)
+			g.flash = fmt.Sprintf("back to %s: turn counted, %d", g.backTo(), n)
+			return g, nil, true
+		}
+		g.flash = fmt.Sprintf("only looking at step %d, nothing recorded: esc or home goes back to %s", at+1, g.backTo())
+	case key.Matches(msg, k.Uncount), key.Matches(msg, k.Digits), key.Matches(msg, k.Note):
 		g.flash = fmt.Sprintf("only looking at step %d, nothing recorded: esc or home goes back to %s", at+1, g.backTo())
 	}
 	return g, nil, true
@@ -142,7 +154,9 @@ func newGuide(c *shared) guideModel {
 
 // typing reports whether keys go to a text field, so global keys must not
 // take them.
-func (g guideModel) typing() bool { return g.mode == modeNote || g.mode == modeReadings }
+func (g guideModel) typing() bool {
+	return g.mode == modeNote || g.mode == modeReadings || g.entry != ""
+}
 
 // resize sets the widths of the text fields.
 func (g guideModel) resize() guideModel {
@@ -208,13 +222,15 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 		return g, nil
 	case modeConfirmTurns:
 		switch {
-		case key.Matches(msg, k.confirm.Yes):
+		case key.Matches(msg, k.confirm.Accept):
 			if ok && s.Coil != nil {
 				g.complete(s)
 			}
 			g.mode = modeWork
 		case key.Matches(msg, k.confirm.No):
 			g.mode = modeWork
+		default:
+			g.flash = "the count differs from the plan: y records it, esc goes back to counting"
 		}
 		return g, nil
 	case modeConfirmUndo:
@@ -241,8 +257,9 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 		}
 	}
 	g.looking = false
-	wasTyping := g.typed
-	g.typed = false
+	if g.entry != "" {
+		return g.typedCount(msg, s, ok)
+	}
 	if ok && isPolarity(s) {
 		if pg, cmd, handled := g.polarityKey(msg, s); handled {
 			return pg, cmd
@@ -276,12 +293,7 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 		case key.Matches(msg, k.guide.Uncount):
 			g.setTurns(s, n-1)
 		case key.Matches(msg, k.guide.Digits):
-			d := int(msg.String()[0] - '0')
-			if wasTyping {
-				d = min(maxTurns, n*10+d)
-			}
-			g.setTurns(s, d)
-			g.typed = true
+			g.entry, g.flash = msg.String(), ""
 		case key.Matches(msg, k.guide.Done):
 			if n == s.Coil.Turns {
 				g.complete(s)
@@ -303,14 +315,60 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 	return g, nil
 }
 
+// typedCount handles a key while a count is typed: digits add to it,
+// backspace takes one off, enter applies it, esc drops it (the count
+// stands), space still counts a wound turn; anything else waits.
+func (g guideModel) typedCount(msg tea.KeyMsg, s plan.Step, ok bool) (guideModel, tea.Cmd) {
+	k := g.c.keys
+	if !ok || s.Coil == nil {
+		g.entry = ""
+		return g, nil
+	}
+	n := g.c.prog.Steps[s.Index-1].Turns
+	switch {
+	case key.Matches(msg, k.guide.Digits):
+		if len(g.entry) < len(strconv.Itoa(maxTurns)) {
+			g.entry += msg.String()
+		}
+	case msg.Type == tea.KeyBackspace:
+		g.entry = g.entry[:len(g.entry)-1]
+		if g.entry == "" {
+			g.flash = fmt.Sprintf("typed count dropped; the count stands at %d", n)
+		}
+	case key.Matches(msg, k.typing.Accept):
+		v, _ := strconv.Atoi(g.entry)
+		g.entry = ""
+		if most := g.c.prog.MaxTurns(s.Index - 1); v > most {
+			g.flash = fmt.Sprintf("%d turns cannot fit: the slot holds at most %d of this wire; the count stands at %d", v, most, n)
+			return g, nil
+		}
+		g.setTurns(s, v)
+		g.flash = fmt.Sprintf("count set to %d", v)
+	case key.Matches(msg, k.typing.Cancel):
+		g.entry = ""
+		g.flash = fmt.Sprintf("typed count dropped; the count stands at %d", n)
+	case key.Matches(msg, k.guide.Count):
+		g.setTurns(s, n+1)
+		g.flash = fmt.Sprintf("turn counted: %d; the typed count still waits for enter or esc", n+1)
+	default:
+		g.flash = "a count is being typed: enter sets it, esc keeps " + strconv.Itoa(n)
+	}
+	return g, nil
+}
+
 // setTurns changes the count of the coil in progress and records it.
 func (g *guideModel) setTurns(s plan.Step, n int) {
-	n = min(max(0, n), maxTurns)
+	flash := ""
+	if most := g.c.prog.MaxTurns(s.Index - 1); n > most {
+		flash = fmt.Sprintf("%d turns cannot fit: the slot holds at most %d of this wire; the count stays at %d", n, most, most)
+		n = most
+	}
+	g.flash = flash
+	n = max(0, n)
 	if n == g.c.prog.Steps[s.Index-1].Turns {
 		return
 	}
 	g.c.record(Entry{Kind: EntryTurns, Step: s.Index, Turns: n})
-	g.flash = ""
 }
 
 // complete records the current step as done.
@@ -441,9 +499,13 @@ func (g guideModel) shortHelp() []key.Binding {
 	case modeVerdict:
 		return []key.Binding{withHelp(k.confirm.Yes, "record and go on"), withHelp(k.confirm.No, "type again")}
 	case modeConfirmTurns:
-		return []key.Binding{withHelp(k.confirm.Yes, "record this count"), withHelp(k.confirm.No, "back to counting")}
+		return []key.Binding{withHelp(k.confirm.Accept, "record this count"), withHelp(k.confirm.No, "back to counting")}
 	case modeConfirmUndo:
 		return []key.Binding{withHelp(k.confirm.Yes, "undo it"), withHelp(k.confirm.No, "keep it")}
+	}
+	if g.entry != "" {
+		return []key.Binding{withHelp(k.typing.Accept, "set the count"), withHelp(k.typing.Cancel, "keep "+strconv.Itoa(g.c.prog.Steps[g.c.prog.Current()].Turns)),
+			withHelp(k.guide.Uncount, "delete a digit"), k.guide.Count}
 	}
 	if _, looking := g.lookedAt(); looking {
 		back := k.guide.Back

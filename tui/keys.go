@@ -23,6 +23,9 @@ type typingKeys struct {
 // confirmKeys answer a question (turns differ from the plan, undo).
 type confirmKeys struct {
 	Yes, No key.Binding
+	// Accept is yes by y alone: a count off the plan is never recorded by
+	// enter, so a double tap cannot accept it.
+	Accept key.Binding
 }
 
 // scrollKeys move through the overview and help screens; Pick opens the
@@ -70,8 +73,9 @@ func newKeyMaps() *keyMaps {
 			Cancel: key.NewBinding(key.WithKeys("esc"), key.WithHelp("esc", "cancel")),
 		},
 		confirm: confirmKeys{
-			Yes: key.NewBinding(key.WithKeys("enter", "y"), key.WithHelp("enter/y", "yes")),
-			No:  key.NewBinding(key.WithKeys("esc", "n"), key.WithHelp("esc/n", "no, go back")),
+			Yes:    key.NewBinding(key.WithKeys("enter", "y"), key.WithHelp("enter/y", "yes")),
+			No:     key.NewBinding(key.WithKeys("esc", "n"), key.WithHelp("esc/n", "no, go back")),
+			Accept: key.NewBinding(key.WithKeys("y"), key.WithHelp("y", "yes")),
 		},
 		polarity: newPolarityKeys(),
 		scroll: scrollKeys{

@@ -18,7 +18,7 @@ func woundTwo(t *testing.T, w, h int) (*Model, *memRecorder) {
 	for _, r := range "last turn loose, pressed down" {
 		keys(t, m, string(r))
 	}
-	keys(t, m, "enter", "1", "1", "enter", "y")
+	keys(t, m, "enter", "1", "1", "enter", "enter", "y")
 	windCoil(t, m)
 	toNextCoil(t, m)
 	if s := curStep(m); s.Coil == nil || s.Coil.Order != 3 {
@@ -57,8 +57,9 @@ func TestLookBackChangesNothing(t *testing.T) {
 	if !ok || at != cur-2 {
 		t.Fatalf("lookedAt() = %d, %v after two steps back from %d; want %d, true", at, ok, cur, cur-2)
 	}
-	// Every key that would change progress does nothing while looking.
-	keys(t, m, " ", " ", "5", "backspace", "-", "n", "x", "18")
+	// Every key that would change progress does nothing while looking
+	// (but space: see TestSpaceWhileLookingCountsTheTurn).
+	keys(t, m, "5", "backspace", "-", "n", "x", "18")
 	if got := snap(m); !got.equal(before) {
 		t.Errorf("progress changed while looking:\n got  %+v\n want %+v", got, before)
 	}
@@ -273,5 +274,28 @@ func TestLookKeysGoIntoTypedFields(t *testing.T) {
 	}
 	if len(rec.all()) != n {
 		t.Errorf("typing in a reading field recorded entries")
+	}
+}
+
+// A turn wound while looking at another step is a turn of the coil in hand:
+// space ends the look and counts it.
+func TestSpaceWhileLookingCountsTheTurn(t *testing.T) {
+	m, rec := woundTwo(t, 80, 24)
+	cur := m.c.prog.Current()
+	n := m.c.prog.Steps[cur].Turns
+	keys(t, m, "left", "left")
+	if _, ok := m.guide.lookedAt(); !ok {
+		t.Fatal("not looking after left, left")
+	}
+	entries := len(rec.all())
+	keys(t, m, " ")
+	if _, ok := m.guide.lookedAt(); ok || m.guide.shown() != cur {
+		t.Errorf("space while looking: still looking (shown %d); want back at step %d", m.guide.shown()+1, cur+1)
+	}
+	if got := m.c.prog.Steps[cur].Turns; got != n+1 || len(rec.all()) != entries+1 {
+		t.Errorf("space while looking: turns %d, %d entries; want %d and one turns entry", got, len(rec.all())-entries, n+1)
+	}
+	if v := plain(m); !strings.Contains(v, "turn counted") {
+		t.Errorf("space while looking does not say it counted:\n%s", v)
 	}
 }

@@ -150,6 +150,13 @@ func (m *Model) key(msg tea.KeyMsg) tea.Cmd {
 		m.quitting = true
 		return tea.Quit
 	}
+	if m.c.tooSmall() {
+		// Nothing on screen says what a key would do: only quitting works.
+		if key.Matches(msg, k.Quit) && !m.guide.typing() {
+			m.quitting = true
+		}
+		return nil
+	}
 	m.notice, m.banner = "", nil
 	if m.screen == screenGuide && m.guide.typing() {
 		var cmd tea.Cmd
@@ -310,7 +317,7 @@ func (m *Model) smallView() string {
 	if !c.sized {
 		return fmt.Sprintf("coilwright bench: waiting for the terminal size...\nIt needs at least %dx%d; enlarge the terminal if this stays.", minWidth, minHeight)
 	}
-	msg := fmt.Sprintf("Terminal too small: %dx%d.\nEnlarge it to at least %dx%d.\nYour progress is safe.", c.width, c.height, minWidth, minHeight)
+	msg := fmt.Sprintf("Terminal too small: %dx%d.\nEnlarge it to at least %dx%d.\nYour progress is safe; keys do nothing here (q quits).", c.width, c.height, minWidth, minHeight)
 	if c.out.err != nil {
 		msg += "\nNOT SAVED: retrying."
 	}

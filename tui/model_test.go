@@ -126,12 +126,17 @@ func TestTurnCounter(t *testing.T) {
 	}{
 		{"space adds one", []string{" ", " ", " "}, 3},
 		{"backspace takes one off", []string{"backspace"}, 2},
-		{"digits set the count", []string{"1", "5"}, 15},
-		{"space after digits adds one", []string{" "}, 16},
-		{"a digit after another key starts a new count", []string{"7"}, 7},
-		{"never below zero", append(repeat("backspace", 9), "-"), 0},
-		{"typed count", []string{"4", "2", "0"}, 420},
-		{"digits arriving in one message", []string{" ", "18"}, 18},
+		{"digits change nothing until enter", []string{"1", "5"}, 2},
+		{"enter sets the typed count", []string{"enter"}, 15},
+		{"space after the typed count adds one", []string{" "}, 16},
+		{"a digit after counting starts a typed count, the count stands", []string{"7"}, 16},
+		{"esc drops it", []string{"esc"}, 16},
+		{"q, n, u and o wait while a count is typed", []string{"3", "q", "n", "u", "o", "esc"}, 16},
+		{"space while typing counts the wound turn", []string{"5", " "}, 17},
+		{"backspace edits the typed count", []string{"backspace", "9", "enter"}, 9},
+		{"never below zero", append(repeat("backspace", 12), "-"), 0},
+		{"a sixth digit is not taken", []string{"1", "2", "3", "4", "5", "6", "enter"}, 12345},
+		{"digits arriving in one message", []string{" ", "18", "enter"}, 18},
 	}
 	for _, tc := range tests {
 		keys(t, m, tc.keys...)

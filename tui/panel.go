@@ -181,8 +181,11 @@ func (g guideModel) coilView(b *lines, s plan.Step, compact bool) {
 		b.raw("")
 	}
 	g.counter(b, n, cs.Turns, compact, s.Index-1)
+	if g.entry != "" {
+		b.raw(c.st.errorBar.Render(fmt.Sprintf(" NEW COUNT %s_ ", g.entry)) + " enter sets, esc keeps " + strconv.Itoa(n))
+	}
 	if g.mode == modeConfirmTurns {
-		b.text(fmt.Sprintf("%d turns counted, the plan says %d. enter/y records %d; esc goes back to counting.", n, cs.Turns, n), c.st.warn.Render)
+		b.text(fmt.Sprintf("%d turns counted, the plan says %d. y records %d; esc goes back to counting.", n, cs.Turns, n), c.st.warn.Render)
 	}
 	b.kv("wire", c.wireText(cs))
 	b.kv("from", cs.From)
