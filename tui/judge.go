@@ -115,8 +115,26 @@ func valuesOf(fs []field, r map[string]float64) (vals []float64, ok []bool) {
 	return vals, ok
 }
 
-// readingText is a recorded reading in a line: "U-V 0.412, V-W 0.41 ...".
+// allKnown reports whether every recorded key is one of the schema's.
+func allKnown(rs []plan.Reading, v map[string]float64) bool {
+	for k := range v {
+		known := false
+		for _, r := range rs {
+			known = known || r.Key == k
+		}
+		if !known {
+			return false
+		}
+	}
+	return true
+}
+
+// readingText is a recorded reading in a line: "U–V 412 mΩ, V–W 410 mΩ ...".
 func (c *shared) readingText(s plan.Step, r *progress.Reading) string {
+	if t := c.tests[s.Test]; len(t.Readings) > 0 && len(r.Values) > 0 && allKnown(t.Readings, r.Values) {
+		// By the plan's reading schema, each value with its unit.
+		return plan.FormatReadings(t.Readings, r.Values)
+	}
 	fs := fieldsFor(c.plan, c.tests[s.Test])
 	vals, ok := valuesOf(fs, r.Values)
 	var parts []string

@@ -58,6 +58,9 @@
 //	back_emf               the line voltages (uv, vw, wu) and the speed (rpm)
 //
 // FormatReadings writes recorded values by that schema ("U–V 285.8 mΩ, …").
+// Resolutions states the smallest turn error each test can see on the job
+// (Test.Resolution): one turn lengthens a path by a mean turn, and each
+// test's limit sets how many turns must be off before it shows.
 //
 // Conventions follow package winding: teeth 1..Q counter-clockwise from the
 // lead end, slot k after tooth k, directions seen from the air gap. Lengths of

@@ -21,8 +21,20 @@
 // Sources. Copper temperature correction: IEC 60028 (α20 = 0.00393/K,
 // R_T = R_20·(234.5 + T)/254.5). The band about the plan's value: the IEC 60317
 // diameter tolerance (R ∝ 1/d²) and a stated length-estimate uncertainty.
-// Balance: EASA AR100 (2 % of the mean). Insulation: IEEE 43-2013 (minimum IR
-// after 1 min at 40 °C, polarization index). Withstand voltage: IEC 60034-1.
+// Balance: EASA AR100, the largest deviation of a phase from the mean of the
+// phases within 2 % of the mean (plan.ImbalancePercent, the same rule for the
+// back-EMF lines). Insulation: IEEE 43-2013 (minimum IR after 1 min at 40 °C;
+// the polarization index judged for machines in its scope, a warning below
+// it, where the index may not apply). Withstand: against the plan's test
+// voltage (IEC 60034-1 clause 9.2, plan.HVTestVolts), not the EMF; below the
+// 80 % of a repeat test it does not pass.
+//
+// Test names in findings are the plan's (plan.TestResistance ...); the
+// readings of a test map to and from its reading schema by ValuesOf and
+// ReadingsOf. The report states what each judged test can see on the job
+// (plan.Plan.Resolutions). When the resistance readings have proven the
+// connection, a back-EMF √3 off the prediction points at the flux estimate,
+// not at star and delta confused.
 //
 // The package is pure: no files, no screens. It does not decide what the
 // person does next; the bench guide and the check command show the findings.
