@@ -1,6 +1,7 @@
 package tui
 
 import (
+	"io"
 	"time"
 
 	"coilwright/winding/plan"
@@ -35,6 +36,9 @@ type shared struct {
 	now   func() time.Time
 
 	rings map[ringKey]*ringGeometry // nil entry: no ring fits that box
+
+	bell    io.Writer // where the bell is rung; nil for none
+	bellOff bool      // turned off with the bell key
 }
 
 // record applies a change in memory at once and queues it for the record.
@@ -106,6 +110,34 @@ func (c *shared) toothOf(i int) int {
 		return s.Slot
 	case isPolarity(s):
 		return c.polarityTooth(i)
+	case s.Kind == plan.StepSetup:
+		return 1
 	}
 	return 0
+}
+
+// fromNext are the teeth the wire of step i (0-based) comes from and goes to
+// next, 0 for a lead or none: for a coil its neighbours on its path, for a
+// jumper the coil it leaves.
+func (c *shared) fromNext(i int) (from, next int) {
+	s, ok := c.step(i)
+	if !ok || c.plan == nil || c.plan.Layout == nil {
+		return 0, 0
+	}
+	switch {
+	case s.Coil != nil:
+		ch, ok := c.plan.Layout.ChainOf(c.phaseIndex(s.Coil.Phase), s.Coil.Path)
+		if !ok {
+			return 0, 0
+		}
+		if p := s.Coil.Position; p >= 2 && p-2 < len(ch.Teeth) {
+			from = ch.Teeth[p-2]
+		}
+		if p := s.Coil.Position; p >= 1 && p < len(ch.Teeth) {
+			next = ch.Teeth[p]
+		}
+	case s.Jumper != nil:
+		from = s.Jumper.FromTooth
+	}
+	return from, next
 }

@@ -35,3 +35,51 @@ func bigNumber(n int) [3]string {
 	}
 	return out
 }
+
+// segments says which of the seven segments each figure lights: top, upper
+// left, upper right, middle, lower left, lower right, bottom.
+var segments = [10][7]bool{
+	{true, true, true, false, true, true, true},
+	{false, false, true, false, false, true, false},
+	{true, false, true, true, true, false, true},
+	{true, false, true, true, false, true, true},
+	{false, true, true, true, false, true, false},
+	{true, true, false, true, false, true, true},
+	{true, true, false, true, true, true, true},
+	{true, false, true, false, false, true, false},
+	{true, true, true, true, true, true, true},
+	{true, true, true, true, false, true, true},
+}
+
+// scaledNumber renders n (n >= 0) as seven-segment figures of '#' blocks,
+// 2k+3 rows tall and 2k+2 columns wide per figure (k >= 1; a terminal cell is
+// about twice as tall as it is wide), one column apart: the count grows with
+// the terminal so it can be read at arm's length.
+func scaledNumber(n, k int) []string {
+	k = max(1, k)
+	h, w := 2*k+3, 2*k+2
+	mid := k + 1
+	rows := make([][]string, h)
+	for _, r := range strconv.Itoa(max(0, n)) {
+		sg := segments[r-'0']
+		for y := 0; y < h; y++ {
+			line := []byte(strings.Repeat(" ", w))
+			if (y == 0 && sg[0]) || (y == mid && sg[3]) || (y == h-1 && sg[6]) {
+				copy(line, strings.Repeat("#", w))
+			}
+			upper, lower := y <= mid, y >= mid
+			if (upper && sg[1]) || (lower && sg[4]) {
+				line[0] = '#'
+			}
+			if (upper && sg[2]) || (lower && sg[5]) {
+				line[w-1] = '#'
+			}
+			rows[y] = append(rows[y], string(line))
+		}
+	}
+	out := make([]string, h)
+	for y := range rows {
+		out[y] = strings.Join(rows[y], " ")
+	}
+	return out
+}

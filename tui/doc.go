@@ -23,7 +23,22 @@
 // '+' when the coil is wound clockwise and '-' when counter-clockwise (seen
 // from the air gap), '·' for a tooth without a coil; letter case never carries
 // meaning. A wound coil carries '#', the tooth of the current step '@', the
-// tooth of a step looked at '*'; colour only repeats what the text says.
+// tooth of a step looked at '*', the coils the wire comes from and goes to
+// next 'f' and 'n'; colour only repeats what the text says. The ring shows
+// no arrows: the only arrows are in the picture of the coil in hand, drawn
+// as the winder sees it (facing the tooth from the air gap, lead end up, the
+// down and up slots labelled), under the words that name that view.
+//
+// Layout. A step panel is built of parts with priorities (fitpanel.go): the
+// live parts (the tooth, its sense in words, its down and up slots and the
+// count; a test's fields, errors and verdict; the note being typed) are
+// always shown; the useful ones while they fit; cautions, sources and
+// reminders are cut first behind a "more" line that the m key pages through.
+// The panel takes the roomiest of a few levels that fits (the count in '#'
+// figures that grow with the terminal, down to one line), and the stator
+// drawing is dropped before a live part would be. The key line always ends
+// with ? and q. The guide works from 60x18 up. The terminal bell rings when
+// the count in hand reaches the plan (Options.Bell; the b key turns it off).
 //
 // Looking. Left/right (or [ and ]) move a look to another step, and enter on
 // a line of the overview opens that step: the panel shows it read-only as it

@@ -22,16 +22,19 @@ func ExampleNew() {
 	}
 	var m tea.Model = tui.New(tui.Options{Plan: p})
 	m, _ = m.Update(tea.WindowSizeMsg{Width: 100, Height: 30})
-	for i := 0; i < 3; i++ { // confirm the three preparation steps
+	for i := 0; i < 4; i++ { // confirm the set-up and the three preparation steps
 		m, _ = m.Update(tea.KeyMsg{Type: tea.KeyEnter})
 	}
 	for _, line := range strings.Split(ansi.Strip(m.View()), "\n") {
 		line = strings.Trim(line, "| ")
-		if strings.HasPrefix(line, "coil 1 of 24") || strings.HasPrefix(line, "from ") {
+		if strings.HasPrefix(line, "coil 1 of 24") {
 			fmt.Println(line)
+		}
+		if i := strings.Index(line, "down slot"); i >= 0 {
+			fmt.Println(line[i:])
 		}
 	}
 	// Output:
-	// coil 1 of 24                                                                        step 4 of 78
-	// from   start lead U1 (300 mm)
+	// coil 1 of 24                                                                        step 5 of 79
+	// down slot 1, up slot 24
 }

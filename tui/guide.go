@@ -68,6 +68,9 @@ type guideModel struct {
 	looking bool
 	at      int
 	atRev   int
+
+	// The page of cut lines shown (the more key), on step moreStep.
+	moreStep, morePages int
 }
 
 // lookedAt is the step looked at, when it is not the current one and
@@ -250,6 +253,13 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 
 	// modeWork.
 	if at, looking := g.lookedAt(); looking {
+		if key.Matches(msg, k.guide.More) {
+			if g.moreStep != at {
+				g.moreStep, g.morePages = at, 0
+			}
+			g.morePages++
+			return g, nil
+		}
 		var cmd tea.Cmd
 		var handled bool
 		if g, cmd, handled = g.lookKey(msg, at); handled {
@@ -259,6 +269,22 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 	g.looking = false
 	if g.entry != "" {
 		return g.typedCount(msg, s, ok)
+	}
+	if key.Matches(msg, k.guide.More) {
+		if g.moreStep != cur {
+			g.moreStep, g.morePages = cur, 0
+		}
+		g.morePages++
+		return g, nil
+	}
+	g.flash = "" // a status line says what the last key did, never an older one
+	if key.Matches(msg, k.guide.Bell) {
+		g.c.bellOff = !g.c.bellOff
+		g.flash = "bell at the planned count: on"
+		if g.c.bellOff {
+			g.flash = "bell at the planned count: off"
+		}
+		return g, nil
 	}
 	if ok && isPolarity(s) {
 		if pg, cmd, handled := g.polarityKey(msg, s); handled {
@@ -517,7 +543,7 @@ func (g guideModel) shortHelp() []key.Binding {
 	switch {
 	case !ok:
 	case s.Kind == plan.StepCoil:
-		out = append(out, k.guide.Count, k.guide.Uncount, k.guide.Digits, withHelp(k.guide.Done, "coil done"))
+		out = append(out, k.guide.Count, withHelp(k.guide.Done, "coil done"), k.guide.Uncount, k.guide.Digits)
 	case isPolarity(s):
 		out = append(out, g.polarityShortHelp()...)
 	case s.Kind == plan.StepTest:
@@ -539,40 +565,45 @@ func withHelp(b key.Binding, desc string) key.Binding {
 	return b
 }
 
-// view renders the guide body in w x h cells.
+// view renders the guide body in w x h cells: the ring beside the step
+// panel when both fit with the panel wide enough for the coil picture, else
+// the developed strip above it while the panel still keeps its live parts,
+// else the panel alone.
 func (g guideModel) view(w, h int) string {
 	c := g.c
 	teeth := c.teeth
-	wound := c.prog.ToothWound(len(teeth))
-	cur := c.currentTooth()
-	viewed := 0
+	shown := g.shown()
+	mk := marks{wound: c.prog.ToothWound(len(teeth)), current: c.currentTooth()}
 	at, looking := g.lookedAt()
 	if looking {
-		viewed = c.toothOf(at)
+		mk.viewed = c.toothOf(at)
 	}
-
-	// The ring beside the step panel when both fit; else the strip above it.
-	const panelMin = 46
-	if rg := c.ring(max(0, w-panelMin-3), max(0, h-3)); rg != nil && len(teeth) > 0 {
-		d := renderRing(c.st, *rg, teeth, wound, cur, viewed, c.ringCaption())
+	mk.from, mk.next = c.fromNext(shown)
+	if len(teeth) == 0 {
+		pl, _ := g.panel(w, h)
+		return joinLines(pl)
+	}
+	if rg := c.ring(max(0, w-panelWide-3), max(0, h-3)); rg != nil {
+		d := renderRing(c.st, *rg, teeth, mk, c.ringCaption(shown))
 		left := c.st.drawing.Render(strings.Join(d.lines, "\n"))
 		lw := d.width + 2
 		for _, leg := range legend(lw, looking) {
 			left += "\n" + c.st.dim.Render(leg)
 		}
-		pw := max(0, w-lw-1)
-		return joinColumns(left, strings.Join(g.panel(pw, h), "\n"), 1)
+		pl, _ := g.panel(max(0, w-lw-1), h)
+		return joinColumns(left, joinLines(pl), 1)
 	}
-	var top []string
-	if len(teeth) > 0 {
-		d := renderStrip(c.st, teeth, wound, cur, viewed, w)
-		top = append(top, d.lines...)
-		for _, leg := range legend(w, looking) {
-			top = append(top, c.st.dim.Render(leg))
-		}
+	d := renderStrip(c.st, teeth, mk, w)
+	top := d.lines
+	for _, leg := range legend(w, looking) {
+		top = append(top, c.st.dim.Render(leg))
 	}
-	if len(top) > h/2 {
-		top = nil // the step matters more than the drawing
+	if pl, ok := g.panel(w, max(0, h-len(top))); ok && len(top) < h {
+		return joinLines(append(top, pl...))
 	}
-	return strings.Join(append(top, g.panel(w, max(0, h-len(top)))...), "\n")
+	pl, _ := g.panel(w, h) // the step matters more than the drawing
+	return joinLines(pl)
 }
+
+// panelWide is the panel width that keeps the coil picture beside its words.
+const panelWide = 62

@@ -12,7 +12,7 @@ type globalKeys struct {
 // the help line; Back ends the look.
 type guideKeys struct {
 	Count, Uncount, Digits, Done, Note, Undo, Readings key.Binding
-	Prev, Next, Look, Back                             key.Binding
+	Prev, Next, Look, Back, More, Bell                 key.Binding
 }
 
 // typingKeys work while a note or a reading is being typed.
@@ -66,6 +66,8 @@ func newKeyMaps() *keyMaps {
 			Next:     key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("right/]", "look at the step after")),
 			Look:     key.NewBinding(key.WithKeys("left", "right", "[", "]"), key.WithHelp("[/]", "look back/ahead")),
 			Back:     key.NewBinding(key.WithKeys("esc", "home", "enter"), key.WithHelp("esc/home", "back to the step in hand")),
+			More:     key.NewBinding(key.WithKeys("m"), key.WithHelp("m", "more of the panel")),
+			Bell:     key.NewBinding(key.WithKeys("b"), key.WithHelp("b", "bell on/off")),
 		},
 		typing: typingKeys{
 			Accept: key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "accept")),
@@ -95,9 +97,9 @@ func (k *keyMaps) fullHelp() [][]key.Binding {
 	return [][]key.Binding{
 		{k.guide.Count, k.guide.Uncount, k.guide.Digits, k.guide.Done},
 		{k.guide.Note, k.guide.Undo, k.global.Overview, k.global.Help},
-		{k.guide.Prev, k.guide.Next, k.guide.Back, withHelp(k.scroll.Pick, "on all steps: look at it")},
+		{k.guide.Prev, k.guide.Next, k.guide.Back, withHelp(k.scroll.Pick, "on all steps: look at it"), k.guide.More},
 		{k.typing.Accept, k.typing.Next, k.typing.Cancel},
 		{withHelp(k.polarity.North, "polarity: north"), withHelp(k.polarity.South, "polarity: south"), k.polarity.Unsure, k.polarity.Reread},
-		{k.global.Quit, k.global.ForceQuit, k.scroll.Up, k.scroll.Down},
+		{k.global.Quit, k.global.ForceQuit, k.scroll.Up, k.scroll.Down, k.guide.Bell},
 	}
 }

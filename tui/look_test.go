@@ -163,7 +163,7 @@ func TestLookAheadShowsTheStep(t *testing.T) {
 	}
 	keys(t, m, "]")
 	v = plain(m)
-	for _, want := range []string{"coil 2 of 12", "not wound yet", "*2-U", "@1+U"} {
+	for _, want := range []string{"coil 2 of 12", "not wound yet", "done    @  *"} { // the strip: tooth 1 in hand, tooth 2 looked at
 		if !strings.Contains(v, want) {
 			t.Errorf("looking ahead at coil 2 the screen lacks %q:\n%s", want, v)
 		}

@@ -2,6 +2,7 @@ package tui
 
 import (
 	"fmt"
+	"io"
 	"strings"
 	"time"
 
@@ -44,6 +45,9 @@ type Options struct {
 	Where    string   // where progress is kept, in words, for the help screen
 	Judge    Judge    // verdicts of test readings; nil uses VerifyJudge
 	Now      func() time.Time
+	// Bell is where the terminal bell is rung when a count reaches the plan
+	// (the terminal's output); nil rings no bell.
+	Bell io.Writer
 }
 
 // Model is the bench guide, a tea.Model.
@@ -71,6 +75,7 @@ func New(o Options) *Model {
 		where: o.Where,
 		judge: o.Judge,
 		now:   o.Now,
+		bell:  o.Bell,
 		out:   &writer{rec: o.Recorder},
 		rings: map[ringKey]*ringGeometry{},
 		tests: map[string]plan.Test{},
@@ -98,6 +103,9 @@ func New(o Options) *Model {
 		m.banner = append(m.banner, o.Notice)
 	}
 	m.banner = append(m.banner, c.prog.Summary()...)
+	if r := resumeNotice(c); r != "" {
+		m.banner = append(m.banner, r)
+	}
 	c.said = append(c.said, m.banner...)
 	m.guide = newGuide(c)
 	m.overview = newOverview(c)
@@ -134,7 +142,8 @@ func (m *Model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 			return m, tea.Quit // what waits is written by Run, or kept in the error
 		}
 	case tea.KeyMsg:
-		cmd = m.key(msg)
+		n, step, ok := m.c.countNow()
+		cmd = tea.Batch(m.key(msg), m.c.bellAfter(n, step, ok))
 		if m.quitting && m.c.out.settled() {
 			return m, tea.Quit
 		}
@@ -258,7 +267,10 @@ func (m *Model) header() string {
 		right = m.screen.String() + "  " + right
 	}
 	title := "coilwright bench"
-	rest := " | " + c.planName() + " | " + c.specText()
+	rest := " | " + c.planName()
+	if spec := c.specText(); spec != "" {
+		rest += " | " + spec
+	}
 	room := max(0, c.width-len(right)-1-len(title))
 	if lipglossWidth(rest) > room {
 		rest = " | " + c.planName()
@@ -308,7 +320,36 @@ func (m *Model) helpLine() string {
 	default:
 		b = []key.Binding{k.scroll.Up, k.scroll.Down, k.scroll.PageDown, k.scroll.Back, k.global.Quit}
 	}
-	return m.keyHelp.ShortHelpView(b)
+	return m.keyLine(b)
+}
+
+// keyLine renders the key help in the width, always ending with the help and
+// quit keys: the keys before them are dropped from the end until it fits.
+func (m *Model) keyLine(b []key.Binding) string {
+	k := m.c.keys.global
+	var head []key.Binding
+	for _, x := range b {
+		if x.Help().Key != k.Help.Help().Key && x.Help().Key != k.Quit.Help().Key {
+			head = append(head, x)
+		}
+	}
+	tail := []key.Binding{k.Help, k.Quit}
+	if m.screen == screenGuide && m.guide.typing() {
+		// Keys go to the field while typing: esc first.
+		tail = []key.Binding{withHelp(k.Help, "help after esc"), withHelp(k.Quit, "quit after esc")}
+	}
+	if m.screen == screenHelp {
+		tail = tail[1:]
+	}
+	h := m.keyHelp
+	h.Width = 0 // measured here, never cut with an ellipsis
+	for {
+		line := h.ShortHelpView(append(append([]key.Binding{}, head...), tail...))
+		if ansi.StringWidth(line) <= m.c.width || len(head) == 0 {
+			return fit(line, m.c.width, 1)
+		}
+		head = head[:len(head)-1]
+	}
 }
 
 // smallView asks for a larger terminal; it fits any size, even 0x0.

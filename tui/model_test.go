@@ -278,7 +278,7 @@ func TestResumeFromHistory(t *testing.T) {
 func TestGlobalKeys(t *testing.T) {
 	m, _ := newTest(t, 80, 24)
 	keys(t, m, "?")
-	if m.screen != screenHelp || !strings.Contains(plain(m), "the drawing") {
+	if m.screen != screenHelp || !strings.Contains(plain(m), "keys") {
 		t.Fatalf("? shows %v; want help", m.screen)
 	}
 	keys(t, m, "esc", "o")

@@ -43,22 +43,25 @@ func (b *lines) kv(label, value string) { b.kvIn(label, value, b.st.value) }
 func (b *lines) kvStrong(label, value string) { b.kvIn(label, value, b.st.strong) }
 
 // kvIn adds a labelled value drawn in the given style, wrapped under itself.
+// The label column is labelWidth wide, or wider for a longer label, and
+// always leaves a space before the value.
 func (b *lines) kvIn(label, value string, style lipgloss.Style) {
 	if value == "" {
 		return
 	}
-	vw := b.w - labelWidth
+	lw := max(labelWidth, ansi.StringWidth(label)+1)
+	vw := b.w - lw
 	if vw < 8 {
 		b.text(label+" "+value, style.Render)
 		return
 	}
-	pad := strings.Repeat(" ", labelWidth)
+	pad := strings.Repeat(" ", lw)
 	for i, ln := range strings.Split(ansi.Wrap(value, vw, " -"), "\n") {
 		lab := pad
 		if i == 0 {
-			lab = b.st.dim.Render(fmt.Sprintf("%-*s", labelWidth, label))
+			lab = b.st.dim.Render(label + strings.Repeat(" ", lw-ansi.StringWidth(label)))
 		}
-		b.l = append(b.l, ansi.Truncate(lab, labelWidth, "")+style.Render(ln))
+		b.l = append(b.l, lab+style.Render(ln))
 	}
 }
 
@@ -79,68 +82,103 @@ func (b *lines) titled(title, right string) {
 	b.raw(b.st.coilTitle.Render(title) + strings.Repeat(" ", gap) + b.st.dim.Render(right))
 }
 
-// panel renders the current step in a box of w x h cells.
-func (g guideModel) panel(w, h int) []string {
+// Panel detail levels, roomiest first: the guide takes the first level whose
+// live and useful parts fit the panel. The roomy levels draw the count in
+// '#' figures of size maxFigure down to 1.
+const (
+	maxFigure    = 5
+	levelNormal  = maxFigure + iota - 1 // the coil picture and the count in three-row figures
+	levelCompact                        // no picture; the count in three-row figures
+	levelMinimal                        // no picture; the count on one line
+	levels
+)
+
+// figureSize is the size of the '#' figures at level lv, 0 for none.
+func figureSize(lv int) int { return max(0, maxFigure-lv) }
+
+// panel renders the shown step in a box of w x h cells; ok is false when
+// even its live parts do not fit.
+func (g guideModel) panel(w, h int) ([]string, bool) {
 	c := g.c
 	boxed := w >= 24 && h >= 5
-	cw := w
+	cw, inner := w, h
 	if boxed {
-		cw = max(0, w-4)
+		cw, inner = max(0, w-4), max(0, h-2)
 	}
-	inner := h
-	if boxed {
-		inner = max(0, h-2)
-	}
-	b := g.panelLines(cw, false)
-	if len(b.l) > inner {
-		b = g.panelLines(cw, true)
-	}
-	out := b.l
-	if len(out) > inner {
-		out = out[:inner]
-	}
+	pp, fits := g.fitLevel(cw, inner)
+	out := pp.fit(inner, g.morePage(), c.st)
 	if !boxed {
-		return out
+		return out, fits
 	}
-	return strings.Split(c.st.panel.Width(max(0, w-2)).Render(strings.Join(out, "\n")), "\n")
+	return strings.Split(c.st.panel.Width(max(0, w-2)).Render(strings.Join(out, "\n")), "\n"), fits
 }
 
-// panelLines builds the panel's lines at content width cw; compact keeps the
-// turn count to one line for short terminals.
-func (g guideModel) panelLines(cw int, compact bool) *lines {
+// fitLevel builds the panel at the roomiest level that fits. Only a coil's
+// panel changes with the level above levelNormal, and there only by the
+// height of its figures, so the roomy levels are measured from the normal
+// one instead of built one by one: the words beside the picture grow from 9
+// rows to 2k+9 for figures of size k, the picture from 9 rows to 10.
+func (g guideModel) fitLevel(cw, inner int) (*panelParts, bool) {
+	pp := g.panelParts(cw, inner, levelNormal)
+	if need := pp.need(); need <= inner {
+		if s, ok := g.c.step(g.shown()); ok && s.Coil != nil && cw-toothPictureWidth-coilGap >= coilWordsMin {
+			for lv := 0; lv < levelNormal; lv++ {
+				k := figureSize(lv)
+				if need-9+max(10, 2*k+9) <= inner {
+					return g.panelParts(cw, inner, lv), true
+				}
+			}
+		}
+		return pp, true
+	}
+	for lv := levelNormal + 1; lv < levels; lv++ {
+		pp = g.panelParts(cw, inner, lv)
+		if pp.need() <= inner {
+			return pp, true
+		}
+	}
+	return pp, false
+}
+
+// panelParts builds the parts of the shown step at content width cw for a
+// panel of inner rows, at detail level lv.
+func (g guideModel) panelParts(cw, inner, lv int) *panelParts {
 	c := g.c
-	b := &lines{st: c.st, w: cw}
+	pp := &panelParts{st: c.st, w: cw}
 	cur := g.shown()
 	s, ok := c.step(cur)
 	if _, looking := g.lookedAt(); looking {
-		b.text(g.lookBanner(s), c.st.banner.Render)
-		b.text("esc or home: back to "+g.backTo(), c.st.banner.Render)
+		pp.add(partLive, func(b *lines) {
+			b.text(g.lookBanner(s), c.st.banner.Render)
+			b.text("esc or home: back to "+g.backTo(), c.st.banner.Render)
+		})
 	}
 	switch {
 	case !ok:
-		g.doneView(b)
+		pp.add(partLive, g.doneView)
 	case s.Kind == plan.StepCoil && s.Coil != nil:
-		g.coilView(b, s, compact)
+		g.coilView(pp, s, inner, lv)
 	case isPolarity(s):
-		g.polarityView(b, s)
+		pp.add(partLive, func(b *lines) { g.polarityView(b, s) })
 	case s.Kind == plan.StepTest:
-		g.testView(b, s)
+		g.testView(pp, s)
 	default:
-		g.checkView(b, s)
+		g.checkView(pp, s)
 	}
 	if ok && g.mode == modeNote {
-		b.raw("", g.note.View())
+		pp.add(partLive, func(b *lines) { b.raw(g.note.View()) })
 	} else if ok && c.prog.Steps[cur].Note != "" {
-		b.kv("note", c.prog.Steps[cur].Note)
+		pp.add(partUseful, func(b *lines) { b.kv("note", c.prog.Steps[cur].Note) })
 	}
 	if g.mode == modeConfirmUndo {
 		if last := c.prog.LastDone(); last >= 0 {
 			ls, _ := c.step(last)
-			b.raw("")
-			b.text(fmt.Sprintf("Undo step %d (%s)? enter/y undoes it, esc keeps it.", ls.Index, ls.Title), c.st.warn.Render)
+			pp.add(partLive, func(b *lines) {
+				b.text(fmt.Sprintf("Undo step %d (%s)? enter/y undoes it, esc keeps it.", ls.Index, ls.Title), c.st.warn.Render)
+			})
 		}
 	}
-	return b
+	return pp
 }
 
 // lookBanner says which step is looked at and what was recorded on it.
@@ -168,159 +206,303 @@ func (g guideModel) stepOf(s plan.Step) string {
 	return fmt.Sprintf("step %d of %d", s.Index, len(g.c.steps()))
 }
 
-// coilView is the panel of a coil step.
-func (g guideModel) coilView(b *lines, s plan.Step, compact bool) {
+// coilView is the panel of a coil step: at the roomier levels the coil in
+// hand drawn from the air gap beside its words and the count; at the tighter
+// ones the words and the count alone. The tooth, the sense in words, the
+// down and up slots and the count are live at every level.
+func (g guideModel) coilView(pp *panelParts, s plan.Step, inner, lv int) {
 	c := g.c
 	cs := s.Coil
-	b.titled(fmt.Sprintf("coil %d of %d", cs.Order, cs.Of), g.stepOf(s))
-	b.raw(fmt.Sprintf("tooth %s  phase %s  path %d, coil %d on the path",
-		c.st.strong.Render(strconv.Itoa(cs.Tooth)), c.st.phaseStyle(c.phaseIndex(cs.Phase)).Render(cs.Phase), cs.Path, cs.Position))
-	b.kvStrong("wind", cs.HowToWind)
 	n := c.prog.Steps[s.Index-1].Turns
-	if !compact {
-		b.raw("")
+	pp.add(partLive, func(b *lines) { b.titled(fmt.Sprintf("coil %d of %d", cs.Order, cs.Of), g.stepOf(s)) })
+	const gap = coilGap
+	colW := pp.w - toothPictureWidth - gap
+	side := lv <= levelNormal && colW >= coilWordsMin
+	if side {
+		k := figureSize(lv)
+		pic := toothPicture(cs, k > 0)
+		if digits := len(strconv.Itoa(max(n, cs.Turns))); k > 0 && digits*(2*k+3)-1 > colW {
+			k = 0 // too wide: the three-row figures
+		}
+		words := g.coilWords(cs, colW, n, k)
+		pp.add(partLive, func(b *lines) {
+			for i := 0; i < max(len(pic), len(words)); i++ {
+				l, r := "", ""
+				if i < len(pic) {
+					l = pic[i] // plain ASCII, in the terminal's own colour
+				}
+				if i < len(words) {
+					r = words[i]
+				}
+				b.raw(l + strings.Repeat(" ", max(0, toothPictureWidth-ansi.StringWidth(l))+gap) + r)
+			}
+		})
+	} else {
+		pp.add(partLive, func(b *lines) {
+			b.raw(fmt.Sprintf("tooth %s  phase %s  path %d, coil %d on the path",
+				c.st.strong.Render(strconv.Itoa(cs.Tooth)), c.st.phaseStyle(c.phaseIndex(cs.Phase)).Render(cs.Phase), cs.Path, cs.Position))
+			b.text(senseWord(cs)+" seen from the air gap", c.st.coilTitle.Render)
+			b.text(plan.SlotWords(cs.DownSlot, cs.UpSlot), c.st.strong.Render)
+			g.counter(b, n, cs.Turns, lv == levelMinimal, s.Index-1)
+			b.kv("from", shortEnd(cs.From)+"; next "+shortEnd(cs.To))
+		})
 	}
-	g.counter(b, n, cs.Turns, compact, s.Index-1)
 	if g.entry != "" {
-		b.raw(c.st.errorBar.Render(fmt.Sprintf(" NEW COUNT %s_ ", g.entry)) + " enter sets, esc keeps " + strconv.Itoa(n))
+		pp.add(partLive, func(b *lines) {
+			b.raw(c.st.errorBar.Render(fmt.Sprintf(" NEW COUNT %s_ ", g.entry)) + " enter sets, esc keeps " + strconv.Itoa(n))
+		})
 	}
 	if g.mode == modeConfirmTurns {
-		b.text(fmt.Sprintf("%d turns counted, the plan says %d. y records %d; esc goes back to counting.", n, cs.Turns, n), c.st.warn.Render)
+		pp.add(partLive, func(b *lines) {
+			b.text(fmt.Sprintf("%d turns counted, the plan says %d. y records %d; esc goes back to counting.", n, cs.Turns, n), c.st.warn.Render)
+		})
 	}
-	b.kv("wire", c.wireText(cs))
-	b.kv("from", cs.From)
-	b.kv("next", cs.To)
-	if cs.DownSlot > 0 && cs.UpSlot > 0 {
-		b.kv("slots", plan.SlotWords(cs.DownSlot, cs.UpSlot))
-	}
-	for _, r := range s.Reminders {
-		b.kv("mind", r)
-	}
+	pp.add(partUseful, func(b *lines) {
+		if bw := min(40, b.w-2); bw >= 10 && cs.Turns > 0 && lv <= levelCompact {
+			fill := min(bw, n*bw/cs.Turns)
+			b.raw("[" + strings.Repeat("#", fill) + strings.Repeat(".", bw-fill) + "]")
+		}
+		b.kv("wire", c.wireText(cs))
+	})
+	pp.add(partProse, func(b *lines) {
+		b.kv("from", cs.From)
+		b.kv("next", cs.To)
+		b.text(cs.HowToWind, c.st.value.Render)
+		for _, r := range s.Reminders {
+			b.kv("mind", r)
+		}
+	})
 }
 
-// counter shows the turn count of step i in large figures with a bar
-// against the plan.
+// coilGap is the gap between the coil picture and its words.
+const coilGap = 3
+
+// coilWordsMin is the narrowest column the coil's words take beside the
+// picture.
+const coilWordsMin = 26
+
+// senseWord is the coil's sense in capitals, as the winder sees it from the
+// air gap.
+func senseWord(cs *plan.CoilStep) string {
+	if cs.Direction == "ccw" {
+		return "COUNTER-CLOCKWISE"
+	}
+	return "CLOCKWISE"
+}
+
+// coilWords is the column beside the coil picture: the tooth, the sense in
+// words, the slots and the count (k > 0: figures 2k+3 rows tall).
+func (g guideModel) coilWords(cs *plan.CoilStep, w, n, k int) []string {
+	c := g.c
+	st := c.st
+	cut := func(s string) string { return ansi.Truncate(s, w, "") }
+	out := []string{
+		cut(fmt.Sprintf("tooth %s  phase %s  path %d",
+			st.strong.Render(strconv.Itoa(cs.Tooth)), st.phaseStyle(c.phaseIndex(cs.Phase)).Render(cs.Phase), cs.Path)),
+		st.coilTitle.Render(cut(senseWord(cs))),
+		st.value.Render(cut("seen from the air gap")),
+		st.strong.Render(cut(plan.SlotWords(cs.DownSlot, cs.UpSlot))),
+		"",
+	}
+	style := st.counter
+	if n == cs.Turns {
+		style = st.counterDone
+	}
+	of, state := g.countWords(n, cs.Turns, g.shown())
+	if k > 0 {
+		for _, f := range scaledNumber(n, k) {
+			out = append(out, cut(style.Render(f)))
+		}
+		return append(out, cut(of+", "+state))
+	}
+	b := bigNumber(n)
+	for i, f := range b {
+		line := style.Render(f)
+		if i == 1 {
+			line += "  " + of
+		}
+		out = append(out, cut(line))
+	}
+	return append(out, cut(state))
+}
+
+// countWords says the count against the plan: "of 18 turns" and where it
+// stands ("5 to go", "= plan, press enter").
+func (g guideModel) countWords(n, want, i int) (of, state string) {
+	of = fmt.Sprintf("of %d turns", want)
+	_, looking := g.lookedAt()
+	switch {
+	case looking && !g.c.prog.Steps[i].Done:
+		state = "not wound yet"
+	case looking && n == want:
+		state = "wound as planned"
+	case looking && n > want:
+		state = fmt.Sprintf("wound %d over", n-want)
+	case looking:
+		state = fmt.Sprintf("wound %d short", want-n)
+	case n == want:
+		state = "= plan, press enter"
+	case n > want:
+		state = fmt.Sprintf("%d over", n-want)
+	default:
+		state = fmt.Sprintf("%d to go", want-n)
+	}
+	return of, state
+}
+
+// counter shows the count of step i: three-row figures, or one line when
+// compact.
 func (g guideModel) counter(b *lines, n, want int, compact bool, i int) {
 	st := g.c.st
 	style := st.counter
 	if n == want {
 		style = st.counterDone
 	}
+	of, state := g.countWords(n, want, i)
+	of += "  " + state
 	big := bigNumber(n)
-	of := fmt.Sprintf("of %d turns", want)
-	_, looking := g.lookedAt()
-	switch {
-	case looking && !g.c.prog.Steps[i].Done:
-		of += "  not wound yet"
-	case looking && n == want:
-		of += "  wound as planned"
-	case looking && n > want:
-		of += fmt.Sprintf("  wound %d over", n-want)
-	case looking:
-		of += fmt.Sprintf("  wound %d short", want-n)
-	case n == want:
-		of += "  = plan, enter"
-	case n > want:
-		of += fmt.Sprintf("  %d over", n-want)
-	default:
-		of += fmt.Sprintf("  %d to go", want-n)
-	}
-	bigW := ansi.StringWidth(big[0])
-	if !compact && bigW+2+len(of) <= b.w {
+	if !compact && ansi.StringWidth(big[0])+2+len(of) <= b.w {
 		b.raw(style.Render(big[0]), style.Render(big[1])+"  "+of, style.Render(big[2]))
-	} else {
-		b.raw(c0(b.st, "turns") + style.Render(strconv.Itoa(n)) + " " + of)
+		return
 	}
-	bw := min(40, b.w-2)
-	if bw >= 10 && want > 0 && !compact {
-		fill := min(bw, n*bw/want)
-		b.raw("[" + strings.Repeat("#", fill) + strings.Repeat(".", bw-fill) + "]")
-	}
+	b.raw(c0(b.st, "turns") + style.Render(strconv.Itoa(n)) + " " + of)
 }
 
 // checkView is the panel of a step that needs a confirmation.
-func (g guideModel) checkView(b *lines, s plan.Step) {
+func (g guideModel) checkView(pp *panelParts, s plan.Step) {
 	c := g.c
-	b.titled(string(s.Kind), g.stepOf(s))
-	b.text(s.Title, c.st.strong.Render)
-	b.text(s.Detail, c.st.value.Render)
-	if s.Kind == plan.StepSeparator && s.Slot > 0 {
+	_, looking := g.lookedAt()
+	pp.add(partLive, func(b *lines) {
+		b.titled(kindWord(s.Kind), g.stepOf(s))
+		b.text(s.Title, c.st.strong.Render)
+	})
+	switch {
+	case s.Jumper != nil:
+		j := s.Jumper
+		pp.add(partLive, func(b *lines) {
+			b.kvStrong("leaves", fmt.Sprintf("slot %d at the lead end (the up slot of tooth %d)", j.LeavesSlot, j.FromTooth))
+			b.kvStrong("enters", fmt.Sprintf("slot %d (the down slot of tooth %d)", j.EntersSlot, j.ToTooth))
+			b.kvStrong("way", jumperWay(*j))
+			if j.LengthMM > 0 {
+				b.kv("length", fmt.Sprintf("about %.0f mm with the slack", j.LengthMM))
+			}
+			if j.ReversesSense {
+				b.kv("then", "the next coil is wound the other way round")
+			} else {
+				b.kv("then", "the next coil is wound the same way round")
+			}
+		})
+	case s.Kind == plan.StepSeparator && s.Slot > 0:
 		q := len(c.teeth)
 		next := s.Slot%max(1, q) + 1
-		b.kv("slot", fmt.Sprintf("%d, between tooth %d and tooth %d", s.Slot, s.Slot, next))
+		pp.add(partLive, func(b *lines) {
+			b.kvStrong("slot", fmt.Sprintf("%d, between tooth %d and tooth %d", s.Slot, s.Slot, next))
+		})
+		pp.add(partUseful, func(b *lines) { b.text(s.Detail, c.st.value.Render) })
+	default:
+		pp.add(partUseful, func(b *lines) { b.text(s.Detail, c.st.value.Render) })
 	}
-	if j := s.Jumper; j != nil && s.Detail == "" {
-		t := fmt.Sprintf("from tooth %d to tooth %d: %s", j.FromTooth, j.ToTooth, j.Words())
-		if j.ReversesSense {
-			t += "; the next coil goes round the other way"
-		}
-		b.kv("wire", t)
+	if !looking {
+		pp.add(partLive, func(b *lines) { b.text("Press enter when this is done.", c.st.statusNow.Render) })
 	}
-	for _, r := range s.Reminders {
-		b.kv("mind", r)
-	}
-	if _, looking := g.lookedAt(); looking {
-		return
-	}
-	b.raw("")
-	b.text("Press enter when this is done.", c.st.statusNow.Render)
-}
-
-// testView is the panel of a test step.
-func (g guideModel) testView(b *lines, s plan.Step) {
-	c := g.c
-	t, known := c.tests[s.Test]
-	b.titled("test", g.stepOf(s))
-	b.text(s.Title, c.st.strong.Render)
-	if known {
-		b.text(t.What, c.st.value.Render)
-		b.kv("limit", limitText(t))
-		b.kv("source", t.Source)
-		if t.Voltage > 0 {
-			b.kv("volts", fmt.Sprintf("%s V", fmtNum(t.Voltage)))
-		}
-		switch {
-		case t.Caution != "":
-			b.text("CAUTION "+t.Caution, c.st.caution.Render)
-		case t.Voltage > 0:
-			b.text(hvCaution, c.st.caution.Render)
-		}
-		b.kv("note", t.Note)
-	}
-	b.text(s.Detail, c.st.value.Render)
-	for _, r := range s.Reminders {
-		if !known || r != t.Caution {
+	pp.add(partProse, func(b *lines) {
+		for _, r := range s.Reminders {
 			b.kv("mind", r)
 		}
+	})
+}
+
+// jumperWay is the jumper's run in slot pitches and its way round.
+func jumperWay(j plan.JumperStep) string {
+	if j.SlotPitches == 0 {
+		return "straight back down the same slot"
+	}
+	way := "counter-clockwise"
+	if j.Way == plan.WayCW {
+		way = "clockwise"
+	}
+	return fmt.Sprintf("%d slot pitch%s, %s seen from the lead end", j.SlotPitches, map[bool]string{true: "", false: "es"}[j.SlotPitches == 1], way)
+}
+
+// kindWord names a step's kind on its panel.
+func kindWord(k plan.StepKind) string {
+	if k == plan.StepSetup {
+		return "set up"
+	}
+	return string(k)
+}
+
+// testView is the panel of a test step: its fields, errors and verdict are
+// live; what it is, its limit, source and cautions are prose, cut first.
+func (g guideModel) testView(pp *panelParts, s plan.Step) {
+	c := g.c
+	t, known := c.tests[s.Test]
+	pp.add(partLive, func(b *lines) {
+		b.titled("test", g.stepOf(s))
+		b.text(s.Title, c.st.strong.Render)
+	})
+	if known {
+		pp.add(partUseful, func(b *lines) {
+			b.kv("limit", limitText(t))
+			if t.Voltage > 0 {
+				b.kv("volts", fmt.Sprintf("%s V", fmtNum(t.Voltage)))
+			}
+		})
 	}
 	switch g.mode {
 	case modeReadings:
-		b.raw("")
-		for _, f := range g.fields {
-			b.raw(f.View())
-		}
-		if g.inErr != "" {
-			b.text(g.inErr, c.st.fail.Render)
-		}
+		pp.add(partLive, func(b *lines) {
+			for _, f := range g.fields {
+				b.raw(f.View())
+			}
+			if g.inErr != "" {
+				b.text(g.inErr, c.st.fail.Render)
+			}
+		})
 	case modeVerdict:
-		b.raw("")
-		for i, f := range g.fields {
-			if i < len(g.labels) {
-				b.kv(g.labels[i].label, f.Value()+" "+g.labels[i].unit)
+		pp.add(partLive, func(b *lines) {
+			for i, f := range g.fields {
+				if i < len(g.labels) {
+					b.kv(g.labels[i].label, f.Value()+" "+g.labels[i].unit)
+				}
+			}
+			g.verdictView(b, g.verdict)
+			b.text("enter/y records it and goes on; esc types the readings again.", c.st.statusNow.Render)
+		})
+	default:
+		pp.add(partLive, func(b *lines) {
+			if r := c.prog.Steps[s.Index-1].Reading; r != nil {
+				b.kv("last", fmt.Sprintf("%s -> %s", c.readingText(s, r), strings.ToUpper(r.Verdict)))
+			}
+			if _, looking := g.lookedAt(); !looking {
+				b.text("Press enter to type the readings.", c.st.statusNow.Render)
+			}
+		})
+	}
+	if known {
+		// Cautions go before the prose: they are the last words cut.
+		pp.add(partUseful, func(b *lines) {
+			switch {
+			case t.Caution != "":
+				b.text("CAUTION "+t.Caution, c.st.caution.Render)
+			case t.Voltage > 0:
+				b.text(hvCaution, c.st.caution.Render)
+			}
+		})
+	}
+	pp.add(partProse, func(b *lines) {
+		if known {
+			b.text(t.What, c.st.value.Render)
+			b.kv("source", t.Source)
+			b.kv("note", t.Note)
+		}
+		b.text(s.Detail, c.st.value.Render)
+		for _, r := range s.Reminders {
+			if !known || r != t.Caution {
+				b.kv("mind", r)
 			}
 		}
-		g.verdictView(b, g.verdict)
-		b.text("enter/y records it and goes on; esc types the readings again.", c.st.statusNow.Render)
-	default:
-		if r := c.prog.Steps[s.Index-1].Reading; r != nil {
-			b.kv("last", fmt.Sprintf("%s -> %s", c.readingText(s, r), strings.ToUpper(r.Verdict)))
-		}
-		if _, looking := g.lookedAt(); looking {
-			return
-		}
-		b.raw("")
-		b.text("Press enter to type the readings.", c.st.statusNow.Render)
-	}
+	})
 }
 
 // verdictView shows a verdict with its word and colour.
@@ -345,8 +527,21 @@ func (g guideModel) verdictView(b *lines, v *Verdict) {
 	}
 }
 
-// limitText says a test's limit in words (plan.LimitText, the one wording).
-func limitText(t plan.Test) string { return plan.LimitText(t) }
+// limitText says a test's limit in words.
+func limitText(t plan.Test) string {
+	switch t.Compare {
+	case "max":
+		return fmt.Sprintf("at most %s %s", fmtNum(t.Limit), t.Unit)
+	case "min":
+		return fmt.Sprintf("at least %s %s", fmtNum(t.Limit), t.Unit)
+	case "band":
+		return fmt.Sprintf("within +/-%s %% of the expected value", fmtNum(t.Limit))
+	}
+	if t.Limit != 0 {
+		return fmt.Sprintf("%s %s", fmtNum(t.Limit), t.Unit)
+	}
+	return ""
+}
 
 // doneView is the panel once every step is done.
 func (g guideModel) doneView(b *lines) {

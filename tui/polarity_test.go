@@ -95,7 +95,7 @@ func TestPolarityWalkMismatch(t *testing.T) {
 	ks[3] = "x"
 	keys(t, m, ks[:4]...)
 	v := plain(m)
-	for _, want := range []string{"tooth 7 shows S, plan N: coil 3 (step 8)", "Rewind", "7N!S", "8S?"} {
+	for _, want := range []string{"tooth 7 shows S, plan N: coil 3 (step 9)", "Rewind", "7N!S", "8S?"} {
 		if !strings.Contains(v, want) {
 			t.Errorf("view after a mismatch lacks %q:\n%s", want, v)
 		}

@@ -23,6 +23,7 @@ type RunOptions struct {
 	In         io.Reader // keys; nil for the process's terminal
 	Out        io.Writer // screen; nil for the process's terminal
 	AltScreen  bool      // use the terminal's alternate screen
+	NoBell     bool      // never ring the terminal bell
 }
 
 // ErrStopped is returned by Run when a signal (SIGTERM, SIGINT, SIGHUP)
@@ -57,7 +58,15 @@ func Run(p *plan.Plan, o RunOptions) error {
 	if progress.Fold(p, events).NeedsFingerprint() {
 		rec.Head = []journal.Event{progress.FingerprintEvent(p)}
 	}
+	var bell io.Writer = os.Stdout
+	if o.Out != nil {
+		bell = o.Out
+	}
+	if o.NoBell {
+		bell = nil
+	}
 	m := New(Options{
+		Bell:     bell,
 		Plan:     p,
 		Recorder: rec,
 		History:  events,

@@ -22,6 +22,8 @@ const (
 	markWound   = "#"
 	markCurrent = "@"
 	markViewed  = "*"
+	markFrom    = "f" // the coil the wire in hand comes from
+	markNext    = "n" // the coil the wire goes to next
 	markTodo    = " "
 	markUnwound = "·" // a middle dot: a '0' glued to the tooth number would read as a digit
 )
@@ -92,23 +94,42 @@ func fitRing(q, w, h int) (ringGeometry, bool) {
 	tw := 1 + len(strconv.Itoa(q)) + 2
 	minRx := math.Max(6, float64(q*(tw+1))/(2*math.Pi))
 	for rx := minRx; ; rx += 0.5 {
-		ry := math.Max(rx*0.46, float64(q)/(2*math.Pi)*1.1)
-		gw := int(math.Ceil(2*rx)) + tw + 3 // a column of margin on each side
-		gh := int(math.Ceil(2*ry)) + 1
-		if gw > w || gh > h {
+		g, ok := ringAt(q, w, h, tw, rx)
+		if !ok {
 			return ringGeometry{}, false
 		}
-		g := ringGeometry{w: gw, h: gh, tw: tw, x: make([]int, q), y: make([]int, q)}
-		g.cx, g.cy, g.rx, g.ry = gw/2, gh/2, rx, ry
-		for i := 0; i < q; i++ {
-			th := math.Pi/2 + 2*math.Pi*float64(i)/float64(q) // counter-clockwise from the top
-			g.x[i] = min(max(1, int(math.Round(float64(g.cx)+rx*math.Cos(th)))-tw/2), gw-tw-1)
-			g.y[i] = min(max(0, int(math.Round(float64(g.cy)-ry*math.Sin(th)))), gh-1)
-		}
 		if !g.overlaps() {
+			// Grow with the box, up to twice the smallest ring, so the
+			// drawing gets easier to read on a larger terminal.
+			for next := rx + 0.5; next <= 2*minRx; next += 0.5 {
+				bigger, ok := ringAt(q, w, h, tw, next)
+				if !ok || bigger.overlaps() {
+					break
+				}
+				g = bigger
+			}
 			return g, true
 		}
 	}
+}
+
+// ringAt lays out a ring of radius rx in a box of w x h, or ok false when it
+// does not fit.
+func ringAt(q, w, h, tw int, rx float64) (ringGeometry, bool) {
+	ry := math.Max(rx*0.46, float64(q)/(2*math.Pi)*1.1)
+	gw := int(math.Ceil(2*rx)) + tw + 3
+	gh := int(math.Ceil(2*ry)) + 1
+	if gw > w || gh > h {
+		return ringGeometry{}, false
+	}
+	g := ringGeometry{w: gw, h: gh, tw: tw, x: make([]int, q), y: make([]int, q)}
+	g.cx, g.cy, g.rx, g.ry = gw/2, gh/2, rx, ry
+	for i := 0; i < q; i++ {
+		th := math.Pi/2 + 2*math.Pi*float64(i)/float64(q) // counter-clockwise from the top
+		g.x[i] = min(max(1, int(math.Round(float64(g.cx)+rx*math.Cos(th)))-tw/2), gw-tw-1)
+		g.y[i] = min(max(0, int(math.Round(float64(g.cy)-ry*math.Sin(th)))), gh-1)
+	}
+	return g, true
 }
 
 // overlaps reports whether two tokens on one row are closer than one space.
@@ -132,41 +153,57 @@ type drawing struct {
 	width int
 }
 
-// stateMark is the first character of a token. The tooth looked at wins
-// over the current one: it is what the panel shows.
-func stateMark(wound, current, viewed bool) string {
+// marks says which teeth the drawing marks: those wound, the one in hand,
+// the one looked at, and the coils the wire comes from and goes to next (0
+// for none).
+type marks struct {
+	wound                       []bool
+	current, viewed, from, next int
+}
+
+// isWound reports whether tooth t (1-based) is wound.
+func (m marks) isWound(t int) bool { return t >= 1 && t <= len(m.wound) && m.wound[t-1] }
+
+// stateMark is the first character of tooth t's token. The tooth looked at
+// wins over the current one: it is what the panel shows.
+func (m marks) stateMark(t int) string {
 	switch {
-	case viewed:
+	case t == m.viewed:
 		return markViewed
-	case current:
+	case t == m.current:
 		return markCurrent
-	case wound:
+	case t == m.from:
+		return markFrom
+	case t == m.next:
+		return markNext
+	case m.isWound(t):
 		return markWound
 	}
 	return markTodo
 }
 
-// styledToken renders one tooth token padded to width tw.
-func styledToken(st *styles, t int, ti toothInfo, wound, current, viewed bool, tw int) string {
+// styledToken renders tooth t's token padded to width tw.
+func styledToken(st *styles, t int, ti toothInfo, mk marks, tw int) string {
 	text := tokenText(t, ti)
-	mark := stateMark(wound, current, viewed)
+	mark := mk.stateMark(t)
 	pad := strings.Repeat(" ", max(0, tw-1-utf8.RuneCountInString(text)))
 	switch {
-	case viewed:
+	case t == mk.viewed:
 		return st.viewed.Render(mark+text) + pad
-	case current:
+	case t == mk.current:
 		return st.current.Render(mark+text) + pad
 	case !ti.wound:
 		return st.dim.Render(mark+text) + pad
-	case wound:
+	case t == mk.from || t == mk.next:
+		return st.strong.Render(mark+text) + pad
+	case mk.isWound(t):
 		return st.done.Render(mark+text) + pad
 	}
 	return mark + st.phaseStyle(ti.phase).Render(text) + pad
 }
 
-// renderRing draws the ring with a caption in the middle; viewed is the tooth
-// of a step looked at (0 for none).
-func renderRing(st *styles, g ringGeometry, teeth []toothInfo, wound []bool, current, viewed int, caption []string) drawing {
+// renderRing draws the ring with a caption in the middle.
+func renderRing(st *styles, g ringGeometry, teeth []toothInfo, mk marks, caption []string) drawing {
 	type seg struct {
 		x    int
 		w    int
@@ -177,8 +214,7 @@ func renderRing(st *styles, g ringGeometry, teeth []toothInfo, wound []bool, cur
 		if i >= len(g.x) {
 			break
 		}
-		w := i < len(wound) && wound[i]
-		rows[g.y[i]] = append(rows[g.y[i]], seg{g.x[i], g.tw, styledToken(st, i+1, ti, w, i+1 == current, i+1 == viewed, g.tw)})
+		rows[g.y[i]] = append(rows[g.y[i]], seg{g.x[i], g.tw, styledToken(st, i+1, ti, mk, g.tw)})
 	}
 	// Caption lines centred in the ring.
 	top := g.cy - len(caption)/2
@@ -232,9 +268,10 @@ func sortSegs[T any](xs []T, less func(a, b T) bool) {
 var stripLabels = [3]string{"tooth ", "coil  ", "done  "}
 
 // renderStrip draws a developed strip of the teeth round the current one (or
-// round the tooth looked at, viewed, when not 0) in width w: tooth numbers,
+// round the tooth looked at, when there is one) in width w: tooth numbers,
 // signed coil tokens and state marks in columns.
-func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, viewed, w int) drawing {
+func renderStrip(st *styles, teeth []toothInfo, mk marks, w int) drawing {
+	current, viewed := mk.current, mk.viewed
 	q := len(teeth)
 	if q == 0 {
 		return drawing{}
@@ -258,20 +295,14 @@ func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, viewed, w
 		ti := teeth[i]
 		isCur := i+1 == current
 		isViewed := i+1 == viewed
-		isWound := i < len(wound) && wound[i]
+		isWound := mk.isWound(i + 1)
 		cells := [3]string{strconv.Itoa(i + 1), markUnwound, " "}
 		if ti.wound {
 			cells[1] = ti.token
 			cells[2] = "."
-			if isWound {
-				cells[2] = markWound
-			}
 		}
-		if isCur {
-			cells[2] = markCurrent
-		}
-		if isViewed {
-			cells[2] = markViewed
+		if m := mk.stateMark(i + 1); m != markTodo {
+			cells[2] = m
 		}
 		for r, c := range cells {
 			cell := strings.Repeat(" ", max(0, cw-utf8.RuneCountInString(c))) + c
@@ -280,6 +311,8 @@ func renderStrip(st *styles, teeth []toothInfo, wound []bool, current, viewed, w
 				rows[r].WriteString(st.viewed.Render(cell))
 			case isCur:
 				rows[r].WriteString(st.current.Render(cell))
+			case i+1 == mk.from || i+1 == mk.next:
+				rows[r].WriteString(st.strong.Render(cell))
 			case r == 1 && ti.wound && !isWound:
 				rows[r].WriteString(st.phaseStyle(ti.phase).Render(cell))
 			case isWound || !ti.wound:
@@ -316,10 +349,10 @@ func stripCaption(a, b, q, w int) string {
 // other than the current one is looked at it names the '*' mark too, on a
 // second line when one is too narrow.
 func legend(w int, looking bool) []string {
-	long := "# wound  @ now  +U clockwise  -U counter-clockwise (seen from the air gap)"
-	short := "# wound  @ now  +U cw  -U ccw"
+	long := "# wound  @ now  f from  n next  +U clockwise  -U counter-clockwise (seen from the air gap)"
+	short := "# wound  @ now  f from  n next  +U cw  -U ccw"
 	if looking {
-		long = "# wound  @ now  * looking  +U clockwise  -U counter-clockwise"
+		long = "# wound  @ now  * looking  f from  n next  +U cw  -U ccw (seen from the air gap)"
 		short = "# wound  @ now  * looking  +U cw  -U ccw"
 	}
 	switch {
@@ -327,8 +360,10 @@ func legend(w int, looking bool) []string {
 		return []string{long}
 	case len(short) <= w:
 		return []string{short}
-	case looking && len("# wound  @ now  * looking") <= w && len("+U cw  -U ccw") <= w:
-		return []string{"# wound  @ now  * looking", "+U cw  -U ccw"}
+	case looking && len("# wound  @ now  * looking") <= w && len("f from  n next  +U cw  -U ccw") <= w:
+		return []string{"# wound  @ now  * looking", "f from  n next  +U cw  -U ccw"}
+	case len("# wound  @ now  f from  n next") <= w && len("+U cw  -U ccw") <= w:
+		return []string{"# wound  @ now  f from  n next", "+U cw  -U ccw"}
 	}
 	return nil
 }

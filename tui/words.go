@@ -56,23 +56,33 @@ func (c *shared) wireText(cs *plan.CoilStep) string {
 	return b.String()
 }
 
-// specText is the winding in the trade's short form with the rotor side.
+// specText is the winding in the trade's short form with the rotor side,
+// leaving out what the job's name already says (a name such as "24/28 outer
+// rotor" would otherwise be repeated on the header).
 func (c *shared) specText() string {
 	if c.plan == nil || c.plan.Layout == nil {
 		return ""
 	}
 	s := c.plan.Layout.Spec
-	t := fmt.Sprintf("%d slots / %d poles", s.Slots, s.Poles)
-	if c.plan.Rotor != "" {
-		t += ", " + string(c.plan.Rotor) + " rotor"
+	name := strings.ToLower(c.plan.Name)
+	var parts []string
+	if !strings.Contains(name, fmt.Sprintf("%d/%d", s.Slots, s.Poles)) && !strings.Contains(name, fmt.Sprintf("%d slots", s.Slots)) {
+		parts = append(parts, fmt.Sprintf("%d slots / %d poles", s.Slots, s.Poles))
 	}
-	return t
+	if r := string(c.plan.Rotor); r != "" && !strings.Contains(name, r+" rotor") && !strings.Contains(name, r+"-rotor") {
+		parts = append(parts, r+" rotor")
+	}
+	return strings.Join(parts, ", ")
 }
 
-// ringCaption is written inside the ring.
-func (c *shared) ringCaption() []string {
+// ringCaption is written inside the ring; on the set-up step (i, 0-based)
+// it says where slot 1 lies.
+func (c *shared) ringCaption(i int) []string {
 	if c.plan == nil || c.plan.Layout == nil {
 		return nil
+	}
+	if s, ok := c.step(i); ok && s.Kind == plan.StepSetup {
+		return []string{"slot 1 lies", "between", "tooth 1 and 2", "", "lead end view", "numbers ccw"}
 	}
 	s := c.plan.Layout.Spec
 	out := []string{strconv.Itoa(s.Slots) + " slots", strconv.Itoa(s.Poles) + " poles"}

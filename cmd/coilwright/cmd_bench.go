@@ -17,14 +17,15 @@ func init() { register(newBenchCmd) }
 func newBenchCmd() *cobra.Command {
 	var demo bool
 	var progress string
+	var noBell bool
 	cmd := &cobra.Command{
 		Use:   "bench JOB | --demo",
 		Short: "Guide at the winding bench, coil by coil, resuming saved progress",
 		Long: `bench opens a full-screen guide that leads through every step of the job:
 preparation, each coil with its turns and winding direction, jumpers, phase
 separators, terminals, joints and tests. Count turns with space (backspace
-takes one off, digits type the count), enter completes a step, ? shows every
-key, q quits.
+takes one off, digits type the count; the terminal bell rings when the count
+reaches the plan), enter completes a step, ? shows every key, q quits.
 
 Every turn counted and every step done is written at once to the progress
 record, so the guide opens where the work stopped, even after a crash:
@@ -55,7 +56,7 @@ entries no longer fit. Delete the record to start the job again.`,
 					return err
 				}
 			}
-			err = tui.Run(p, tui.RunOptions{RecordPath: rec, AltScreen: true})
+			err = tui.Run(p, tui.RunOptions{RecordPath: rec, AltScreen: true, NoBell: noBell})
 			var le *journal.LockedError
 			switch {
 			case errors.As(err, &le):
@@ -68,6 +69,7 @@ entries no longer fit. Delete the record to start the job again.`,
 	}
 	addDemoFlag(cmd, &demo)
 	cmd.Flags().StringVar(&progress, "progress", "", "keep the progress record in this file instead of the default")
+	cmd.Flags().BoolVar(&noBell, "no-bell", false, "do not ring the terminal bell when a count reaches the plan (b turns it off and on in the guide)")
 	return cmd
 }
 

@@ -17,7 +17,7 @@ func ExampleBuild() {
 	fmt.Printf("%d turns per coil, fill %.2f, mean turn %.1f mm\n", p.TurnsPerCoil, p.SlotFill, p.MeanTurnLengthMM)
 	fmt.Printf("phase %.1f mΩ at 20 °C, charging from %.0f rpm\n", 1000*p.PhaseResistance20C, p.EMF.CutInSpeedRPM)
 	fmt.Printf("copper loss %.1f W at %g °C\n", p.CopperLossW, p.CopperLossTemperatureC)
-	fmt.Println(p.Steps[3].Title)
+	fmt.Println(p.Steps[4].Title)
 	// Output:
 	// 18 turns per coil, fill 0.38, mean turn 84.9 mm
 	// phase 145.7 mΩ at 20 °C, charging from 286 rpm

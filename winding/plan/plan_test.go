@@ -453,7 +453,7 @@ func TestStepJSON(t *testing.T) {
 			t.Fatal(err)
 		}
 		got := string(b)
-		for _, want := range []string{`"kind":"jumper"`, `"jumper":{"from_tooth":1,"to_tooth":2,"span_teeth":1,"reverses_sense":true,"leaves_slot":24,"enters_slot":1,"slot_pitches":1,"way":"ccw",`, `"index":5`} {
+		for _, want := range []string{`"kind":"jumper"`, `"jumper":{"from_tooth":1,"to_tooth":2,"span_teeth":1,"reverses_sense":true,"leaves_slot":24,"enters_slot":1,"slot_pitches":1,"way":"ccw",`, `"index":6`} {
 			if !strings.Contains(got, want) {
 				t.Errorf("json.Marshal(first jumper step) = %s; want it to contain %s", got, want)
 			}

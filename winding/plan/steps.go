@@ -23,7 +23,8 @@ func (b *builder) steps() error {
 	p, j := b.p, b.j
 	l := p.Layout
 	q := l.Spec.Slots
-	b.p.Steps = make([]Step, 0, 3+3*len(p.Coils)+7*len(l.PhaseNames)+13)
+	b.p.Steps = make([]Step, 0, 4+3*len(p.Coils)+7*len(l.PhaseNames)+13)
+	b.add(setupStep(p.Rotor, q))
 	b.add(Step{Kind: StepPrepare, Title: "Deburr and clean the stator",
 		Detail: "File off burrs on the slot edges and tooth tips, round sharp corners at both ends of the stack, blow out the filings and wipe the slots clean. A burr cuts enamel and liner.",
 		Reminders: []string{"eye protection while filing and blowing out",
@@ -42,6 +43,8 @@ func (b *builder) steps() error {
 	// One slice shared by every coil step; readers do not change it.
 	coilReminders := []string{"count every turn; lay each turn beside the last, no crossings",
 		"keep the wire tight but do not stretch it; never let it scrape the slot edge"}
+	// One slice shared by every jumper step, like the coil reminders.
+	jumperReminders := []string{"sleeve the jumper where it crosses other coils; tie it down at the lead end"}
 	sepSize := separatorSize(p, b.stackPlusCuffs(), j.Stator.SeparatorMM)
 	ci := 0
 	for chi, ch := range l.Chains {
@@ -96,8 +99,8 @@ func (b *builder) steps() error {
 				b.add(Step{Kind: StepJumper, Jumper: &jp,
 					Title: "Jumper: tooth " + itoa(jp.FromTooth) + " to tooth " + itoa(jp.ToTooth),
 					Detail: "Carry the wire round the lead end without cutting it: it " + jp.Words() +
-						", about " + strconv.FormatFloat(jp.LengthMM, 'f', 0, 64) + " mm with slack; " + sense +
-						". Sleeve it where it crosses other coils."})
+						", about " + strconv.FormatFloat(jp.LengthMM, 'f', 0, 64) + " mm with slack; " + sense + ".",
+					Reminders: jumperReminders})
 			}
 		}
 		if chi == len(l.Chains)-1 || l.Chains[chi+1].Phase != ch.Phase {
@@ -142,6 +145,21 @@ func (b *builder) steps() error {
 	b.add(Step{Kind: StepTest, Test: TestHighVoltage, Title: "Test: high-voltage withstand", Reminders: []string{cautionHV}})
 	b.add(Step{Kind: StepTest, Test: TestBackEMF, Title: "Test (optional): back-EMF balance with the rotor fitted", Reminders: []string{cautionSpin}})
 	return nil
+}
+
+// setupStep is the first step: the numbering every later instruction counts
+// from, put on the real stator.
+func setupStep(r Rotor, q int) Step {
+	face := "from the bore"
+	if r == OuterRotor {
+		face = "from outside the stator"
+	}
+	return Step{Kind: StepSetup, Title: "Set up: mark the lead end, tooth 1 and the way the numbers rise",
+		Detail: "Choose the end of the stack the leads will come out of: the lead end. Mark it on the core. " +
+			"Standing at the lead end, mark one tooth 1 and the next tooth counter-clockwise 2: the tooth numbers rise counter-clockwise seen from the lead end. " +
+			"Count the slots: there must be " + itoa(q) + ". Slot 1 is the slot between tooth 1 and tooth 2; slot k lies between tooth k and tooth k+1. " +
+			"Every coil and jumper after this is counted from these marks, and every coil is wound facing its tooth from the air gap (" + face + ") with the lead end up.",
+		Reminders: []string{"use marks that survive cleaning: a paint pen on the yoke or a light scribe, never on a slot wall"}}
 }
 
 // howToWind says in plain words which way the wire goes round a tooth, seen

@@ -34,6 +34,30 @@ func TestStepsDemo(t *testing.T) {
 	}
 }
 
+// TestSetupFirst: the numbering is put on the stator before anything else,
+// and a job without separator film gets no separator steps or material.
+func TestSetupFirst(t *testing.T) {
+	p := mustPlan(t, job.Demo())
+	s := p.Steps[0]
+	if s.Kind != StepSetup || !strings.Contains(s.Detail, "tooth 1") || !strings.Contains(s.Detail, "counter-clockwise seen from the lead end") ||
+		!strings.Contains(s.Detail, "there must be 24") || !strings.Contains(s.Detail, "Slot 1 is the slot between tooth 1 and tooth 2") {
+		t.Errorf("first step = %+v; want the set-up of lead end, tooth 1, direction and slot count", s)
+	}
+	j := job.Demo()
+	j.Stator.SeparatorMM = 0
+	p = mustPlan(t, j)
+	for _, s := range p.Steps {
+		if s.Kind == StepSeparator {
+			t.Errorf("separator_mm = 0: step %d %q", s.Index, s.Title)
+		}
+	}
+	for _, m := range p.Materials {
+		if m.Item == "phase separator" {
+			t.Errorf("separator_mm = 0: material %+v", m)
+		}
+	}
+}
+
 func TestStepsVariants(t *testing.T) {
 	inner := mustPlan(t, mustJob(t, handJob))
 	checkSteps(t, "worked example", inner)

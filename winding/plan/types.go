@@ -180,6 +180,7 @@ type Material struct {
 type StepKind string
 
 const (
+	StepSetup     StepKind = "setup"     // choose the lead end, mark tooth 1 and the counting direction: confirm
 	StepPrepare   StepKind = "prepare"   // deburr, clean, liners: confirm
 	StepCoil      StepKind = "coil"      // wind one coil: count turns
 	StepJumper    StepKind = "jumper"    // carry the wire to the next coil: confirm
