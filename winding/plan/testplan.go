@@ -160,6 +160,13 @@ func (b *builder) tests() error {
 		bt.Note = fmt.Sprintf("expected %.4f V rms line per rpm (%.4f V phase per rpm)", p.EMF.VoltsPerRPMPhase*b.lineFactor, p.EMF.VoltsPerRPMPhase)
 	}
 	ts = append(ts, bt)
+	for _, r := range p.Resolutions() {
+		for i := range ts {
+			if ts[i].Name == r.Test {
+				ts[i].Resolution = r.Text
+			}
+		}
+	}
 	p.Tests = ts
 	return nil
 }

@@ -69,6 +69,7 @@ func Check(p *plan.Plan, r Readings) (*Report, error) {
 	if len(r.Polarity) > 0 {
 		c.polarity()
 	}
+	c.resolution()
 	c.cautions()
 	return c.rep, nil
 }
@@ -132,4 +133,18 @@ func (c *checker) phasesAtTemp() [3]float64 {
 		return DeltaPhases(uv, vw, wu)
 	}
 	return StarPhases(uv, vw, wu)
+}
+
+// resolution states, for the tests this check judged, the smallest turn
+// error each can see on this job.
+func (c *checker) resolution() {
+	judged := map[string]bool{}
+	for _, f := range c.rep.Findings {
+		judged[f.Test] = true
+	}
+	for _, r := range c.p.Resolutions() {
+		if judged[r.Test] {
+			c.rep.Resolution = append(c.rep.Resolution, r)
+		}
+	}
 }

@@ -1,5 +1,7 @@
 package verify
 
+import "coilwright/winding/plan"
+
 // Verdict is the outcome of a check: pass, warn (look again, probably
 // usable) or fail (do not put into service before the cause is found).
 type Verdict string
@@ -63,6 +65,10 @@ type Report struct {
 	Withstand  *WithstandResult  `json:"withstand,omitempty"`
 	EMF        *EMFResult        `json:"back_emf,omitempty"`
 	Polarity   *PolarityResult   `json:"polarity,omitempty"`
+
+	// Resolution is the smallest turn error each judged test can see on
+	// this job (plan.Plan.Resolutions).
+	Resolution []plan.Resolution `json:"resolution,omitempty"`
 
 	Verdict  Verdict   `json:"verdict"`
 	Findings []Finding `json:"findings"`

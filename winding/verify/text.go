@@ -95,6 +95,12 @@ func (r *Report) Text() string {
 		}
 		wrap(&b, fmt.Sprintf("  %-6s ", head), f.Test+": "+f.Message)
 	}
+	if len(r.Resolution) > 0 {
+		b.WriteString("\nWhat these tests can see on this job\n")
+		for _, x := range r.Resolution {
+			wrap(&b, "  ", x.Test+": "+x.Text)
+		}
+	}
 	if len(r.Cautions) > 0 {
 		b.WriteString("\nCautions\n")
 		for _, c := range r.Cautions {

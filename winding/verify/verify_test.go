@@ -472,3 +472,23 @@ func TestBackEMFRootThreeLow(t *testing.T) {
 		t.Errorf("Check(EMF 1/√3 alone) findings = %+v; want star and delta confused and the flux both offered", rep.Findings)
 	}
 }
+
+// The check states the smallest turn error each test it judged can see on
+// this job (the plan's Resolutions, worked by hand in package plan).
+func TestCheckStatesResolution(t *testing.T) {
+	p := demoPlan(t)
+	rep, err := verify.Check(p, linesFor(p, scaled(p.PhaseResistance20C, [3]float64{1, 1, 1}), 20))
+	if err != nil {
+		t.Fatal(err)
+	}
+	got := map[string]int{}
+	for _, r := range rep.Resolution {
+		got[r.Test] = r.Turns
+	}
+	if len(got) != 2 || got[plan.TestBalance] < 1 || got[plan.TestResistance] < 1 {
+		t.Errorf("Check resolution = %+v; want resistance and balance, each in turns", rep.Resolution)
+	}
+	if !strings.Contains(rep.Text(), "What these tests can see on this job") {
+		t.Error("check text does not state what the tests can see")
+	}
+}
