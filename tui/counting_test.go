@@ -177,3 +177,38 @@ func TestStopSavesAndSaysSo(t *testing.T) {
 		t.Errorf("record after a stop = %+v; want the two turns", rec.all())
 	}
 }
+
+// panicky is a model that panics on its first key, as a bug in a screen
+// would.
+type panicky struct{}
+
+func (panicky) Init() tea.Cmd { return nil }
+func (panicky) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
+	if _, ok := msg.(tea.KeyMsg); ok {
+		panic("a bug in a screen")
+	}
+	return panicky{}, nil
+}
+func (panicky) View() string { return "" }
+
+// A panic inside the program loop comes back as an error (the terminal is
+// restored by bubbletea), and Run turns it into a *PanicError, never a clean
+// exit; a signal stop is not a clean exit either.
+func TestPanicIsNotACleanExit(t *testing.T) {
+	prog := tea.NewProgram(panicky{}, tea.WithInput(strings.NewReader("x")), tea.WithOutput(&bytes.Buffer{}), tea.WithoutSignalHandler())
+	_, runErr := prog.Run()
+	if !errors.Is(runErr, tea.ErrProgramPanic) {
+		t.Fatalf("Run of a panicking model = %v; want ErrProgramPanic", runErr)
+	}
+	err := runResult(runErr, nil, nil, false, "r.progress")
+	var pe *PanicError
+	if !errors.As(err, &pe) || !strings.Contains(err.Error(), "r.progress") || !strings.Contains(err.Error(), "a bug in a screen") && !strings.Contains(err.Error(), "panic") {
+		t.Errorf("runResult(panic) = %v; want a PanicError naming the record", err)
+	}
+	if err := runResult(nil, nil, nil, true, "r.progress"); !errors.Is(err, ErrStopped) {
+		t.Errorf("runResult(stopped) = %v; want ErrStopped", err)
+	}
+	if err := runResult(nil, nil, nil, false, "r.progress"); err != nil {
+		t.Errorf("runResult(quit) = %v; want nil", err)
+	}
+}

@@ -51,9 +51,5 @@ func TornNotice(t *journal.TornTail) string {
 	if t == nil {
 		return ""
 	}
-	s := fmt.Sprintf("The last line of the progress record was cut short (line %d, %d bytes), most likely by a crash; it was left out and everything before it restored.", t.Line, t.Bytes)
-	if t.KeptIn != "" {
-		s += " Its bytes are kept in " + t.KeptIn + "."
-	}
-	return s
+	return fmt.Sprintf("The last line of the progress record was cut short (line %d, %d bytes), most likely by a crash; it was left out and everything before it restored. Its bytes are copied to a side file next to the record before the next entry is written.", t.Line, t.Bytes)
 }

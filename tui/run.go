@@ -113,16 +113,23 @@ func Run(p *plan.Plan, o RunOptions) error {
 		flushErr = rec.Append(q...)
 	}
 	closeErr := store.Close()
+	return runResult(runErr, closeErr, flushErr, fm.stopped, store.Path())
+}
+
+// runResult is what Run returns after the program ended: a panic first (it
+// must never look like a clean exit), then any failure to save, then a stop
+// by a signal.
+func runResult(runErr, closeErr, flushErr error, stopped bool, record string) error {
 	switch {
 	case errors.Is(runErr, tea.ErrProgramPanic):
-		return &PanicError{Record: store.Path(), Err: runErr}
+		return &PanicError{Record: record, Err: runErr}
 	case runErr != nil && !errors.Is(runErr, tea.ErrProgramKilled):
 		return fmt.Errorf("tui: %w", runErr)
 	case closeErr != nil:
 		return fmt.Errorf("tui: progress not fully saved: %w", closeErr)
 	case flushErr != nil:
 		return fmt.Errorf("tui: progress not fully saved: %w", flushErr)
-	case fm.stopped:
+	case stopped:
 		return ErrStopped
 	}
 	return nil

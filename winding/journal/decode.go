@@ -14,17 +14,10 @@ type TornTail struct {
 	Offset int64  // byte offset where the torn line starts
 	Bytes  int    // its length in bytes
 	Reason string // why it could not be read
-	// KeptIn names the side file its bytes were copied to before they were
-	// cut from the record ("" when nothing was cut, as when only reading).
-	KeptIn string
 }
 
 func (t *TornTail) String() string {
-	s := fmt.Sprintf("line %d (%d bytes at offset %d): %s", t.Line, t.Bytes, t.Offset, t.Reason)
-	if t.KeptIn != "" {
-		s += "; its bytes are kept in " + t.KeptIn
-	}
-	return s
+	return fmt.Sprintf("line %d (%d bytes at offset %d): %s", t.Line, t.Bytes, t.Offset, t.Reason)
 }
 
 // DecodeError is a line that cannot be read and was not cut short by a

@@ -129,16 +129,21 @@ func TestStoreTornTailKeptAside(t *testing.T) {
 	good := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}` + "\n"
 	os.WriteFile(path, []byte(good+`{"seq":2,"kind":"tu`), 0o644)
 	s, ev, torn, err := journal.Open(path, "test")
-	if err != nil || len(ev) != 1 || torn == nil || torn.KeptIn == "" {
-		t.Fatalf("Open(torn) = %d events, torn %v, err %v; want 1 and the tail kept aside", len(ev), torn, err)
+	if err != nil || len(ev) != 1 || torn == nil || torn.Line != 2 {
+		t.Fatalf("Open(torn) = %d events, torn %v, err %v; want 1 and line 2 torn", len(ev), torn, err)
 	}
-	if b, _ := os.ReadFile(torn.KeptIn); string(b) != `{"seq":2,"kind":"tu` {
-		t.Errorf("side file %s holds %q; want the torn bytes", torn.KeptIn, b)
-	}
-	if !strings.Contains(torn.String(), torn.KeptIn) {
-		t.Errorf("torn.String() = %q; want the side file named", torn)
+	if side, _ := filepath.Glob(path + ".cut-*"); len(side) != 0 {
+		t.Errorf("side files %v before any write; want none (nothing is cut yet)", side)
 	}
 	s.Append(journal.Event{Kind: journal.Done, Step: 2})
+	side, _ := filepath.Glob(path + ".cut-*")
+	n := s.Notices()
+	if len(side) != 1 || len(n) != 1 || !strings.Contains(n[0], side[0]) {
+		t.Fatalf("after the first write: side files %v, notices %q; want one, named", side, n)
+	}
+	if b, _ := os.ReadFile(side[0]); string(b) != `{"seq":2,"kind":"tu` {
+		t.Errorf("side file %s holds %q; want the torn bytes", side[0], b)
+	}
 	s.Close()
 	if got := decodeFile(t, path); len(got) != 2 {
 		t.Errorf("record = %d events; want 2", len(got))

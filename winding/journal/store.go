@@ -121,8 +121,8 @@ func (e *WriteError) Unwrap() error { return e.Err }
 // Open locks the record at path for holder (a short name for who writes:
 // "bench", "check") and reads it. A missing record is an empty one; the file is
 // created by the first Append. A torn last line (cut short, without its
-// newline) is reported, its bytes copied to a side file named in the report,
-// and cut off before anything is appended. A record locked by a running
+// newline) is reported; before anything is appended its bytes are copied to
+// a side file, named in a notice (Notices), and cut off. A record locked by a running
 // program is refused with a *LockedError; a lock file nobody holds is stale
 // and taken, whatever process it names.
 func Open(path, holder string) (*Store, []Event, *TornTail, error) {
@@ -147,14 +147,7 @@ func Open(path, holder string) (*Store, []Event, *TornTail, error) {
 	}
 	switch n := len(data); {
 	case torn != nil:
-		side, err := keepAside(path, "cut", data[torn.Offset:])
-		if err != nil {
-			lk.release()
-			return nil, nil, nil, fmt.Errorf("journal: %s: the last line (%d) is cut short and could not be kept aside before cutting it: %w", path, torn.Line, err)
-		}
-		torn.KeptIn = side
-		s.size = torn.Offset // cut off by the first write
-		s.ownTail = true     // its bytes are safe in the side file
+		s.size = torn.Offset // kept aside and cut off by the first write
 	case n > 0 && data[n-1] != '\n':
 		s.needNewline = true // the last event is whole but its newline was lost
 	}
@@ -358,9 +351,9 @@ func (s *Store) reopen() error {
 			}
 			side, err := keepAside(s.path, "cut", extra)
 			if err != nil {
-				return fmt.Errorf("%d bytes were added to the record by another program and could not be kept aside: %w", len(extra), err)
+				return fmt.Errorf("%d bytes at the end of the record are not whole entries and could not be kept aside before cutting them: %w", len(extra), err)
 			}
-			s.notices = append(s.notices, fmt.Sprintf("%d bytes added to the progress record by another program were cut from it and kept in %s.", len(extra), side))
+			s.notices = append(s.notices, fmt.Sprintf("%d bytes at the end of the progress record that were not whole entries (a line cut short, or lines another program added) were cut from it and kept in %s.", len(extra), side))
 		}
 		if err := s.f.Truncate(s.size); err != nil {
 			return err
