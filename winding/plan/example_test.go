@@ -74,3 +74,31 @@ func ExampleSpecificIronLoss() {
 	fmt.Printf("%.2f W/kg\n", plan.SpecificIronLoss(4.00, plan.HysteresisShare, 1.2, 116.67))
 	// Output: 8.36 W/kg
 }
+
+func ExampleFormatReadings() {
+	rs := []plan.Reading{
+		{Key: "uv", Label: "U–V", Unit: plan.UnitOhm},
+		{Key: "vw", Label: "V–W", Unit: plan.UnitOhm},
+		{Key: "wu", Label: "W–U", Unit: plan.UnitOhm},
+		{Key: plan.KeyTemp, Label: "winding temperature", Unit: plan.UnitCelsius},
+	}
+	fmt.Println(plan.FormatReadings(rs, map[string]float64{"uv": 0.2861, "vw": 0.2858, "wu": 0.2866, "temp": 22.5}))
+	// Output:
+	// U–V 286.1 mΩ, V–W 285.8 mΩ, W–U 286.6 mΩ, winding temperature 22.5 °C
+}
+
+func ExampleLimitText() {
+	fmt.Println(plan.LimitText(plan.Test{Compare: plan.AtLeast, Limit: 5, Unit: plan.UnitMegaohm, Voltage: 500}))
+	fmt.Println(plan.LimitText(plan.Test{Compare: plan.InBand, Limit: 7.1, Unit: plan.UnitPercent, LowPercent: -6.9, HighPercent: 7.1}))
+	// Output:
+	// at least 5 MΩ at 500 V
+	// within −6.9 % .. +7.1 % of expected
+}
+
+func ExampleImbalancePercent() {
+	// EASA AR100: the largest deviation from the mean, over the mean.
+	pct, _ := plan.ImbalancePercent([]float64{0.1392, 0.1392, 0.14268})
+	fmt.Printf("%.2f %%\n", pct)
+	// Output:
+	// 1.65 %
+}
