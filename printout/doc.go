@@ -3,7 +3,8 @@
 // whose labels would collide on one ring, sector sheets drawn large enough
 // for every tooth's number, phase mark and sense), the developed layout, the connection sheet,
 // the machine sheet where the plan has machine figures (machine.go: inductance, losses,
-// the charging curve), the cut list and materials, the winding checklist and the test record.
+// the charging curve), the cut list and materials, the winding checklist, the polarity
+// sheet (the pole every tooth must show, to tick) and the test record.
 //
 // Model. Build turns a *plan.Plan into a Pack: pages of plain shapes (lines,
 // boxes, arcs, polylines, text runs) in mm from the top left corner of the

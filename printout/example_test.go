@@ -43,6 +43,7 @@ func ExampleBuild() {
 	// Cut list and materials
 	// Winding checklist
 	// Winding checklist (continued)
+	// Polarity test: the pole of every tooth
 	// Test record
 	// Test record (continued)
 	// true

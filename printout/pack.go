@@ -40,8 +40,8 @@ type Reading struct {
 var ErrNoPlan = errors.New("printout: plan has no layout")
 
 // Build lays out the whole shop pack of a plan: slot map, developed layout,
-// connections, design figures, cut list and materials, winding checklist and
-// test record, in that order. It reads the plan only and does no I/O.
+// connections, design figures, cut list and materials, winding checklist,
+// polarity sheet and test record, in that order. It reads the plan only and does no I/O.
 func Build(p *plan.Plan, o Options) (*Pack, error) {
 	if p == nil || p.Layout == nil || len(p.Layout.Coils) == 0 {
 		return nil, ErrNoPlan
@@ -71,6 +71,7 @@ func Build(p *plan.Plan, o Options) (*Pack, error) {
 	b.machine()
 	b.cutList()
 	b.checklist()
+	b.polarity()
 	b.testRecord()
 	b.frames()
 	name := p.Name

@@ -59,7 +59,7 @@ func textsOf(pages []*Page) []string {
 }
 
 func TestBuildPageOrderAndBounds(t *testing.T) {
-	order := []PageKind{SlotMapPage, DevelopedPage, ConnectionPage, FiguresPage, CutListPage, ChecklistPage, TestRecordPage}
+	order := []PageKind{SlotMapPage, DevelopedPage, ConnectionPage, FiguresPage, CutListPage, ChecklistPage, PolarityPage, TestRecordPage}
 	for i, fx := range fixtures {
 		t.Run(fx.name, func(t *testing.T) {
 			pk := buildFixture(t, i)

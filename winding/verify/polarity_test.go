@@ -296,3 +296,23 @@ func FuzzParsePolarity(f *testing.F) {
 		}
 	})
 }
+
+// ValuesOf and ReadingsOf carry the poles through the record's keys and back.
+func TestPolarityValuesRoundTrip(t *testing.T) {
+	p := planWithPaths(t, 1)
+	var pt plan.Test
+	for _, x := range p.Tests {
+		if x.Name == plan.TestPolarity {
+			pt = x
+		}
+	}
+	obs := observed(p, 7)
+	v := verify.ValuesOf(p, pt, verify.Readings{Polarity: obs})
+	if len(v) != 24 || v["tooth_1"] != -1 || v["tooth_7"] != -1 {
+		t.Fatalf("ValuesOf(polarity) = %v; want 24 teeth, tooth_1 -1, tooth_7 -1 (reversed)", v)
+	}
+	r, ok := verify.ReadingsOf(p, pt, v)
+	if !ok || !reflect.DeepEqual(r.Polarity, obs) {
+		t.Errorf("ReadingsOf(ValuesOf(obs)) = %v, %v; want the same poles", r.Polarity, ok)
+	}
+}

@@ -94,6 +94,18 @@ func ReadingsOf(p *plan.Plan, t plan.Test, v map[string]float64) (Readings, bool
 		return Readings{TempC: ambient, Withstand: &Withstand{Volts: v[plan.KeyVolts], Passed: held}}, true
 	case plan.TestBackEMF:
 		return Readings{TempC: ambient, EMF: &BackEMF{UV: at(0), VW: at(1), WU: at(2), RPM: v[plan.KeyRPM]}}, true
+	case plan.TestPolarity:
+		// Poles under the test's keys (+1 N, -1 S); unsure (0) and teeth
+		// not read are left out.
+		var r Readings
+		if p != nil {
+			for _, tp := range p.Polarity {
+				if pole, ok := plan.PoleFromValue(v[plan.PoleKey(tp.Tooth)]); ok {
+					r.Polarity = append(r.Polarity, PoleReading{Phase: tp.Phase, Tooth: tp.Tooth, Pole: pole})
+				}
+			}
+		}
+		return r, len(r.Polarity) > 0
 	}
 	return Readings{}, false
 }
