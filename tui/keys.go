@@ -57,7 +57,7 @@ func newKeyMaps() *keyMaps {
 		guide: guideKeys{
 			Count:    key.NewBinding(key.WithKeys(" "), key.WithHelp("space", "+1 turn")),
 			Uncount:  key.NewBinding(key.WithKeys("backspace", "-"), key.WithHelp("bksp", "-1 turn")),
-			Digits:   key.NewBinding(key.WithKeys("0", "1", "2", "3", "4", "5", "6", "7", "8", "9"), key.WithHelp("0-9", "type the count")),
+			Digits:   key.NewBinding(key.WithKeys("0", "1", "2", "3", "4", "5", "6", "7", "8", "9"), key.WithHelp("0-9", "type a count")),
 			Done:     key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "step done")),
 			Note:     key.NewBinding(key.WithKeys("n"), key.WithHelp("n", "note")),
 			Undo:     key.NewBinding(key.WithKeys("u"), key.WithHelp("u", "undo last step")),

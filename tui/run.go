@@ -6,6 +6,7 @@ import (
 	"io"
 	"os"
 	"os/signal"
+	"strings"
 	"sync"
 	"syscall"
 	"time"
@@ -70,7 +71,7 @@ func Run(p *plan.Plan, o RunOptions) error {
 		Plan:     p,
 		Recorder: rec,
 		History:  events,
-		Notice:   TornNotice(torn),
+		Notice:   strings.TrimSpace(strings.Join(append(store.Notices(), TornNotice(torn)), " ")),
 		Where:    o.RecordPath,
 	})
 	popts := []tea.ProgramOption{tea.WithoutSignalHandler()}

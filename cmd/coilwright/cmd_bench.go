@@ -24,8 +24,10 @@ func newBenchCmd() *cobra.Command {
 		Long: `bench opens a full-screen guide that leads through every step of the job:
 preparation, each coil with its turns and winding direction, jumpers, phase
 separators, terminals, joints and tests. Count turns with space (backspace
-takes one off, digits type the count; the terminal bell rings when the count
-reaches the plan), enter completes a step, ? shows every key, q quits.
+takes one off; digits type a new count that enter sets and esc drops; the
+terminal bell rings when the count reaches the plan), enter completes a step
+(a count off the plan is recorded only with y), ? shows every key, q quits.
+SIGTERM or SIGHUP saves and exits with status 1.
 
 Every turn counted and every step done is written at once to the progress
 record, so the guide opens where the work stopped, even after a crash:

@@ -253,3 +253,14 @@ func TestStoreLockNoTakeOverRace(t *testing.T) {
 		t.Fatalf("%d holders of one record at once; want at most 1", most.Load())
 	}
 }
+
+// Taking a lock nobody held says whose it was.
+func TestStaleLockTakenIsSaid(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	os.WriteFile(journal.LockPathFor(path), []byte(`{"holder":"bench","pid":1,"host":"bench-pc","since":"2025-03-08T09:00:00Z"}`), 0o644)
+	s := openT(t, path)
+	n := s.Notices()
+	if len(n) != 1 || !strings.Contains(n[0], `"bench" (pid 1 on bench-pc`) || !strings.Contains(n[0], "taken") {
+		t.Errorf("Notices() after taking a stale lock = %q; want its holder named", n)
+	}
+}

@@ -145,6 +145,10 @@ func Open(path, holder string) (*Store, []Event, *TornTail, error) {
 	if fi, err := os.Stat(path); err == nil {
 		s.ident = fi
 	}
+	if old := lk.stale; old != nil {
+		s.notices = append(s.notices, fmt.Sprintf("The record's lock named %q (pid %d on %s since %s), which no longer held it: that program stopped without releasing it, so the lock was taken.",
+			old.Holder, old.PID, old.Host, old.Since.Format(time.RFC3339)))
+	}
 	switch n := len(data); {
 	case torn != nil:
 		s.size = torn.Offset // kept aside and cut off by the first write

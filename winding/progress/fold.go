@@ -34,6 +34,9 @@ func Fold(p *plan.Plan, events []journal.Event) *State {
 			if changed && i >= 0 && e.Step > 0 && e.Step != i+1 {
 				s.Moved++
 			}
+			if changed {
+				s.kept[e.Kind]++
+			}
 		}
 		if reason != "" {
 			s.Dropped = append(s.Dropped, Dropped{Line: e.Line, Kind: e.Kind, Key: e.Key, Tooth: e.Tooth, Reason: reason})
@@ -118,9 +121,12 @@ func (s *State) Summary() []string {
 	if len(s.Changes) > 0 {
 		out = append(out, "The job changed since this progress was recorded: "+strings.Join(s.Changes, "; ")+".")
 		if off := s.doneOffPlan(); off > 0 {
-			out = append(out, fmt.Sprintf("%d wound %s keep the turns recorded for them; the plan now asks %d per coil.",
-				off, plural(off, "coil", "coils"), s.plan.TurnsPerCoil))
+			out = append(out, fmt.Sprintf("%d wound %s the turns recorded; the plan now asks %d per coil.",
+				off, plural(off, "coil keeps", "coils keep"), s.plan.TurnsPerCoil))
 		}
+	}
+	if len(s.Changes) > 0 || len(s.Dropped) > 0 {
+		out = append(out, "Entries that still fit their steps were kept: "+s.keptWords()+".")
 	}
 	if s.Moved > 0 {
 		out = append(out, fmt.Sprintf("%d %s matched to their steps by what they are (coil by tooth, phase and sense), now under other step numbers.",
@@ -141,6 +147,29 @@ func (s *State) Summary() []string {
 		out = append(out, fmt.Sprintf("%d other %s left out (%s): %s.", len(other), plural(len(other), "entry", "entries"), lines(other), other[0].Reason))
 	}
 	return out
+}
+
+// keptWords says how many entries of each kind were kept.
+func (s *State) keptWords() string {
+	var parts []string
+	for _, k := range []struct {
+		kind      journal.Kind
+		one, many string
+	}{
+		{journal.Done, "step done", "steps done"},
+		{journal.Undo, "undo", "undos"},
+		{journal.Turns, "turn count", "turn counts"},
+		{journal.Note, "note", "notes"},
+		{journal.Reading, "reading", "readings"},
+	} {
+		if n := s.kept[k.kind]; n > 0 {
+			parts = append(parts, fmt.Sprintf("%d %s", n, plural(n, k.one, k.many)))
+		}
+	}
+	if len(parts) == 0 {
+		return "none"
+	}
+	return strings.Join(parts, ", ")
 }
 
 // doneOffPlan counts the wound coils whose turns differ from the plan's.

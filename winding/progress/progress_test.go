@@ -104,7 +104,7 @@ func TestFoldAfterVoltsChanged(t *testing.T) {
 	s := progress.Fold(is, ev)
 	sum := strings.Join(s.Summary(), " ")
 	wantWords := "turns per coil changed from " + itoa(was.TurnsPerCoil) + " to " + itoa(is.TurnsPerCoil)
-	if !strings.Contains(sum, wantWords) || !strings.Contains(sum, "1 wound coil keep") {
+	if !strings.Contains(sum, wantWords) || !strings.Contains(sum, "1 wound coil keeps") {
 		t.Errorf("Summary() = %q; want %q and the wound coil named", sum, wantWords)
 	}
 	if !s.Steps[coil-1].Done || s.Steps[coil-1].Turns != was.TurnsPerCoil || !s.Steps[0].Done {

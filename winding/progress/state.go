@@ -72,12 +72,13 @@ type State struct {
 	order []int // done steps, most recent last
 	// fingerprint is the one in force while folding (the last plan event).
 	fingerprint map[string]string
-	same        bool // the fingerprint in force is the plan's own
+	same        bool                 // the fingerprint in force is the plan's own
+	kept        map[journal.Kind]int // entries folded in, by kind
 }
 
 // New returns the state of a plan with nothing done.
 func New(p *plan.Plan) *State {
-	s := &State{Tests: map[string]Reading{}, plan: p, keys: Keys(p), index: map[string]int{}}
+	s := &State{Tests: map[string]Reading{}, plan: p, keys: Keys(p), index: map[string]int{}, kept: map[journal.Kind]int{}}
 	s.Steps = make([]Step, len(s.keys))
 	for i, k := range s.keys {
 		s.index[k] = i
