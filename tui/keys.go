@@ -99,7 +99,7 @@ func (k *keyMaps) fullHelp() [][]key.Binding {
 		{k.guide.Note, k.guide.Undo, k.global.Overview, k.global.Help},
 		{k.guide.Prev, k.guide.Next, k.guide.Back, withHelp(k.scroll.Pick, "on all steps: look at it"), k.guide.More},
 		{k.typing.Accept, k.typing.Next, k.typing.Cancel},
-		{withHelp(k.polarity.North, "polarity: north"), withHelp(k.polarity.South, "polarity: south"), k.polarity.Unsure, k.polarity.Reread},
+		{withHelp(k.polarity.North, "polarity: north"), withHelp(k.polarity.South, "polarity: south"), withHelp(k.polarity.Unsure, "polarity: unsure"), k.polarity.Reread},
 		{k.global.Quit, k.global.ForceQuit, k.scroll.Up, k.scroll.Down, k.guide.Bell},
 	}
 }

@@ -31,8 +31,8 @@ func newPolarityKeys() polarityKeys {
 		North:  key.NewBinding(key.WithKeys("n", "N"), key.WithHelp("n", "north")),
 		South:  key.NewBinding(key.WithKeys("s", "S"), key.WithHelp("s", "south")),
 		Unsure: key.NewBinding(key.WithKeys("x", "X"), key.WithHelp("x", "unsure")),
-		Reread: key.NewBinding(key.WithKeys("backspace"), key.WithHelp("bksp", "read the last tooth again")),
-		Done:   key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "polarity done")),
+		Reread: key.NewBinding(key.WithKeys("backspace"), key.WithHelp("bksp", "re-read last")),
+		Done:   key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "step done")),
 	}
 }
 
@@ -306,5 +306,5 @@ func fmtWatts(w float64) string {
 // polarityShortHelp is the help line of a polarity step.
 func (g guideModel) polarityShortHelp() []key.Binding {
 	k := g.c.keys.polarity
-	return []key.Binding{k.North, k.South, k.Unsure, k.Reread, k.Done}
+	return []key.Binding{k.North, k.South, k.Unsure, k.Done, k.Reread}
 }

@@ -150,3 +150,39 @@ func TestGoldenPolarity(t *testing.T) {
 	keys(t, m, poleKeys(polarityTeeth(m.c.plan, s), 7)[:4]...)
 	golden(t, "polarity_100x30.txt", plain(m)+"\n")
 }
+
+// The whole-stator step before the star point walks every phase in turn and
+// says when to move the clips; the help line keeps the pole keys and enter at
+// 80 columns.
+func TestPolarityWholeStator(t *testing.T) {
+	p, err := plan.Build(job.Demo())
+	if err != nil {
+		t.Fatal(err)
+	}
+	whole := func(s plan.Step) bool { return isPolarity(s) && len(s.Phases) > 1 }
+	m := New(Options{Plan: p, Recorder: &memRecorder{}, History: stamped(p, doneUpTo(p, whole)), Now: fixedNow})
+	drive(t, m, tea.WindowSizeMsg{Width: 80, Height: 24})
+	s := curStep(m)
+	if !whole(s) {
+		t.Fatalf("current step %q; want the polarity test of every phase", s.Title)
+	}
+	teeth := polarityTeeth(p, s)
+	if len(teeth) != 24 {
+		t.Fatalf("whole-stator step walks %d teeth; want 24", len(teeth))
+	}
+	v := plain(m)
+	for _, want := range []string{"clips on U1 (+) and U2 (-)", "n north", "enter step done"} {
+		if !strings.Contains(v, want) {
+			t.Errorf("whole-stator step lacks %q:\n%s", want, v)
+		}
+	}
+	keys(t, m, poleKeys(teeth[:8])...)
+	if v := plain(m); !strings.Contains(v, "clips on V1 (+) and V2 (-)") || !strings.Contains(v, "phase V") {
+		t.Errorf("after phase U the step does not move the clips to V:\n%s", v)
+	}
+	keys(t, m, poleKeys(teeth[8:])...)
+	keys(t, m, "enter")
+	if r := m.c.prog.Steps[s.Index-1]; !r.Done || r.Reading == nil || r.Reading.Verdict != "pass" || len(r.Reading.Values) != 24 {
+		t.Errorf("whole-stator step after 24 right poles: %+v; want done, pass, 24 values", r)
+	}
+}

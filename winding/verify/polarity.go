@@ -344,7 +344,7 @@ func complement(all []plan.ToothPole, rev []int) []int {
 // tooth, pole seen and, where it differs, the pole of the plan in brackets.
 func (pr *PolarityResult) text() string {
 	var b strings.Builder
-	b.WriteString("\nPolarity    pole seen at each tooth with DC into X1 (plan in brackets where it differs)\n")
+	b.WriteString("Polarity    pole seen at each tooth with DC into X1 (plan in brackets where it differs)\n")
 	for _, ph := range pr.Phases {
 		parts := make([]string, len(ph.Teeth))
 		for i, t := range ph.Teeth {

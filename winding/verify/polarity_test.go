@@ -316,3 +316,42 @@ func TestPolarityValuesRoundTrip(t *testing.T) {
 		t.Errorf("ReadingsOf(ValuesOf(obs)) = %v, %v; want the same poles", r.Polarity, ok)
 	}
 }
+
+// A five-phase winding (20 slots, 18 poles) is judged phase by phase like a
+// three-phase one: the polarity check needs no three-phase resistance model.
+func TestPolarityFivePhases(t *testing.T) {
+	src := string(job.DemoTOML())
+	for _, r := range [][2]string{
+		{"slots = 24", "slots = 20"}, {"poles = 28", "poles = 18"}, {"phases = 3", "phases = 5"},
+		{"target = \"dc_bus\"\nvolts = 26\nspeed_rpm = 300\nbridge_drop_v = 1.6", "target = \"phase_emf\"\nvolts = 12\nspeed_rpm = 300"},
+	} {
+		if !strings.Contains(src, r[0]) {
+			t.Fatalf("demo job has no %q to change", r[0])
+		}
+		src = strings.Replace(src, r[0], r[1], 1)
+	}
+	j, err := job.Parse([]byte(src), "five.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := plan.Build(j)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(p.Layout.PhaseNames) != 5 || len(p.Polarity) != 20 {
+		t.Fatalf("five-phase plan: %d phases, %d poles; want 5 and 20", len(p.Layout.PhaseNames), len(p.Polarity))
+	}
+	rep, err := verify.Check(p, verify.Readings{Polarity: observed(p)})
+	if err != nil || rep.Verdict != verify.Pass || len(rep.Findings) != 5 {
+		t.Fatalf("five phases, every pole right: %v, %v; want pass with five findings", rep, err)
+	}
+	for _, tp := range p.Polarity {
+		rep, err := verify.Check(p, verify.Readings{Polarity: observed(p, tp.Tooth)})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if teeth, phases := named(rep); !reflect.DeepEqual(teeth, []int{tp.Tooth}) || !reflect.DeepEqual(phases, []string{tp.Phase}) {
+			t.Errorf("five phases, tooth %d reversed: named %v in %v; want tooth %d of %s", tp.Tooth, teeth, phases, tp.Tooth, tp.Phase)
+		}
+	}
+}

@@ -85,6 +85,9 @@ func (r *Report) Text() string {
 		b.WriteString("\n")
 	}
 	if pr := r.Polarity; pr != nil {
+		if b.Len() > 0 {
+			b.WriteString("\n")
+		}
 		b.WriteString(pr.text())
 	}
 	b.WriteString("\nFindings\n")
