@@ -34,7 +34,7 @@ func (b *builder) polarity() {
 			test = t
 		}
 	}
-	seen := b.o.Readings[plan.TestPolarity].Values
+	seen := b.polaritySeen()
 	f := b.startFlow(PolarityPage, "Polarity test: the pole of every tooth")
 	c := f.c
 	x0 := float64(marginMM)
@@ -128,4 +128,24 @@ func capitalise(s string) string {
 		r[0] -= 'a' - 'A'
 	}
 	return string(r)
+}
+
+// polaritySeen is the pole read at each tooth, from every polarity step of
+// the record in step order (a later reading of a tooth stands), or else from
+// the readings given for the test.
+func (b *builder) polaritySeen() map[string]float64 {
+	st := b.o.Progress
+	if st == nil {
+		return b.o.Readings[plan.TestPolarity].Values
+	}
+	out := map[string]float64{}
+	for i, s := range b.p.Steps {
+		if s.Kind != plan.StepTest || s.Test != plan.TestPolarity || i >= len(st.Steps) || st.Steps[i].Reading == nil {
+			continue
+		}
+		for k, v := range st.Steps[i].Reading.Values {
+			out[k] = v
+		}
+	}
+	return out
 }

@@ -5,7 +5,9 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/winding/journal"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // The polarity sheet has one cell per wound tooth with the pole of the plan,
@@ -49,5 +51,36 @@ func TestPolaritySheet(t *testing.T) {
 	}
 	if ticks != 1 {
 		t.Errorf("polarity sheet: %d ticks; want 1 (tooth 1 read as planned)", ticks)
+	}
+}
+
+// With a progress record, the sheet ticks the teeth read on every polarity
+// step, not only the latest step's.
+func TestPolaritySheetFromRecord(t *testing.T) {
+	p := demoPlan(t)
+	var events []journal.Event
+	events = append(events, progress.FingerprintEvent(p))
+	for _, s := range p.Steps {
+		if s.Test != plan.TestPolarity || len(s.Phases) != 1 || s.Phases[0] == "W" {
+			continue
+		}
+		v := map[string]float64{}
+		for _, tp := range p.PolesOf(s.Phases[0]) {
+			v[plan.PoleKey(tp.Tooth)] = tp.Pole.Value()
+		}
+		events = append(events, progress.Stamp(p, journal.Event{Kind: journal.Reading, Step: s.Index, Readings: v, Verdict: "pass"}))
+	}
+	pk, err := Build(p, Options{Progress: progress.Fold(p, events)})
+	if err != nil {
+		t.Fatal(err)
+	}
+	ticks := 0
+	for _, s := range pagesOf(pk, PolarityPage)[0].Shapes {
+		if pl, ok := s.(*Poly); ok && !pl.Closed && len(pl.Points) == 3 {
+			ticks++
+		}
+	}
+	if ticks != 16 {
+		t.Errorf("polarity sheet from a record of phases U and V: %d ticks; want 16", ticks)
 	}
 }
