@@ -104,6 +104,8 @@ func (g guideModel) polarityKey(msg tea.KeyMsg, s plan.Step) (guideModel, tea.Cm
 	next := polarityNext(v)
 	var pole float64
 	switch {
+	case next >= len(teeth) && key.Matches(msg, g.c.keys.guide.Note):
+		return g, nil, false // every tooth is read: n takes a note, as on other steps
 	case key.Matches(msg, k.North):
 		pole = plan.North.Value()
 	case key.Matches(msg, k.South):
@@ -132,7 +134,7 @@ func (g guideModel) polarityKey(msg tea.KeyMsg, s plan.Step) (guideModel, tea.Cm
 		return g, nil, false
 	}
 	if next >= len(teeth) {
-		g.flash = "every tooth is read: enter records the step, bksp reads the last again"
+		g.flash = "every tooth is read: enter records the step, n adds a note, bksp reads the last again"
 		return g, nil, true
 	}
 	v[next] = pole
@@ -247,7 +249,7 @@ func (g guideModel) polarityView(b *lines, s plan.Step) {
 	if next == len(teeth) && !looking {
 		verdict := polarityVerdict(c.plan, s, v)
 		g.verdictView(b, &verdict)
-		b.text("enter records the step; bksp reads the last tooth again.", st.statusNow.Render)
+		b.text("enter records the step; n adds a note; bksp reads the last tooth again.", st.statusNow.Render)
 	}
 	b.text(polarityCautionShort, st.caution.Render)
 	b.raw("")
@@ -306,5 +308,10 @@ func fmtWatts(w float64) string {
 // polarityShortHelp is the help line of a polarity step.
 func (g guideModel) polarityShortHelp() []key.Binding {
 	k := g.c.keys.polarity
+	s, _ := g.c.step(g.c.prog.Current())
+	v := g.c.polarityValues(s)
+	if polarityNext(v) >= len(v) { // every tooth read: n takes a note
+		return []key.Binding{k.Done, k.Reread, g.c.keys.guide.Note}
+	}
 	return []key.Binding{k.North, k.South, k.Unsure, k.Done, k.Reread}
 }

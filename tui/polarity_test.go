@@ -81,6 +81,13 @@ func TestPolarityWalkAllRight(t *testing.T) {
 	if v := plain(m); !strings.Contains(v, "verdict: PASS") {
 		t.Errorf("after every tooth the view lacks the verdict:\n%s", v)
 	}
+	if v := plain(m); !strings.Contains(v, "n note") {
+		t.Errorf("every tooth read: the help line does not offer a note:\n%s", v)
+	}
+	keys(t, m, "n", "c", "l", "e", "a", "r", "enter")
+	if got := m.c.prog.Steps[s.Index-1].Note; got != "clear" {
+		t.Errorf("note on the polarity step = %q; want \"clear\"", got)
+	}
 	keys(t, m, "enter")
 	if m.c.prog.Current() != s.Index {
 		t.Errorf("enter after every tooth: current step %d; want the step after the polarity step (%d)", m.c.prog.Current()+1, s.Index+1)
