@@ -166,7 +166,7 @@ func (g guideModel) resize() guideModel {
 	w := max(10, g.c.width-16)
 	g.note.Width = w
 	for i := range g.fields {
-		g.fields[i].Width = 12
+		g.fields[i].Width = fieldWidth(g.fields[i])
 	}
 	return g
 }
@@ -330,7 +330,12 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 		return g, nil
 	}
 	if s.Kind == plan.StepTest {
-		if key.Matches(msg, k.guide.Readings) {
+		switch {
+		case g.c.tests[s.Test].Optional && key.Matches(msg, k.guide.Skip):
+			return g.skip(s)
+		case key.Matches(msg, k.guide.Readings) && s.Test == plan.TestBalance:
+			return g.balanceFromResistance(s)
+		case key.Matches(msg, k.guide.Readings):
 			return g.startReadings(s)
 		}
 		return g, nil
@@ -419,9 +424,13 @@ func (g guideModel) startReadings(s plan.Step) (guideModel, tea.Cmd) {
 	g.fields = make([]textinput.Model, len(g.labels))
 	for i, f := range g.labels {
 		g.fields[i] = newTextInput(fmt.Sprintf("%-8s ", f.label), 16)
-		g.fields[i].Width = 12
 		g.fields[i].Placeholder = f.unit
-		g.fields[i].SetValue(f.def)
+		if f.def != "" {
+			// A preset stands as the placeholder, so what is typed replaces
+			// it rather than running on after it; an empty field keeps it.
+			g.fields[i].Placeholder = f.def + " " + f.unit
+		}
+		g.fields[i].Width = fieldWidth(g.fields[i])
 	}
 	if r := g.c.prog.Steps[s.Index-1].Reading; r != nil {
 		vals, ok := valuesOf(g.labels, r.Values)
@@ -493,6 +502,9 @@ func parseReadings(fs []textinput.Model, labels []field) ([]float64, int, string
 	out := make([]float64, 0, len(fs))
 	for i, f := range fs {
 		txt := strings.TrimSpace(strings.ReplaceAll(f.Value(), ",", "."))
+		if txt == "" && i < len(labels) && labels[i].def != "" {
+			txt = labels[i].def // an empty field keeps its preset
+		}
 		v, err := strconv.ParseFloat(txt, 64)
 		name := "reading"
 		if i < len(labels) {
@@ -546,6 +558,10 @@ func (g guideModel) shortHelp() []key.Binding {
 		out = append(out, k.guide.Count, withHelp(k.guide.Done, "coil done"), k.guide.Uncount, k.guide.Digits)
 	case isPolarity(s):
 		out = append(out, g.polarityShortHelp()...)
+	case s.Kind == plan.StepTest && s.Test == plan.TestBalance:
+		out = append(out, withHelp(k.guide.Readings, "judge the resistance readings"))
+	case s.Kind == plan.StepTest && g.c.tests[s.Test].Optional:
+		out = append(out, k.guide.Readings, k.guide.Skip)
 	case s.Kind == plan.StepTest:
 		out = append(out, k.guide.Readings)
 	default:

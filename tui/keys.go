@@ -12,7 +12,7 @@ type globalKeys struct {
 // the help line; Back ends the look.
 type guideKeys struct {
 	Count, Uncount, Digits, Done, Note, Undo, Readings key.Binding
-	Prev, Next, Look, Back, More, Bell                 key.Binding
+	Prev, Next, Look, Back, More, Bell, Skip           key.Binding
 }
 
 // typingKeys work while a note or a reading is being typed.
@@ -68,6 +68,7 @@ func newKeyMaps() *keyMaps {
 			Back:     key.NewBinding(key.WithKeys("esc", "home", "enter"), key.WithHelp("esc/home", "back to the step in hand")),
 			More:     key.NewBinding(key.WithKeys("m"), key.WithHelp("m", "more of the panel")),
 			Bell:     key.NewBinding(key.WithKeys("b"), key.WithHelp("b", "bell on/off")),
+			Skip:     key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "skip this optional test")),
 		},
 		typing: typingKeys{
 			Accept: key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "accept")),
@@ -100,6 +101,6 @@ func (k *keyMaps) fullHelp() [][]key.Binding {
 		{k.guide.Prev, k.guide.Next, k.guide.Back, withHelp(k.scroll.Pick, "on all steps: look at it"), k.guide.More},
 		{k.typing.Accept, k.typing.Next, k.typing.Cancel},
 		{withHelp(k.polarity.North, "polarity: north"), withHelp(k.polarity.South, "polarity: south"), withHelp(k.polarity.Unsure, "polarity: unsure"), k.polarity.Reread},
-		{k.global.Quit, k.global.ForceQuit, k.scroll.Up, k.scroll.Down, k.guide.Bell},
+		{k.global.Quit, k.global.ForceQuit, k.scroll.Up, k.scroll.Down, k.guide.Bell, k.guide.Skip},
 	}
 }

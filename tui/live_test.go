@@ -51,7 +51,7 @@ func TestEveryStepShowsItsLiveParts(t *testing.T) {
 				if isPolarity(s) {
 					continue // its own keys (n is north there): polarity_test.go
 				}
-				if s.Kind == plan.StepTest {
+				if s.Kind == plan.StepTest && s.Test != plan.TestBalance {
 					keys(t, m, "enter")
 					var want []string
 					for _, f := range m.guide.labels {
@@ -86,6 +86,8 @@ func liveWords(s plan.Step) []string {
 		return []string{"expect", "read:"}
 	case s.Jumper != nil:
 		return []string{fmt.Sprintf("leaves slot %d", s.Jumper.LeavesSlot), fmt.Sprintf("enters slot %d", s.Jumper.EntersSlot)}
+	case s.Kind == plan.StepTest && s.Test == plan.TestBalance:
+		return []string{"Press enter to judge the balance"}
 	case s.Kind == plan.StepTest:
 		return []string{"Press enter to type the readings"}
 	}

@@ -191,6 +191,8 @@ func (g guideModel) lookBanner(s plan.Step) string {
 		state = fmt.Sprintf("done, %d turns counted = plan", p[i].Turns)
 	case p[i].Done && s.Coil != nil:
 		state = fmt.Sprintf("done, %d turns counted, plan %d", p[i].Turns, s.Coil.Turns)
+	case p[i].Done && p[i].Skipped:
+		state = "skipped"
 	case p[i].Done && p[i].Reading != nil:
 		state = "done, " + strings.ToUpper(p[i].Reading.Verdict)
 	case p[i].Done:
@@ -452,8 +454,8 @@ func (g guideModel) testView(pp *panelParts, s plan.Step) {
 	switch g.mode {
 	case modeReadings:
 		pp.add(partLive, func(b *lines) {
-			for _, f := range g.fields {
-				b.raw(f.View())
+			for i := range g.fields {
+				b.raw(g.fieldLine(t, i))
 			}
 			if g.inErr != "" {
 				b.text(g.inErr, c.st.fail.Render)
@@ -461,9 +463,9 @@ func (g guideModel) testView(pp *panelParts, s plan.Step) {
 		})
 	case modeVerdict:
 		pp.add(partLive, func(b *lines) {
-			for i, f := range g.fields {
-				if i < len(g.labels) {
-					b.kv(g.labels[i].label, f.Value()+" "+g.labels[i].unit)
+			for i := range g.fields {
+				if i < len(g.labels) && i < len(g.values) {
+					b.kv(g.labels[i].label, valueText(t, i, g.values[i]))
 				}
 			}
 			g.verdictView(b, g.verdict)
@@ -471,10 +473,27 @@ func (g guideModel) testView(pp *panelParts, s plan.Step) {
 		})
 	default:
 		pp.add(partLive, func(b *lines) {
-			if r := c.prog.Steps[s.Index-1].Reading; r != nil {
+			if s.Test != plan.TestBalance {
+				for _, e := range expectLines(t) {
+					b.text(e, c.st.value.Render)
+				}
+			}
+			st := c.prog.Steps[s.Index-1]
+			if r := st.Reading; r != nil {
 				b.kv("last", fmt.Sprintf("%s -> %s", c.readingText(s, r), strings.ToUpper(r.Verdict)))
 			}
-			if _, looking := g.lookedAt(); !looking {
+			if st.Done && st.Skipped {
+				b.kv("last", "skipped (an optional test left out)")
+			}
+			if _, looking := g.lookedAt(); looking {
+				return
+			}
+			switch {
+			case s.Test == plan.TestBalance:
+				b.text("Press enter to judge the balance from the resistance readings already recorded.", c.st.statusNow.Render)
+			case t.Optional:
+				b.text("Press enter to type the readings, or s to skip this optional test.", c.st.statusNow.Render)
+			default:
 				b.text("Press enter to type the readings.", c.st.statusNow.Render)
 			}
 		})
@@ -527,21 +546,8 @@ func (g guideModel) verdictView(b *lines, v *Verdict) {
 	}
 }
 
-// limitText says a test's limit in words.
-func limitText(t plan.Test) string {
-	switch t.Compare {
-	case "max":
-		return fmt.Sprintf("at most %s %s", fmtNum(t.Limit), t.Unit)
-	case "min":
-		return fmt.Sprintf("at least %s %s", fmtNum(t.Limit), t.Unit)
-	case "band":
-		return fmt.Sprintf("within +/-%s %% of the expected value", fmtNum(t.Limit))
-	}
-	if t.Limit != 0 {
-		return fmt.Sprintf("%s %s", fmtNum(t.Limit), t.Unit)
-	}
-	return ""
-}
+// limitText says a test's limit in words (plan.LimitText, the one wording).
+func limitText(t plan.Test) string { return plan.LimitText(t) }
 
 // doneView is the panel once every step is done.
 func (g guideModel) doneView(b *lines) {

@@ -59,7 +59,9 @@ type Event struct {
 	Test     string             `json:"test,omitempty"`     // the plan test's name
 	Readings map[string]float64 `json:"readings,omitempty"` // named values as measured (ohm, °C, MΩ, V, rpm)
 	Verdict  string             `json:"verdict,omitempty"`  // "pass", "warn" or "fail"
-	Findings []string           `json:"findings,omitempty"` // the findings in words
+	// Skipped marks a Done of an optional test left out on purpose.
+	Skipped  bool     `json:"skipped,omitempty"`
+	Findings []string `json:"findings,omitempty"` // the findings in words
 
 	// Plan events: the parts of the plan's fingerprint, by name.
 	Plan map[string]string `json:"plan,omitempty"`

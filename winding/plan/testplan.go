@@ -155,7 +155,7 @@ func (b *builder) tests() error {
 		What:  fmt.Sprintf("Optional, with the rotor fitted: spin the rotor at a steady known speed with the leads open and read the line voltages %s; they should agree.", ReadingLabels(emfReadings(names)[:len(names)])),
 		Limit: BackEMFBalancePercent, Unit: UnitPercent, Compare: AtMost, Readings: emfReadings(names),
 		Source:  "common practice; expected value from E = √2·π·f·N·k_w·Φ (textbook, e.g. Pyrhönen et al.)",
-		Caution: cautionSpin}
+		Caution: cautionSpin, Optional: true}
 	if p.EMF != nil {
 		bt.Note = fmt.Sprintf("expected %.4f V rms line per rpm (%.4f V phase per rpm)", p.EMF.VoltsPerRPMPhase*b.lineFactor, p.EMF.VoltsPerRPMPhase)
 	}

@@ -258,4 +258,6 @@ type Test struct {
 	Source     string `json:"source"`
 	Caution    string `json:"caution,omitempty"`
 	Note       string `json:"note,omitempty"`
+	// Optional tests may be left out; the guide records them as skipped.
+	Optional bool `json:"optional,omitempty"`
 }

@@ -27,6 +27,8 @@ type Step struct {
 	Note    string // the latest note; "" for none
 	NoteAt  time.Time
 	Reading *Reading // the latest readings of a test step
+	// Skipped: an optional test done by leaving it out (journal.Event.Skipped).
+	Skipped bool
 }
 
 // Note is a note of the record that belongs to no step.
@@ -215,6 +217,7 @@ func (s *State) apply(i int, e journal.Event) (bool, string) {
 			s.unorder(i)
 		}
 		s.Steps[i].Done, s.Steps[i].At = true, e.Time
+		s.Steps[i].Skipped = e.Skipped
 		if st.Coil != nil && e.Turns > 0 {
 			s.Steps[i].Turns = e.Turns
 		}
@@ -226,7 +229,7 @@ func (s *State) apply(i int, e journal.Event) (bool, string) {
 		if i < 0 || i >= len(s.Steps) || !s.Steps[i].Done {
 			return false, ""
 		}
-		s.Steps[i].Done, s.Steps[i].At = false, time.Time{}
+		s.Steps[i].Done, s.Steps[i].At, s.Steps[i].Skipped = false, time.Time{}, false
 		s.unorder(i) // an undone coil keeps its count, to go on from
 	case journal.Note:
 		if !hasStep {
