@@ -159,7 +159,7 @@ func (g guideModel) panelParts(cw, inner, lv int) *panelParts {
 	case s.Kind == plan.StepCoil && s.Coil != nil:
 		g.coilView(pp, s, inner, lv)
 	case isPolarity(s):
-		pp.add(partLive, func(b *lines) { g.polarityView(b, s) })
+		g.polarityView(pp, s)
 	case s.Kind == plan.StepTest:
 		g.testView(pp, s)
 	default:

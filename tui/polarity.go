@@ -215,49 +215,55 @@ func polarityVerdict(p *plan.Plan, s plan.Step, v []float64) Verdict {
 // polarityView is the panel of a polarity step: the current, the cautions,
 // the tooth to read with the pole it must show, every tooth of the step with
 // what was seen, and what to do about a tooth that shows the other pole.
-func (g guideModel) polarityView(b *lines, s plan.Step) {
+func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 	c := g.c
 	st := c.st
 	t := c.tests[s.Test]
 	teeth := polarityTeeth(c.plan, s)
 	v := c.polarityValues(s)
 	next := polarityNext(v)
-	b.titled("polarity test", g.stepOf(s))
 	_, looking := g.lookedAt()
-	// The live part first: the tooth in hand, what each tooth showed, a
-	// tooth that showed the other pole, the verdict; the prose after it.
-	if next < len(teeth) && !looking {
-		tp := teeth[next]
-		where := "points AT the face"
-		if tp.Pole == plan.North {
-			where = "points AWAY from the face"
+	// Live: the tooth in hand, what each tooth showed, a tooth that showed
+	// the other pole, the verdict, and the caution in short.
+	pp.add(partLive, func(b *lines) {
+		b.titled("polarity test", g.stepOf(s))
+		if next < len(teeth) && !looking {
+			tp := teeth[next]
+			where := "points AT the face"
+			if tp.Pole == plan.North {
+				where = "points AWAY from the face"
+			}
+			b.raw(fmt.Sprintf("tooth %s  phase %s  expect %s  (%d of %d)",
+				st.strong.Render(strconv.Itoa(tp.Tooth)), st.phaseStyle(c.phaseIndex(tp.Phase)).Render(tp.Phase),
+				st.strong.Render(poleWord(tp.Pole)), next+1, len(teeth)))
+			b.text("the compass's north end "+where, st.value.Render)
+			if len(s.Phases) > 1 && (next == 0 || teeth[next-1].Phase != tp.Phase) {
+				b.text(fmt.Sprintf("clips on %s1 (+) and %s2 (-) now; switch the supply off before moving them", tp.Phase, tp.Phase), st.warn.Render)
+			}
 		}
-		b.raw(fmt.Sprintf("tooth %s  phase %s  expect %s  (%d of %d)",
-			st.strong.Render(strconv.Itoa(tp.Tooth)), st.phaseStyle(c.phaseIndex(tp.Phase)).Render(tp.Phase),
-			st.strong.Render(poleWord(tp.Pole)), next+1, len(teeth)))
-		b.text("the compass's north end "+where, st.value.Render)
-		if len(s.Phases) > 1 && (next == 0 || teeth[next-1].Phase != tp.Phase) {
-			b.text(fmt.Sprintf("clips on %s1 (+) and %s2 (-) now; switch the supply off before moving them", tp.Phase, tp.Phase), st.warn.Render)
+		b.text(polarityRow(teeth, v), st.value.Render)
+		for i, tp := range teeth {
+			if seen, ok := plan.PoleFromValue(v[i]); ok && seen != tp.Pole {
+				b.text(mismatchText(tp, seen), st.fail.Render)
+			}
 		}
-	}
-	b.text(polarityRow(teeth, v), st.value.Render)
-	for i, tp := range teeth {
-		if seen, ok := plan.PoleFromValue(v[i]); ok && seen != tp.Pole {
-			b.text(mismatchText(tp, seen), st.fail.Render)
+		if next == len(teeth) && !looking {
+			verdict := polarityVerdict(c.plan, s, v)
+			g.verdictView(b, &verdict)
+			b.text("enter records the step; n adds a note; bksp reads the last tooth again.", st.statusNow.Render)
 		}
-	}
-	if next == len(teeth) && !looking {
-		verdict := polarityVerdict(c.plan, s, v)
-		g.verdictView(b, &verdict)
-		b.text("enter records the step; n adds a note; bksp reads the last tooth again.", st.statusNow.Render)
-	}
-	b.text(polarityCautionShort, st.caution.Render)
-	b.raw("")
-	b.text(s.Title, st.strong.Render)
-	if t.Current > 0 {
-		b.kv("DC", fmt.Sprintf("%s A into X1, out of X2 (%s of heat in the phase)", fmtNum(t.Current), fmtWatts(t.HeatW)))
-	}
-	b.text("CAUTION "+plan.PolarityCaution, st.caution.Render)
+		b.text(polarityCautionShort, st.caution.Render)
+	})
+	pp.add(partUseful, func(b *lines) {
+		b.text(s.Title, st.strong.Render)
+		if t.Current > 0 {
+			b.kv("DC", fmt.Sprintf("%s A into X1, out of X2 (%s of heat in the phase)", fmtNum(t.Current), fmtWatts(t.HeatW)))
+		}
+	})
+	pp.add(partProse, func(b *lines) {
+		b.text("CAUTION "+plan.PolarityCaution, st.caution.Render)
+		b.kv("source", t.Source)
+	})
 }
 
 // polarityCautionShort is the caution in one line, kept with the live part
