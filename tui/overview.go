@@ -11,6 +11,7 @@ import (
 
 	"coilwright/winding"
 	"coilwright/winding/plan"
+	"coilwright/winding/progress"
 )
 
 // overviewModel lists every step with its status, then the connection order.
@@ -131,7 +132,12 @@ func stepLine(c *shared, s plan.Step, i int) string {
 	switch {
 	case s.Coil != nil:
 		cs := s.Coil
-		t = fmt.Sprintf("coil %d of %d  tooth %d %s %s  %d turns", cs.Order, cs.Of, cs.Tooth, cs.Phase, cs.Direction, cs.Turns)
+		// Columns line up down the list: the order and the tooth padded to
+		// the widest, the coil as its signed token, its slots, its turns.
+		ow, tw := len(strconv.Itoa(cs.Of)), len(strconv.Itoa(len(c.teeth)))
+		sw := len(plan.SlotWords(len(c.teeth), len(c.teeth)))
+		t = fmt.Sprintf("%-10s tooth %*d %-3s %-*s  %d turns", fmt.Sprintf("coil %*d/%d", ow, cs.Order, cs.Of), tw, cs.Tooth,
+			progress.Sense(cs)+cs.Phase, sw, plan.SlotWords(cs.DownSlot, cs.UpSlot), cs.Turns)
 		if c.prog.Steps[i].Done && c.prog.Steps[i].Turns != cs.Turns {
 			t += fmt.Sprintf(" (wound %d)", c.prog.Steps[i].Turns)
 		} else if !c.prog.Steps[i].Done && c.prog.Steps[i].Turns > 0 {
@@ -142,10 +148,13 @@ func stepLine(c *shared, s plan.Step, i int) string {
 		if k := string(s.Kind) + ": "; len(title) > len(k) && strings.EqualFold(title[:len(k)], k) {
 			title = title[len(k):]
 		}
-		t = fmt.Sprintf("%-9s %s", s.Kind, title)
+		t = fmt.Sprintf("%-10s %s", s.Kind, title)
 	}
 	if r := c.prog.Steps[i].Reading; r != nil {
 		t += " -> " + strings.ToUpper(r.Verdict)
+	}
+	if c.prog.Steps[i].Skipped {
+		t += " -> skipped"
 	}
 	if c.prog.Steps[i].Note != "" {
 		t += "  note: " + c.prog.Steps[i].Note

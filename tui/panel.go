@@ -509,13 +509,15 @@ func (g guideModel) testView(pp *panelParts, s plan.Step) {
 			}
 		})
 	}
+	// The step's own instruction ("zero the meter leads first") before the
+	// prose.
+	pp.add(partUseful, func(b *lines) { b.text(s.Detail, c.st.value.Render) })
 	pp.add(partProse, func(b *lines) {
 		if known {
 			b.text(t.What, c.st.value.Render)
 			b.kv("source", t.Source)
 			b.kv("note", t.Note)
 		}
-		b.text(s.Detail, c.st.value.Render)
 		for _, r := range s.Reminders {
 			if !known || r != t.Caution {
 				b.kv("mind", r)

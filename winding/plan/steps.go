@@ -120,7 +120,8 @@ func (b *builder) steps() error {
 				Reminders: []string{"burning off enamel or tinning gives off fumes: ventilate or use extraction"}})
 		}
 	}
-	b.add(Step{Kind: StepTest, Test: TestContinuity, Title: "Test: continuity of every path"})
+	b.add(Step{Kind: StepTest, Test: TestContinuity, Title: "Test: continuity of every path",
+		Detail: "Zero the meter leads first: touch them together and null the meter (or note what it reads and take it off every reading). Then read each path from its start lead to its finish lead, one field per path."})
 	b.add(Step{Kind: StepTest, Test: TestPhaseInsulation, Title: "Test: insulation between phases (before joining)",
 		Reminders: []string{cautionIR}})
 	if l.Spec.Paths > 1 {
