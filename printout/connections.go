@@ -3,18 +3,72 @@ package printout
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"coilwright/winding"
+	"coilwright/winding/plan"
 )
 
 // Connection sheet geometry, mm.
 const (
-	conBoxW = 11
-	conBoxH = 12
-	conGap  = 9.4 // holds "reverse" in bold at the smallest size (8.8 mm)
-	conTagW = 13
-	conLine = 19 // height of one line of coils
+	conBoxW   = 11
+	conBoxH   = 12
+	conGapMin = 7.5 // the least room between two coil boxes
+	conTagW   = 13
+	conLine   = 19 // height of one line of coils
+	// conReverseY is the baseline of "reverse" below the middle of a line of
+	// coils: under the boxes' bottom edge, clear of it by 0.3 mm or more.
+	conReverseY = conBoxH/2 + 0.3 + 0.75*sizeTiny*ptMM + 0.2
 )
+
+// jumperLabels are the two lines written on a jumper between coil boxes,
+// from the engine's slot-to-slot values (plan.JumperStep): above the wire
+// the slot it leaves and the slot it enters at the lead end, "s2→s6"; under
+// it the slot pitches and the way round seen from the lead end, "4 ccw"
+// ("0" when it goes straight back down the same slot).
+func jumperLabels(j plan.JumperStep) (slots, pitches string) {
+	slots = "s" + strconv.Itoa(j.LeavesSlot) + "→s" + strconv.Itoa(j.EntersSlot)
+	pitches = strconv.Itoa(j.SlotPitches)
+	if j.SlotPitches > 0 {
+		pitches += " " + j.Way
+	}
+	return slots, pitches
+}
+
+// jumpersLaid are the plan's jumpers as laid, by the tooth each leaves: the
+// values on the plan's jumper steps, or, for a plan without steps, laid by
+// the engine's own rule (plan.LayJumper) from the layout.
+func (b *builder) jumpersLaid() map[int]plan.JumperStep {
+	out := map[int]plan.JumperStep{}
+	for _, st := range b.p.Steps {
+		if st.Jumper != nil && st.Jumper.LeavesSlot > 0 {
+			out[st.Jumper.FromTooth] = *st.Jumper
+		}
+	}
+	l := b.p.Layout
+	for _, ch := range l.Chains {
+		for _, jp := range ch.Jumpers {
+			if _, ok := out[jp.FromTooth]; ok {
+				continue
+			}
+			from, _ := l.CoilOn(jp.FromTooth)
+			to, _ := l.CoilOn(jp.ToTooth)
+			out[jp.FromTooth] = plan.LayJumper(b.p.Rotor, jp, from.Direction, to.Direction, l.Spec.Slots, b.p.JumperRadiusMM, 0)
+		}
+	}
+	return out
+}
+
+// conGapFor is the room between two coil boxes: enough for the widest
+// jumper label of the plan, and never less than conGapMin.
+func conGapFor(js map[int]plan.JumperStep) float64 {
+	g := float64(conGapMin)
+	for _, j := range js {
+		a, c := jumperLabels(j)
+		g = math.Max(g, math.Max(textWidth(Regular, sizeTiny, a), textWidth(Regular, sizeTiny, c))+2)
+	}
+	return g
+}
 
 // connections draws every phase and path as a chain of coils from its start
 // terminal to its finish terminal, the jumpers between them, and the star
@@ -38,15 +92,20 @@ func (b *builder) connectionSheets(jointsFirst bool) bool {
 	c := b.newPage(ConnectionPage, title)
 	y := b.top() + 3
 	y = c.para(marginMM, y, b.width(), sizeSmall, Regular, Ink,
-		"Each path is one continuous wire, wound coil by coil from its start terminal to its finish terminal. "+
-			"The number on a jumper is the count of tooth pitches it runs round the lead end, up the tooth numbers; "+
-			"“reverse” marks a jumper after which the next coil is wound the other way round.")
+		"Each path is one continuous wire, wound coil by coil from its start terminal to its finish terminal; "+
+			"the sense in a coil box (cw, ccw) is seen from the air gap facing the tooth. "+
+			"A jumper is counted slot to slot: above its wire the slot it leaves at the lead end and the slot it enters "+
+			"(“s2→s6”: up out of slot 2, down into slot 6), under the wire the slot pitches it runs round the lead end and which way, "+
+			"seen from the lead end (“4 ccw”: four slot pitches counter-clockwise, up the slot numbers), as the checklist's jumper rows say in words. "+
+			"“reverse” under a jumper marks the next coil wound the other way round.")
 	y += 2
 	if jointsFirst {
 		b.joints(c, y)
 		y += b.jointsHeight() + 4
 	}
-	perLine := int((b.width() - 2*conTagW - 6 + conGap) / (conBoxW + conGap))
+	js := b.jumpersLaid()
+	gap := conGapFor(js)
+	perLine := int((b.width() - 2*conTagW - 6 + gap) / (conBoxW + gap))
 	perLine = max(1, perLine)
 	for _, ch := range l.Chains {
 		lines := (len(ch.Teeth) + perLine - 1) / perLine
@@ -57,7 +116,7 @@ func (b *builder) connectionSheets(jointsFirst bool) bool {
 		}
 		// a chain that wraps shares its coils evenly between its lines
 		per := (len(ch.Teeth) + lines - 1) / max(1, lines)
-		y = b.chainRows(c, y, ch, max(1, per), title)
+		y = b.chainRows(c, y, ch, max(1, per), title, js, gap)
 		if c != nil && len(b.pages) > 0 {
 			c = &canvas{page: b.pages[len(b.pages)-1]}
 		}
@@ -86,7 +145,7 @@ func (b *builder) pathWireM(phase string, path int) float64 {
 
 // chainRows draws one chain, starting new pages as needed, and returns the
 // y below it (on the last page it used).
-func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int, title string) float64 {
+func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int, title string, js map[int]plan.JumperStep, conGap float64) float64 {
 	l := b.p.Layout
 	st := b.phaseStyle(ch.Phase)
 	name := l.PhaseName(ch.Phase)
@@ -135,9 +194,13 @@ func (b *builder) chainRows(c *canvas, y float64, ch winding.Chain, perLine int,
 			if k < len(ch.Jumpers) && (k+1 < end || end < len(ch.Teeth)) {
 				j := ch.Jumpers[k]
 				c.line(x, mid, x+conGap, mid, wirePen)
-				c.label(x+conGap/2, mid-2, sizeTiny, Regular, Ink, fmt.Sprintf("+%d", j.Span))
+				slots, pitches := jumperLabels(js[j.FromTooth])
+				c.text(x+conGap/2, mid-0.9, sizeTiny, Regular, Ink, centre, slots)
+				c.text(x+conGap/2, mid+0.9+0.75*sizeTiny*ptMM, sizeTiny, Regular, Ink, centre, pitches)
 				if j.ReversesSense {
-					c.label(x+conGap/2, mid+2.4, sizeTiny, Bold, Ink, "reverse")
+					// under the boxes' bottom edge, where the word is wider
+					// than the gap
+					c.text(x+conGap/2, mid+conReverseY, sizeTiny, Bold, Ink, centre, "reverse")
 				}
 				x += conGap
 			}

@@ -36,3 +36,92 @@ func TestJointsBesideTheChains(t *testing.T) {
 		}
 	}
 }
+
+// On the connection sheets no word runs into another or across the border
+// of a coil box: the jumper labels between the boxes and "reverse" under
+// them keep clear of the boxes (read back from the page model's word boxes
+// against the drawn box rectangles), for the demo and every fixture, a
+// five-phase star among them.
+func TestConnectionWordsClearOfCoilBoxes(t *testing.T) {
+	packs := packsUnderTest(t)
+	pk, err := Build(fixturePlan(t, winding.Spec{Slots: 20, Poles: 18, Phases: 5}, winding.Star), Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	packs["20-18-five-phase-star"] = pk
+	for name, pk := range packs {
+		reverse := 0
+		for _, pg := range pagesOf(pk, ConnectionPage) {
+			if o := overlappingTexts(pg); len(o) > 0 {
+				t.Errorf("%s %q: %d words overlap, first %s", name, pg.Title, len(o), o[0])
+			}
+			var boxes []*Box
+			for _, sh := range pg.Shapes {
+				if bx, ok := sh.(*Box); ok && bx.W == conBoxW && bx.H == conBoxH {
+					boxes = append(boxes, bx)
+				}
+			}
+			for _, sh := range pg.Shapes {
+				tx, ok := sh.(*Text)
+				if !ok {
+					continue
+				}
+				if tx.S == "reverse" {
+					reverse++
+				}
+				x0, y0, x1, y1 := tx.bounds()
+				for _, bx := range boxes {
+					inside := x0 >= bx.X && x1 <= bx.X+bx.W && y0 >= bx.Y && y1 <= bx.Y+bx.H
+					if !inside && shapesMeet(tx, bx, 0.1) {
+						t.Errorf("%s %q: %q at (%.1f, %.1f) runs into the coil box at (%.1f, %.1f)", name, pg.Title, tx.S, tx.X, tx.Y, bx.X, bx.Y)
+					}
+				}
+			}
+		}
+		if len(pagesOf(pk, ConnectionPage)) > 0 && reverse == 0 && name == "demo" {
+			t.Errorf("%s: no jumper marked reverse", name)
+		}
+	}
+}
+
+// Every jumper on the connection sheets is labelled slot to slot from the
+// engine's values: the demo's first jumper of phase U leaves slot 24 and
+// enters slot 1, one slot pitch counter-clockwise seen from the lead end,
+// and the second leaves slot 2 and enters slot 6, four pitches (the slots
+// the bench guide names; tooth pitches would count 5 and land on the up
+// slot of tooth 7).
+func TestJumpersLabelledSlotToSlot(t *testing.T) {
+	p := demoPlan(t)
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	var texts []string
+	for _, pg := range pagesOf(pk, ConnectionPage) {
+		texts = append(texts, pg.Texts()...)
+	}
+	for _, want := range []string{"s24→s1", "s2→s6", "4 ccw", "1 ccw"} {
+		if !slices.Contains(texts, want) {
+			t.Errorf("connection sheets lack the jumper label %q", want)
+		}
+	}
+	// one label per jumper step of the plan, with its slots
+	n := 0
+	for _, st := range p.Steps {
+		if j := st.Jumper; j != nil {
+			n++
+			s, w := jumperLabels(*j)
+			if !slices.Contains(texts, s) || !slices.Contains(texts, w) {
+				t.Errorf("jumper %d→%d: labels %q, %q not on the connection sheets", j.FromTooth, j.ToTooth, s, w)
+			}
+		}
+	}
+	if n == 0 {
+		t.Fatal("demo plan has no jumper steps")
+	}
+	for _, s := range texts {
+		if regexp.MustCompile(`^\+\d+$`).MatchString(s) {
+			t.Errorf("connection sheets still print a tooth-pitch count %q", s)
+		}
+	}
+}
