@@ -197,9 +197,15 @@ func (b *builder) tickBoxes(f *flow, y, h float64, cs *plan.CoilStep, sp *StepPr
 			c.checkbox(b.colX(8)+5-ckBoxS/2, cy, ckBoxS)
 		}
 	}
-	c.checkbox(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
-	if sp != nil {
+	switch {
+	case sp != nil && sp.Skipped:
+		// an optional test left out: said, not ticked
+		c.text(b.colX(9)+5, cy+ckBoxS/2+0.35*sizeSmall*ptMM, sizeSmall, Bold, Ink, centre, "skipped")
+	case sp != nil:
+		c.checkbox(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
 		c.tick(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
+	default:
+		c.checkbox(b.colX(9)+5-ckBoxS/2, cy, ckBoxS)
 	}
 	x := b.colX(10)
 	c.line(x+1, y+h-1.4, marginMM+b.width()-0.5, y+h-1.4, Pen{Width: 0.2, Colour: Ink})

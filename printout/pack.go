@@ -34,6 +34,9 @@ type Reading struct {
 	Taken   time.Time // zero when unknown
 	By      string    // initials, when recorded
 	Verdict string    // "pass", "warn", "fail" or "" when none was recorded
+	// Skipped: an optional test left out (progress.Step.Skipped); its
+	// cells stay blank and the record says "skipped".
+	Skipped bool
 }
 
 // ErrNoPlan is returned for a nil plan or one without a layout.
@@ -56,7 +59,7 @@ func Build(p *plan.Plan, o Options) (*Pack, error) {
 		o.Date = p.Date
 	}
 	if o.Readings == nil {
-		o.Readings = readingsOf(o.Progress)
+		o.Readings = readingsOf(o.Progress, p.Steps)
 	}
 	if o.Date.IsZero() {
 		// a fixed date keeps two renders identical when neither the job nor

@@ -14,6 +14,9 @@ type StepProgress struct {
 	Done  bool
 	When  time.Time // when it was done; zero when unknown
 	Turns int       // turns wound on a done coil; 0 for other steps
+	// Skipped: an optional test done by leaving it out; its box is not
+	// ticked, the row says "skipped".
+	Skipped bool
 }
 
 // Note is a note of the record as the checklist prints it.
@@ -47,7 +50,7 @@ func matchProgress(st *progress.State, steps []plan.Step) *recorded {
 		}
 		sp := st.Steps[i]
 		if sp.Done {
-			p := StepProgress{Done: true, When: sp.At}
+			p := StepProgress{Done: true, When: sp.At, Skipped: sp.Skipped}
 			if s.Coil != nil {
 				p.Turns = sp.Turns
 				r.coils++
@@ -66,14 +69,20 @@ func matchProgress(st *progress.State, steps []plan.Step) *recorded {
 }
 
 // readingsOf are the latest readings of each test in the record, as the test
-// record prints them.
-func readingsOf(st *progress.State) map[string]Reading {
+// record prints them; an optional test whose step stands skipped is marked
+// so, whatever was read on it before.
+func readingsOf(st *progress.State, steps []plan.Step) map[string]Reading {
 	if st == nil {
 		return nil
 	}
 	out := make(map[string]Reading, len(st.Tests))
 	for name, r := range st.Tests {
 		out[name] = Reading{Values: r.Values, Taken: r.At, Verdict: r.Verdict}
+	}
+	for i, s := range steps {
+		if i < len(st.Steps) && s.Kind == plan.StepTest && st.Steps[i].Done && st.Steps[i].Skipped {
+			out[s.Test] = Reading{Skipped: true, Taken: st.Steps[i].At}
+		}
 	}
 	return out
 }

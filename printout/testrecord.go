@@ -312,12 +312,36 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	cond := conditionsText(t)
 	rec, recorded := b.o.Readings[t.Name]
 	rows := t.Readings
+	shown := rec.Values // what the read column shows, by reading key
+	// a test worked out from another's readings (the balance) asks for
+	// nothing to be read: it says where its values come from, how they are
+	// worked out, and gives the computed cell, filled where the record has
+	// the readings
+	var from, formula string
+	var values map[string]float64
+	if t.ReadingsFrom != "" {
+		from, formula = b.computedFrom(t)
+		rows = computedRows()
+		values = b.computedValues(t)
+		shown = nil
+		if cv, ok := b.computedCells(t, values); ok && !rec.Skipped {
+			shown = cv
+		}
+	}
 	if len(rows) == 0 {
 		// a test without a reading schema: one cell in its unit
 		rows = []plan.Reading{{Key: "", Label: "result", Unit: t.Unit}}
 	}
 	var results []string
-	if recorded {
+	if recorded && rec.Skipped {
+		s := "skipped: this optional test was left out"
+		if !rec.Taken.IsZero() {
+			s += ", as recorded on " + dateOf(rec.Taken)
+		}
+		results = []string{s}
+	} else if t.ReadingsFrom != "" {
+		results = b.resultLines(t, values)
+	} else if recorded {
 		results = b.resultLines(t, rec.Values)
 		if len(t.Readings) == 0 && len(rec.Values) > 0 {
 			// no schema to lay the values out by: each under its own name
@@ -344,19 +368,34 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	if cond != "" {
 		headH += paraHeight(inner, sizeBody, Bold, "test: "+cond)
 	}
+	if from != "" {
+		headH += paraHeight(inner, sizeBody, Bold, from)
+	}
 	headH += paraHeight(inner, sizeSmall, Regular, what) + 0.5
+	if formula != "" {
+		headH += paraHeight(inner, sizeSmall, Regular, formula) + 0.5
+	}
 	if t.Caution != "" {
 		headH += paraHeight(inner-6, sizeSmall, Bold, t.Caution) + 1
 	}
 	headH += paraHeight(inner, sizeTiny, Regular, src) + 1
-	footH := tbCellH + 9
+	meterH := float64(tbCellH) // the meter's row; none where nothing is read
+	if t.ReadingsFrom != "" {
+		meterH = 0
+	}
+	footH := meterH + 9
 	for _, l := range results {
 		footH += paraHeight(inner, sizeBody, Regular, l)
 	}
 	whole := headH + tbCellH*float64(len(rows)+1) + footH
-	// the whole block on one sheet where it fits on one; else at least the
-	// head and a few rows before the sheet ends
-	f.need(min(whole, headH+tbCellH*4) + 2)
+	// the whole block on one sheet where it fits on one (a block is never
+	// split to leave a row or two on the next sheet); else at least the head
+	// and a few rows before the sheet ends
+	if whole+2 <= f.b.bottom()-f.b.top()-3 {
+		f.need(whole + 2)
+	} else {
+		f.need(headH + tbCellH*4 + 2)
+	}
 	c := f.c
 	y0 := f.y
 	tx := x0 + tbPad
@@ -367,7 +406,13 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	if cond != "" {
 		ty = c.para(tx, ty, inner, sizeBody, Bold, Ink, "test: "+cond)
 	}
+	if from != "" {
+		ty = c.para(tx, ty, inner, sizeBody, Bold, Ink, from)
+	}
 	ty = c.para(tx, ty, inner, sizeSmall, Regular, Ink, what) + 0.5
+	if formula != "" {
+		ty = c.para(tx, ty, inner, sizeSmall, Regular, Ink, formula) + 0.5
+	}
 	if t.Caution != "" {
 		c.warningSign(tx+2.5, ty-2.6, 4.6)
 		ty = c.para(tx+6, ty+0.6, inner-6, sizeSmall, Bold, Ink, t.Caution) + 0.4
@@ -414,7 +459,7 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 		c.text(xs[0]+1.2, base, sizeBody, Bold, Ink, left, fit(r.Label, xs[1]-xs[0]-2.4, sizeBody, Bold))
 		c.text(xs[1]+1.2, base, sizeBody, Regular, Ink, left, fit(expectedText(t, r), xs[2]-xs[1]-2.4, sizeBody, Regular))
 		c.text(xs[2]+1.2, base, sizeSmall, Regular, Ink, left, fit(windowText(r), xs[3]-xs[2]-2.4, sizeSmall, Regular))
-		if v, ok := rec.Values[r.Key]; recorded && ok && r.Key != "" {
+		if v, ok := shown[r.Key]; ok && r.Key != "" && !rec.Skipped {
 			c.text(xs[3]+1.2, base, sizeBody, Bold, Ink, left, plan.FormatValue(v, r.Unit))
 		} else {
 			c.line(xs[3]+1.2, cy+tbCellH-1.2, xs[4]-1.2, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
@@ -432,37 +477,48 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 		top = cy
 	}
 	// the meter used
-	base := cy + tbCellH/2 + 1.2
-	c.text(xs[0]+1.2, base, sizeSmall, Regular, Ink, left, "meter (make, model)")
-	c.line(xs[1]+1.2, cy+tbCellH-1.2, xs[3]-4, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
-	c.text(xs[3]+1.2, base, sizeSmall, Regular, Ink, left, "serial")
-	c.line(xs[3]+10, cy+tbCellH-1.2, xs[4]-1.2, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
 	cells := cy
-	cy += tbCellH
+	if meterH > 0 {
+		base := cy + tbCellH/2 + 1.2
+		c.text(xs[0]+1.2, base, sizeSmall, Regular, Ink, left, "meter (make, model)")
+		c.line(xs[1]+1.2, cy+tbCellH-1.2, xs[3]-4, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
+		c.text(xs[3]+1.2, base, sizeSmall, Regular, Ink, left, "serial")
+		c.line(xs[3]+10, cy+tbCellH-1.2, xs[4]-1.2, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
+		cy += meterH
+	}
 	// results of a recorded reading
 	for _, l := range results {
 		cy = c.para(tx, cy+0.75*sizeBody*ptMM, inner, sizeBody, Regular, Ink, l) - 0.75*sizeBody*ptMM
 	}
-	// pass / fail
+	// pass / fail, and skipped for an optional test
 	py := cy + 1.6
-	pass, fail := false, false
+	pass, fail, skipped := false, false, false
 	if recorded {
-		pass, fail = rec.Verdict == "pass", rec.Verdict == "fail"
+		pass, fail, skipped = rec.Verdict == "pass" && !rec.Skipped, rec.Verdict == "fail" && !rec.Skipped, rec.Skipped
 	}
-	c.checkbox(tx, py, ckBoxS)
-	if pass {
-		c.tick(tx, py, ckBoxS)
+	boxes := []struct {
+		word string
+		on   bool
+	}{{"pass", pass}, {"fail", fail}}
+	if t.Optional || skipped {
+		boxes = append(boxes, struct {
+			word string
+			on   bool
+		}{"skipped", skipped})
 	}
-	c.text(tx+5.5, py+3.3, sizeSmall, Regular, Ink, left, "pass")
-	c.checkbox(tx+18, py, ckBoxS)
-	if fail {
-		c.tick(tx+18, py, ckBoxS)
+	bx := tx
+	for _, bo := range boxes {
+		c.checkbox(bx, py, ckBoxS)
+		if bo.on {
+			c.tick(bx, py, ckBoxS)
+		}
+		c.text(bx+5.5, py+3.3, sizeSmall, Regular, Ink, left, bo.word)
+		bx += 18
 	}
-	c.text(tx+23.5, py+3.3, sizeSmall, Regular, Ink, left, "fail")
-	c.text(tx+36, py+3.3, sizeSmall, Regular, Ink, left, "initials")
-	c.line(tx+47, py+3.8, tx+90, py+3.8, Pen{Width: 0.2, Colour: Ink})
-	c.text(tx+95, py+3.3, sizeSmall, Regular, Ink, left, "date")
-	c.line(tx+102, py+3.8, tx+inner, py+3.8, Pen{Width: 0.2, Colour: Ink})
+	c.text(bx, py+3.3, sizeSmall, Regular, Ink, left, "initials")
+	c.line(bx+11, py+3.8, bx+54, py+3.8, Pen{Width: 0.2, Colour: Ink})
+	c.text(bx+59, py+3.3, sizeSmall, Regular, Ink, left, "date")
+	c.line(bx+66, py+3.8, tx+inner, py+3.8, Pen{Width: 0.2, Colour: Ink})
 	end := py + ckBoxS + 2.8
 	for _, x := range xs[1:4] {
 		c.line(x, top, x, min(cells, end), Pen{Width: 0.15, Colour: Faint})

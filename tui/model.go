@@ -89,6 +89,9 @@ func New(o Options) *Model {
 	if o.Plan != nil {
 		c.teeth = teethOf(o.Plan.Layout)
 		for _, t := range o.Plan.Tests {
+			// a test worked out from another's readings (the balance from
+			// the resistance test's) shows and records those readings
+			t.Readings = o.Plan.ReadingsFor(t)
 			c.tests[t.Name] = t
 		}
 		for _, s := range o.Plan.Steps {

@@ -47,10 +47,13 @@
 //	                       "path k" and _pk with several paths), expected ρL/A
 //	                       of the path and its leads, at most ContinuityFactor×
 //	phase_insulation       every pair of phases: U–V, U–W, V–W (u_v …), MΩ
-//	resistance, balance    the m adjacent line pairs U–V, V–W, W–U (uv, vw, wu)
+//	resistance             the m adjacent line pairs U–V, V–W, W–U (uv, vw, wu)
 //	                       and the winding temperature (temp); expected line
 //	                       to line: R_a + R_b for star, R_a·(S − R_a)/S for
 //	                       delta, within the resistance band
+//	balance                none of its own: ReadingsFrom names the resistance
+//	                       test, whose readings it is worked out from
+//	                       (Plan.ReadingsFor resolves the reference)
 //	insulation_resistance  ir1 (after 1 min), volts, temp, ir10 (optional,
 //	                       after 10 min, for the polarization index)
 //	hv_withstand           volts applied, seconds held, passed (1 held, 0

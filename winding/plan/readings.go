@@ -203,6 +203,32 @@ func emfReadings(names []string) []Reading {
 	return append(out, Reading{Key: KeyRPM, Label: "speed", Unit: UnitRPM})
 }
 
+// TestNamed returns the plan's test of that name (one of the Test* keys).
+func (p *Plan) TestNamed(name string) (Test, bool) {
+	if p != nil {
+		for _, t := range p.Tests {
+			if t.Name == name {
+				return t, true
+			}
+		}
+	}
+	return Test{}, false
+}
+
+// ReadingsFor is the reading schema test t is judged from: its own
+// readings, or, for a test worked out from another's (ReadingsFrom), the
+// readings of that test: the resistance balance is judged from the U–V,
+// V–W, W–U readings and temperature of the resistance test. A nil plan
+// gives t's own.
+func (p *Plan) ReadingsFor(t Test) []Reading {
+	if t.ReadingsFrom != "" && t.ReadingsFrom != t.Name {
+		if src, ok := p.TestNamed(t.ReadingsFrom); ok {
+			return src.Readings
+		}
+	}
+	return t.Readings
+}
+
 // ReadingKeys lists the keys of a test's readings, in order.
 func (t Test) ReadingKeys() []string {
 	out := make([]string, len(t.Readings))

@@ -103,13 +103,13 @@ func (b *builder) tests() error {
 		Limit: round3(ContinuityFactor * pathAmb), Unit: UnitOhm, Compare: AtMost, Readings: cont,
 		Source: "common practice: an open circuit or a poor joint reads well above the expected resistance",
 		Note:   fmt.Sprintf("expected about %s per path at %s, leads included", FormatValue(pathAmb, UnitOhm), FormatValue(p.AmbientC, UnitCelsius))})
-	beforeJoin := "star point"
+	beforeJoin := "star point is"
 	if p.Connection.String() == "delta" {
-		beforeJoin = "delta corners"
+		beforeJoin = "delta corners are"
 	}
 	pairs := pairReadings(names)
 	ts = append(ts, Test{Name: TestPhaseInsulation, Title: "Insulation between phases",
-		What:  fmt.Sprintf("Insulation between phases, before the %s is made: %s, at %s DC for 1 min.", beforeJoin, ReadingLabels(pairs), FormatValue(InsulationTestVolts, UnitVolt)),
+		What:  fmt.Sprintf("Insulation between phases, before the %s made: %s, at %s DC for 1 min.", beforeJoin, ReadingLabels(pairs), FormatValue(InsulationTestVolts, UnitVolt)),
 		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, Readings: pairs,
 		Source:  "IEEE 43-2013 minimum for random-wound windings, borrowed here for phase to phase (the standard tests winding to ground)",
 		Caution: cautionIR,
@@ -131,8 +131,8 @@ func (b *builder) tests() error {
 			lowPct, highPct, tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
 		Note: lineNote(p.Connection)})
 	ts = append(ts, Test{Name: TestBalance, Title: "Resistance balance",
-		What:  "Balance of the phase resistances, from the same readings: the largest deviation of a phase from the mean of the phases, over that mean.",
-		Limit: BalanceLimitPercent, Unit: UnitPercent, Compare: AtMost, Readings: withoutExpected(b.lineReadings(band)),
+		What:  "Balance of the phase resistances, worked out from the readings of the resistance test (not read again): the phase values from the line readings, then the largest deviation of a phase from the mean of the phases, over that mean.",
+		Limit: BalanceLimitPercent, Unit: UnitPercent, Compare: AtMost, ReadingsFrom: TestResistance,
 		Source: "EASA AR100-2020: random-wound windings within 2 % (1 % for form-wound), as the largest deviation from the average",
 		Note:   "a phase high by about one coil's share has a coil with too many turns or a poor joint; low, a coil shorted or left out"})
 	irNote := "the 10-minute reading gives the polarization index (IR10/IR1), a guide to moisture and contamination"
@@ -169,17 +169,6 @@ func (b *builder) tests() error {
 	}
 	p.Tests = ts
 	return nil
-}
-
-// withoutExpected copies readings without their expected values (the
-// balance test judges the same readings against each other, not the plan).
-func withoutExpected(rs []Reading) []Reading {
-	out := make([]Reading, len(rs))
-	for i, r := range rs {
-		r.Expected = nil
-		out[i] = r
-	}
-	return out
 }
 
 // lineNote says how the line readings relate to the phases.

@@ -250,8 +250,14 @@ type Test struct {
 	Current     float64 `json:"test_current_a,omitempty"` // DC driven through the winding (polarity test)
 	HeatW       float64 `json:"heat_w,omitempty"`         // heat the test current makes in one phase
 	// Readings are what the person reads for this test, in order, with the
-	// value the meter should show where the plan knows it.
+	// value the meter should show where the plan knows it. A test judged
+	// from the readings of another has none of its own (ReadingsFrom).
 	Readings []Reading `json:"readings"`
+	// ReadingsFrom names the test whose readings this one is worked out
+	// from, "" for a test read on its own: the balance is computed from the
+	// resistance test's readings, never read a second time
+	// (Plan.ReadingsFor resolves it).
+	ReadingsFrom string `json:"readings_from,omitempty"`
 	// Resolution says the smallest turn error the test can see on this
 	// job, in words; empty where it does not apply.
 	Resolution string `json:"resolution,omitempty"`

@@ -116,7 +116,7 @@ func TestReadingSchema(t *testing.T) {
 		TestContinuity:      "u1_u2,v1_v2,w1_w2",
 		TestPhaseInsulation: "u_v,u_w,v_w",
 		TestResistance:      "uv,vw,wu,temp",
-		TestBalance:         "uv,vw,wu,temp",
+		TestBalance:         "", // none of its own: the resistance test's (below)
 		TestInsulation:      "ir1,volts,temp,ir10",
 		TestHighVoltage:     "volts,seconds,passed",
 		TestBackEMF:         "uv,vw,wu,rpm",
@@ -129,6 +129,11 @@ func TestReadingSchema(t *testing.T) {
 		}
 	}
 	r := testNamed(p, TestResistance)
+	// the balance refers to the resistance readings, one copy in the plan
+	bal := testNamed(p, TestBalance)
+	if bal.ReadingsFrom != TestResistance || keysOf(Test{Readings: p.ReadingsFor(bal)}) != keysOf(r) {
+		t.Errorf("balance readings from %q = %v; want the resistance test's %s", bal.ReadingsFrom, p.ReadingsFor(bal), keysOf(r))
+	}
 	if e := r.Readings[0].Expected; e == nil || math.Abs(e.Value-2.304395) > 2e-6 || r.Readings[0].Label != "U–V" {
 		t.Errorf("resistance U–V expected = %+v; want 2.304395 Ω, star: two phases in series", e)
 	}

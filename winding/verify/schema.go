@@ -18,10 +18,11 @@ func ValuesOf(p *plan.Plan, t plan.Test, r Readings) map[string]float64 {
 			out[k] = v
 		}
 	}
+	rs := p.ReadingsFor(t) // the balance is judged from the resistance test's readings
 	lines := func(vals [3]float64) {
 		for i, v := range vals {
-			if i < len(t.Readings) {
-				put(t.Readings[i].Key, v)
+			if i < len(rs) {
+				put(rs[i].Key, v)
 			}
 		}
 	}
@@ -72,9 +73,10 @@ func ValuesOf(p *plan.Plan, t plan.Test, r Readings) map[string]float64 {
 // least the limit, where given). The second result is
 // false for a test the check does not judge.
 func ReadingsOf(p *plan.Plan, t plan.Test, v map[string]float64) (Readings, bool) {
+	rs := p.ReadingsFor(t)
 	at := func(i int) float64 {
-		if i < len(t.Readings) {
-			return v[t.Readings[i].Key]
+		if i < len(rs) {
+			return v[rs[i].Key]
 		}
 		return 0
 	}
