@@ -132,7 +132,7 @@ func (b *builder) tests() error {
 		Note: lineNote(p.Connection)})
 	ts = append(ts, Test{Name: TestBalance, Title: "Resistance balance",
 		What:  "Balance of the phase resistances, worked out from the readings of the resistance test (not read again): the phase values from the line readings, then the largest deviation of a phase from the mean of the phases, over that mean.",
-		Limit: BalanceLimitPercent, Unit: UnitPercent, Compare: AtMost, ReadingsFrom: TestResistance,
+		Limit: BalanceLimitPercent, Unit: UnitPercent, Compare: AtMost, ReadingsFrom: TestResistance, Readings: []Reading{},
 		Source: "EASA AR100-2020: random-wound windings within 2 % (1 % for form-wound), as the largest deviation from the average",
 		Note:   "a phase high by about one coil's share has a coil with too many turns or a poor joint; low, a coil shorted or left out"})
 	irNote := "the 10-minute reading gives the polarization index (IR10/IR1), a guide to moisture and contamination"
