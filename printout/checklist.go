@@ -242,6 +242,9 @@ func (b *builder) stepText(st plan.Step) (title, detail string) {
 	if st.Kind == plan.StepSeparator && st.Slot > 0 && detail == "" {
 		detail = fmt.Sprintf("slot %d", st.Slot)
 	}
+	if st.Kind == plan.StepTest && detail == "" {
+		detail = b.testStepWords(st)
+	}
 	if j := st.Jumper; j != nil && j.LeavesSlot > 0 && !strings.Contains(detail, j.Words()) {
 		// the row names the slots the jumper leaves and enters, in the
 		// guide's words
@@ -254,6 +257,31 @@ func (b *builder) stepText(st plan.Step) (title, detail string) {
 		detail += "• " + r
 	}
 	return title, detail
+}
+
+// testStepWords says where a test step's readings go on paper: the test
+// record's test, and for a test worked out from another's readings (the
+// balance), the step they are read on, so nothing is read twice.
+func (b *builder) testStepWords(st plan.Step) string {
+	n, _ := b.testNumber(st.Test)
+	if n == 0 {
+		return ""
+	}
+	t := b.p.Tests[n-1]
+	if t.ReadingsFrom == "" {
+		return fmt.Sprintf("Write the readings in the test record, test %d.", n)
+	}
+	from := 0
+	for _, s := range b.p.Steps {
+		if s.Kind == plan.StepTest && s.Test == t.ReadingsFrom {
+			from = s.Index
+		}
+	}
+	src, title := b.testNumber(t.ReadingsFrom)
+	if from == 0 || src == 0 {
+		return fmt.Sprintf("Write the computed imbalance in the test record, test %d.", n)
+	}
+	return fmt.Sprintf("Nothing is read again: computed from the readings of step %d (%s, test %d); write the imbalance in the test record, test %d.", from, strings.ToLower(title[:1])+title[1:], src, n)
 }
 
 // stepTextW is the width of the title and detail of a step row.

@@ -246,22 +246,25 @@ func (b *builder) joints(c *canvas, y float64) {
 	if b.p.Connection == winding.Star {
 		o := Point{cx, cy}
 		// each finish mark beside its own line near the star point, turned
-		// a little towards the next line, as large as the terminal tags
-		lift := math.Min(25, 0.3*360/float64(m))
+		// towards the next line by enough to keep its word box clear of
+		// both lines (3.8 mm off its own at the label's radius), as large as
+		// the terminal tags
+		lift := math.Min(30, 0.42*360/float64(m))
+		rl := math.Max(6.2, 3.8/math.Sin(lift*math.Pi/180))
 		for i, n := range l.PhaseNames {
 			a := 90 + float64(i)*360/float64(m)
 			st := b.phaseStyle(i)
 			pen := Pen{Width: 0.6, Colour: st.Colour, Dash: st.Dash, Round: true}
-			p0, p1 := polar(o, 10, a), polar(o, 18, a)
+			p0, p1 := polar(o, 12, a), polar(o, 20, a)
 			c.line(cx, cy, p0.X, p0.Y, pen)
 			// the phase winding as a narrow box between its finish and start
 			d0, d1 := polar(p0, 1.6, a+90), polar(p0, 1.6, a-90)
 			e0, e1 := polar(p1, 1.6, a+90), polar(p1, 1.6, a-90)
 			c.poly([]Point{d0, e0, e1, d1}, true, pen, &Fill{st.Tint})
-			t := polar(o, 24.5, a)
+			t := polar(o, 26.5, a)
 			c.line(p1.X, p1.Y, t.X, t.Y, pen)
 			b.terminalTag(c, t.X-5, t.Y, 10, n+"1")
-			lb := polar(o, 6.2, a-lift)
+			lb := polar(o, rl, a-lift)
 			c.label(lb.X, lb.Y, sizeBody+0.5, Bold, Ink, n+"2")
 		}
 		c.circle(cx, cy, 1.6, Pen{}, &Fill{Black})

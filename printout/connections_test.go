@@ -125,3 +125,52 @@ func TestJumpersLabelledSlotToSlot(t *testing.T) {
 		}
 	}
 }
+
+// The finish marks at the star point (U2, V2, …) keep clear of every line
+// drawn to the star point, for three and five phases: each word box is at
+// least 0.3 mm from every line of the drawing (sampled along the line).
+func TestStarPointMarksClearOfLines(t *testing.T) {
+	for _, s := range []winding.Spec{{Slots: 12, Poles: 10}, {Slots: 20, Poles: 18, Phases: 5}} {
+		pk, err := Build(fixturePlan(t, s, winding.Star), Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		finish := regexp.MustCompile(`^[A-Z]2$`)
+		marks := 0
+		b := &builder{}
+		for _, pg := range pagesOf(pk, ConnectionPage) {
+			var panel *Box
+			for _, sh := range pg.Shapes {
+				if bx, ok := sh.(*Box); ok && bx.H == b.jointsHeight() && bx.Fill != nil {
+					panel = bx
+				}
+			}
+			for _, sh := range pg.Shapes {
+				tx, ok := sh.(*Text)
+				if !ok || !finish.MatchString(tx.S) || panel == nil || tx.Y < panel.Y || tx.Y > panel.Y+panel.H {
+					continue // the finish tags of the chains are not the star point's
+				}
+				marks++
+				x0, y0, x1, y1 := tx.bounds()
+				for _, o := range pg.Shapes {
+					ln, ok := o.(*Line)
+					if !ok {
+						continue
+					}
+					for k := 0; k <= 50; k++ {
+						f := float64(k) / 50
+						x := ln.From.X + f*(ln.To.X-ln.From.X)
+						y := ln.From.Y + f*(ln.To.Y-ln.From.Y)
+						if x > x0-0.3 && x < x1+0.3 && y > y0-0.3 && y < y1+0.3 {
+							t.Errorf("%d/%d: finish mark %q at (%.1f, %.1f) touches a line at (%.1f, %.1f)", s.Slots, s.Poles, tx.S, tx.X, tx.Y, x, y)
+							break
+						}
+					}
+				}
+			}
+		}
+		if want := max(3, s.Phases); marks != want {
+			t.Errorf("%d/%d: %d finish marks at the star point; want %d", s.Slots, s.Poles, marks, want)
+		}
+	}
+}

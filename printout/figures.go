@@ -335,9 +335,17 @@ func (b *builder) leadEndView(c *canvas, o Point, r float64, capX, capY, capW fl
 		p0, p1 := polar(o, rTooth*0.8, a), polar(o, rTooth, a)
 		c.line(p0.X, p0.Y, p1.X, p1.Y, Pen{Width: math.Max(0.4, math.Min(2.2, 2*math.Pi*rTooth/float64(q)*0.45)), Colour: Colour{200, 200, 200}})
 	}
-	if q <= 48 {
+	// tooth numbers inside the ring, every tooth where the numbers keep
+	// apart at that radius, else every 2nd, 3rd … (tooth 1 always)
+	rNum := rTooth*0.8 - 3
+	numW := textWidth(Regular, sizeMin, fmt.Sprint(q)) + 0.8
+	every := max(1, int(math.Ceil(numW/(2*math.Pi*rNum/float64(q)))))
+	if rNum > 0 && every <= 4 {
 		for k := 1; k <= q; k++ {
-			lp := polar(o, rTooth*0.8-3, toothAngle(k, q))
+			if (k-1)%every != 0 {
+				continue
+			}
+			lp := polar(o, rNum, toothAngle(k, q))
 			c.label(lp.X, lp.Y, sizeMin, Regular, Faint, fmt.Sprint(k))
 		}
 	}
@@ -407,8 +415,18 @@ func (b *builder) leadEndView(c *canvas, o Point, r float64, capX, capY, capW fl
 				tags[end.mark] = t
 				order = append(order, end.mark)
 			}
-			knee := polar(o, r+1.5, a)
-			c.poly([]Point{from, knee, t}, false, pen, nil)
+			// out past the jumpers, then round the outside on the phase's
+			// own radius to the tag's side and out to it, never across the
+			// stator
+			rk := r + 1.2 + 0.9*float64(ch.Phase)
+			at := math.Atan2(-(t.Y-o.Y), t.X-o.X) * 180 / math.Pi
+			d := math.Mod(at-a+540, 360) - 180 // the shorter way, degrees
+			pts := []Point{from}
+			steps := int(math.Ceil(math.Abs(d) / 5))
+			for i := 0; i <= steps; i++ {
+				pts = append(pts, polar(o, rk, a+d*float64(i)/float64(max(1, steps))))
+			}
+			c.poly(append(pts, t), false, pen, nil)
 			c.circle(from.X, from.Y, 0.6, Pen{}, &Fill{sty.Colour})
 		}
 	}
@@ -418,7 +436,11 @@ func (b *builder) leadEndView(c *canvas, o Point, r float64, capX, capY, capW fl
 		c.box(t.X-tw/2, t.Y-1.9, tw, 3.8, Pen{Width: 0.3, Colour: Ink}, &Fill{White})
 		c.label(t.X, t.Y, sizeMin, Bold, Ink, mk)
 	}
-	text := fmt.Sprintf("the stator seen from the lead end, teeth numbered counter-clockwise; every one of the %d jumpers drawn as an arc from the slot it leaves to the slot it enters, in its phase's line pattern", jumpers)
+	numbered := "teeth numbered counter-clockwise"
+	if every > 1 {
+		numbered = fmt.Sprintf("teeth numbered counter-clockwise (every %s tooth)", ordinal(every))
+	}
+	text := fmt.Sprintf("the stator seen from the lead end, "+numbered+"; every one of the %d jumpers drawn as an arc from the slot it leaves to the slot it enters, in its phase's line pattern", jumpers)
 	if paths > 1 {
 		text += fmt.Sprintf(", each of the %d parallel paths of a phase on its own ring and branching to the phase's terminals", paths)
 	}

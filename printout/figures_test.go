@@ -3,12 +3,16 @@ package printout
 import (
 	"fmt"
 	"math"
+	"path/filepath"
 	"slices"
 	"strings"
 	"testing"
 
 	"coilwright/printout/pdftext"
 	"coilwright/winding"
+	"coilwright/winding/job"
+	"coilwright/winding/job/jobtest"
+	"coilwright/winding/plan"
 )
 
 // The design figures sheet carries the four figures with their captions,
@@ -106,5 +110,62 @@ func TestLeadEndViewJumpers(t *testing.T) {
 	}
 	if jumpers == 0 || arcs != jumpers {
 		t.Errorf("lead-end view draws %d jumper arcs; want one per jumper, %d", arcs, jumpers)
+	}
+}
+
+// The lead-end view of a delta winding with two parallel paths: tooth
+// numbers keep apart (every 2nd where every tooth would crowd), and the
+// branch of a second path runs round the outside to its phase's terminal,
+// never across the stator (no point of a lead comes nearer the centre than
+// the tooth it leaves).
+func TestLeadEndViewBranchesRoundTheOutside(t *testing.T) {
+	j, err := job.Load(filepath.Join(jobtest.Dir(t), "delta_paths_airgap.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := plan.Build(j)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	fig := pagesOf(pk, FiguresPage)[0]
+	if o := overlappingTexts(fig); len(o) > 0 {
+		t.Errorf("figures sheet: %d words overlap, first %s", len(o), o[0])
+	}
+	var o Point
+	found := false
+	for _, s := range fig.Shapes {
+		if a, ok := s.(*Arc); ok && a.Pen.Width == 0.5 && math.Abs(a.Sweep) < 360 {
+			o, found = a.Centre, true
+		}
+	}
+	if !found {
+		t.Fatal("lead-end view has no jumper arc")
+	}
+	leads := 0
+	for _, s := range fig.Shapes {
+		pl, ok := s.(*Poly)
+		if !ok || pl.Closed || len(pl.Points) < 3 || pl.Pen.Width != 0.5 {
+			continue
+		}
+		leads++
+		r0 := math.Hypot(pl.Points[0].X-o.X, pl.Points[0].Y-o.Y)
+		near := r0
+		for i := 1; i < len(pl.Points); i++ {
+			a, z := pl.Points[i-1], pl.Points[i]
+			for k := 0; k <= 40; k++ { // along each segment, not only its ends
+				f := float64(k) / 40
+				near = math.Min(near, math.Hypot(a.X+f*(z.X-a.X)-o.X, a.Y+f*(z.Y-a.Y)-o.Y))
+			}
+		}
+		if near < r0-0.01 {
+			t.Errorf("lead from (%.1f, %.1f) passes %.1f mm from the centre, inside the teeth at %.1f mm", pl.Points[0].X, pl.Points[0].Y, near, r0)
+		}
+	}
+	if want := 2 * len(p.Layout.Chains); leads != want {
+		t.Errorf("lead-end view draws %d leads; want %d (start and finish of every path)", leads, want)
 	}
 }

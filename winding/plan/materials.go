@@ -41,15 +41,16 @@ func (b *builder) materials() error {
 		marks = append(marks, n+"1", n+"2")
 	}
 	p.Materials = append(p.Materials, Material{Item: "terminal marker", Count: len(marks), SizeText: strings.Join(marks, " ")})
-	joints := 1
+	joints, where := 1, "the star point"
 	if p.Connection.String() == "delta" {
-		joints = len(l.PhaseNames)
+		joints, where = len(l.PhaseNames), fmt.Sprintf("the %d delta corners", len(l.PhaseNames))
 	}
 	if l.Spec.Paths > 1 {
 		joints += 2 * len(l.PhaseNames)
+		where += fmt.Sprintf(", and the %d joints of the parallel paths at the terminals", 2*len(l.PhaseNames))
 	}
 	p.Materials = append(p.Materials, Material{Item: "joint sleeve (heat-shrink) or crimp", Count: joints,
-		SizeText: "to take the joined wires", Note: "star point or delta corners, and parallel-path joints"})
+		SizeText: "to take the joined wires", Note: where})
 	p.Materials = append(p.Materials, Material{Item: "lacing cord", Count: 1,
 		SizeText: "to tie jumpers and leads at the lead end", Note: "common practice"})
 	return nil
