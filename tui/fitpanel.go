@@ -67,8 +67,10 @@ func (pp *panelParts) need() int {
 
 // fit lays the parts into h rows. Everything when it fits; else the live
 // parts, as many useful parts as fit (in order), as much of the rest as fits
-// and a more line. Once the more key is pressed (page > 0) the useful parts
-// join the rest, which is shown page by page below the live parts.
+// and a more line saying how many lines are cut. Each press of the more key
+// (page 1, 2, ...) shows the next of the cut lines below the live parts, in
+// the rows the useful parts took too, and after the last page the panel
+// comes back as it was: every press shows something new.
 func (pp *panelParts) fit(h, page int, st *styles) []string {
 	if h <= 0 {
 		return nil
@@ -86,17 +88,20 @@ func (pp *panelParts) fit(h, page int, st *styles) []string {
 		switch {
 		case pt.prio == partLive:
 			keep[i] = true
-		case pt.prio == partUseful && len(pt.lines) <= room && page == 0:
+		case pt.prio == partUseful && len(pt.lines) <= room:
 			keep[i] = true
 			room -= len(pt.lines)
 		}
 	}
-	var out, rest []string
+	var out, live, rest []string
 	for i, pt := range pp.parts {
 		if keep[i] {
 			out = append(out, pt.lines...)
 		} else if pt.prio == partUseful {
 			rest = append(rest, pt.lines...)
+		}
+		if pt.prio == partLive {
+			live = append(live, pt.lines...)
 		}
 	}
 	for _, pt := range pp.parts {
@@ -112,18 +117,24 @@ func (pp *panelParts) fit(h, page int, st *styles) []string {
 		return append(out, rest...)
 	}
 	room-- // the more line
-	if room <= 0 {
-		return append(out, st.dim.Render(clip(fmt.Sprintf("-- %d more lines: m shows them --", len(rest)), pp.w)))
+	first := rest[:max(0, room)]
+	cut := rest[len(first):]
+	pageRoom := h - len(live) - 1
+	pages := 0
+	if pageRoom > 0 {
+		pages = (len(cut) + pageRoom - 1) / pageRoom
 	}
-	pages := (len(rest) + room - 1) / room
-	p := page
-	if page > 0 {
-		p = page - 1 // the useful parts went into the pages
+	if p := page % (pages + 1); p > 0 {
+		a, b := (p-1)*pageRoom, min(len(cut), p*pageRoom)
+		next := "m shows the next"
+		if p == pages {
+			next = "m goes back"
+		}
+		out = append(live, cut[a:b]...)
+		return append(out, st.dim.Render(clip(fmt.Sprintf("-- more %d/%d: %s --", p, pages, next), pp.w)))
 	}
-	p %= pages
-	a, b := p*room, min(len(rest), (p+1)*room)
-	out = append(out, rest[a:b]...)
-	return append(out, st.dim.Render(clip(fmt.Sprintf("-- more: m shows the next (%d-%d of %d) --", a+1, b, len(rest)), pp.w)))
+	out = append(out, first...)
+	return append(out, st.dim.Render(clip(fmt.Sprintf("-- %d more lines: m shows them --", len(cut)), pp.w)))
 }
 
 // morePage is the page of cut lines the panel shows: the more key counts

@@ -166,7 +166,7 @@ func (g guideModel) resize() guideModel {
 	w := max(10, g.c.width-16)
 	g.note.Width = w
 	for i := range g.fields {
-		g.fields[i].Width = fieldWidth(g.fields[i])
+		g.fields[i].Width = fieldWidth(g.fields[i]) - 1
 	}
 	return g
 }
@@ -210,7 +210,13 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 	case modeReadings:
 		return g.updateReadings(msg, s, ok)
 	case modeVerdict:
+		failed := g.verdict != nil && g.verdict.Level == "fail"
 		switch {
+		case failed && msg.Type == tea.KeyEnter:
+			// A failed test is recorded only with y: a second tap of
+			// enter must not pass over it.
+			g.flash = "the test FAILED: y records it as failed, esc goes back"
+			return g, nil
 		case key.Matches(msg, k.confirm.Yes):
 			if ok && g.verdict != nil {
 				g.c.record(Entry{Kind: EntryReading, Step: s.Index, Readings: readingsOf(g.labels, g.values), Verdict: g.verdict.Level})
@@ -219,8 +225,13 @@ func (g guideModel) update(msg tea.KeyMsg) (guideModel, tea.Cmd) {
 			}
 			g.mode, g.verdict = modeWork, nil
 		case key.Matches(msg, k.confirm.No):
+			if ok && s.Test == plan.TestBalance {
+				// The balance has no readings of its own to type again.
+				g.mode, g.verdict = modeWork, nil
+				return g, nil
+			}
 			g.mode, g.verdict = modeReadings, nil
-			return g, g.focusField(g.focus)
+			return g, g.focusField(0)
 		}
 		return g, nil
 	case modeConfirmTurns:
@@ -423,14 +434,17 @@ func (g guideModel) startReadings(s plan.Step) (guideModel, tea.Cmd) {
 	g.labels = fieldsFor(g.c.plan, t)
 	g.fields = make([]textinput.Model, len(g.labels))
 	for i, f := range g.labels {
-		g.fields[i] = newTextInput(fmt.Sprintf("%-8s ", f.label), 16)
+		g.fields[i] = newTextInput("", 16) // the label is drawn beside the box (fieldLine)
 		g.fields[i].Placeholder = f.unit
+		if f.u == plan.UnitOhm && f.expected != nil && f.expected.Value < 1 {
+			g.fields[i].Placeholder = "Ω or mΩ" // "285.5m" reads as milliohms (readingValue)
+		}
 		if f.def != "" {
 			// A preset stands as the placeholder, so what is typed replaces
 			// it rather than running on after it; an empty field keeps it.
 			g.fields[i].Placeholder = f.def + " " + f.unit
 		}
-		g.fields[i].Width = fieldWidth(g.fields[i])
+		g.fields[i].Width = fieldWidth(g.fields[i]) - 1 // the cursor takes a cell
 	}
 	if r := g.c.prog.Steps[s.Index-1].Reading; r != nil {
 		vals, ok := valuesOf(g.labels, r.Values)
@@ -496,30 +510,26 @@ func (g guideModel) updateReadings(msg tea.KeyMsg, s plan.Step, ok bool) (guideM
 	return g, cmd
 }
 
-// parseReadings reads every field as a number that is not negative; on a
-// bad field it returns its index and why.
+// parseReadings reads every field as a number that is not negative, as
+// readingValue takes it; on a bad field it returns its index and why.
 func parseReadings(fs []textinput.Model, labels []field) ([]float64, int, string) {
 	out := make([]float64, 0, len(fs))
 	for i, f := range fs {
-		txt := strings.TrimSpace(strings.ReplaceAll(f.Value(), ",", "."))
-		if txt == "" && i < len(labels) && labels[i].def != "" {
-			txt = labels[i].def // an empty field keeps its preset
-		}
-		v, err := strconv.ParseFloat(txt, 64)
-		name := "reading"
+		txt := strings.TrimSpace(f.Value())
+		fd := field{label: "reading"}
 		if i < len(labels) {
-			name = labels[i].label
+			fd = labels[i]
 		}
-		switch {
-		case txt == "" && i < len(labels) && labels[i].optional:
+		if txt == "" && fd.def != "" {
+			txt = fd.def // an empty field keeps its preset
+		}
+		if txt == "" && fd.optional {
 			out = append(out, 0) // not taken
 			continue
-		case txt == "":
-			return nil, i, name + ": type a number"
-		case err != nil || v != v || v > 1e15 || v < -1e15:
-			return nil, i, fmt.Sprintf("%s: %q is not a number (use digits and a point, e.g. 1.25)", name, txt)
-		case v < 0:
-			return nil, i, fmt.Sprintf("%s: %s is negative; readings here are magnitudes", name, txt)
+		}
+		v, err := readingValue(txt, fd)
+		if err != "" {
+			return nil, i, fd.label + ": " + err
 		}
 		out = append(out, v)
 	}
@@ -535,7 +545,14 @@ func (g guideModel) shortHelp() []key.Binding {
 	case modeReadings:
 		return []key.Binding{k.typing.Accept, k.typing.Next, k.typing.Cancel}
 	case modeVerdict:
-		return []key.Binding{withHelp(k.confirm.Yes, "record and go on"), withHelp(k.confirm.No, "type again")}
+		yes, no := withHelp(k.confirm.Yes, "record and go on"), withHelp(k.confirm.No, "type again")
+		if g.verdict != nil && g.verdict.Level == "fail" {
+			yes = withHelp(k.confirm.Accept, "record as failed")
+		}
+		if s, ok := g.c.step(g.c.prog.Current()); ok && s.Test == plan.TestBalance {
+			no = withHelp(k.confirm.No, "back")
+		}
+		return []key.Binding{yes, no}
 	case modeConfirmTurns:
 		return []key.Binding{withHelp(k.confirm.Accept, "record this count"), withHelp(k.confirm.No, "back to counting")}
 	case modeConfirmUndo:

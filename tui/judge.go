@@ -28,6 +28,8 @@ type field struct {
 	def   string // filled in beforehand (a test voltage, the room temperature)
 	// optional fields may be left empty: recorded as 0, "not taken".
 	optional bool
+	u        plan.Unit      // the reading's unit, as the plan's schema says
+	expected *plan.Expected // what the meter should show, nil where unknown
 }
 
 // fieldsFor lists the readings of a test from the plan's reading schema
@@ -38,7 +40,7 @@ func fieldsFor(p *plan.Plan, t plan.Test) []field {
 	}
 	out := make([]field, len(t.Readings))
 	for i, r := range t.Readings {
-		f := field{key: r.Key, label: r.Label, unit: string(r.Unit), optional: r.Optional}
+		f := field{key: r.Key, label: r.Label, unit: string(r.Unit), optional: r.Optional, u: r.Unit, expected: r.Expected}
 		if r.Unit == plan.UnitPassFail {
 			f.unit = "1 held, 0 broke down"
 		}

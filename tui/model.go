@@ -274,7 +274,7 @@ func (m *Model) header() string {
 	if spec := c.specText(); spec != "" {
 		rest += " | " + spec
 	}
-	room := max(0, c.width-len(right)-1-len(title))
+	room := max(0, c.width-len(right)-2-len(title)) // two spaces before the counts
 	if lipglossWidth(rest) > room {
 		rest = " | " + c.planName()
 	}
@@ -321,7 +321,7 @@ func (m *Model) helpLine() string {
 	case screenOverview:
 		b = []key.Binding{k.scroll.Choose, k.scroll.Pick, k.scroll.Back, k.global.Quit}
 	default:
-		b = []key.Binding{k.scroll.Up, k.scroll.Down, k.scroll.PageDown, k.scroll.Back, k.global.Quit}
+		b = []key.Binding{k.scroll.Up, k.scroll.Down, k.scroll.PageDown, k.global.Quit}
 	}
 	return m.keyLine(b)
 }
@@ -342,6 +342,10 @@ func (m *Model) keyLine(b []key.Binding) string {
 		tail = []key.Binding{withHelp(k.Help, "help after esc"), withHelp(k.Quit, "quit after esc")}
 	}
 	if m.screen == screenHelp {
+		// ? closes the help screen, as esc does: said first, so it is kept.
+		back := k.Help
+		back.SetHelp("?/esc", "back to the guide")
+		head = append([]key.Binding{back}, head...)
 		tail = tail[1:]
 	}
 	h := m.keyHelp

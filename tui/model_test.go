@@ -286,7 +286,7 @@ func TestGlobalKeys(t *testing.T) {
 		t.Fatalf("o shows %v; want overview", m.screen)
 	}
 	v := plain(m)
-	for _, want := range []string{"[>]", "connection order", "phase U path 1: U1 > 1 cw", "join U2+V2+W2"} {
+	for _, want := range []string{"[>]", "connection order", "phase U path 1: U1 > 1+U > 2-U", "join U2+V2+W2"} {
 		if !strings.Contains(v+m.overview.content(), want) {
 			t.Errorf("overview lacks %q", want)
 		}
@@ -332,7 +332,12 @@ func TestTestStepReadings(t *testing.T) {
 	if !strings.Contains(plain(m), "verdict: FAIL") {
 		t.Errorf("verdict not on screen:\n%s", plain(m))
 	}
-	keys(t, m, "enter")
+	keys(t, m, "enter") // a failed test is recorded only with y
+	if m.c.prog.Steps[s.Index-1].Done || m.guide.mode != modeVerdict || !strings.Contains(m.guide.flash, "y records it as failed") {
+		t.Fatalf("enter on a FAIL verdict: done %v, mode %v, flash %q; want the verdict still shown and y asked for",
+			m.c.prog.Steps[s.Index-1].Done, m.guide.mode, m.guide.flash)
+	}
+	keys(t, m, "y")
 	if !m.c.prog.Steps[s.Index-1].Done {
 		t.Fatal("the test step is not done after recording")
 	}

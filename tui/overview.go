@@ -120,8 +120,14 @@ func (o overviewModel) content() string {
 	b.WriteString(st.title.Render("connection order"))
 	b.WriteByte('\n')
 	for _, l := range connectionOrder(c.plan) {
-		b.WriteString(l)
-		b.WriteByte('\n')
+		// Wrapped under itself: a path's order is never cut at the edge.
+		for i, w := range wrapPlain(l, max(20, o.vp.Width-4)) {
+			if i > 0 {
+				b.WriteString("    ")
+			}
+			b.WriteString(w)
+			b.WriteByte('\n')
+		}
 	}
 	return strings.TrimRight(b.String(), "\n")
 }
@@ -147,6 +153,9 @@ func stepLine(c *shared, s plan.Step, i int) string {
 		title := s.Title
 		if k := string(s.Kind) + ": "; len(title) > len(k) && strings.EqualFold(title[:len(k)], k) {
 			title = title[len(k):]
+		}
+		if k := string(s.Kind) + " (optional): "; len(title) > len(k) && strings.EqualFold(title[:len(k)], k) {
+			title = title[len(k):] + " (optional)"
 		}
 		t = fmt.Sprintf("%-10s %s", s.Kind, title)
 	}
@@ -177,15 +186,18 @@ func connectionOrder(p *plan.Plan) []string {
 		}
 		parts := []string{ch.Start}
 		for _, t := range ch.Teeth {
-			d := "?"
-			if co, ok := l.CoilOn(t); ok {
-				d = co.Direction.String()
+			// Each coil as the ring shows it: the tooth and its signed
+			// token, +U clockwise seen from the air gap.
+			tok := "?"
+			if co, ok := l.CoilOn(t); ok && co.Phase >= 0 && co.Phase < len(l.PhaseNames) {
+				tok = winding.SenseToken(l.PhaseNames[co.Phase], co.Direction)
 			}
-			parts = append(parts, fmt.Sprintf("%d %s", t, d))
+			parts = append(parts, fmt.Sprintf("%d%s", t, tok))
 		}
 		parts = append(parts, ch.Finish)
 		out = append(out, fmt.Sprintf("phase %s path %d: %s", name, ch.Path, strings.Join(parts, " > ")))
 	}
+	out = append(out, "(+U wound clockwise, -U counter-clockwise, seen from the air gap)")
 	for _, j := range winding.Joints(p.Connection, l.PhaseNames) {
 		out = append(out, fmt.Sprintf("join %s: %s", strings.Join(j.Marks, "+"), j.What))
 	}

@@ -455,7 +455,7 @@ func (g guideModel) testView(pp *panelParts, s plan.Step) {
 	case modeReadings:
 		pp.add(partLive, func(b *lines) {
 			for i := range g.fields {
-				b.raw(g.fieldLine(t, i))
+				b.raw(g.fieldLine(t, i, b.w)...)
 			}
 			if g.inErr != "" {
 				b.text(g.inErr, c.st.fail.Render)
@@ -465,16 +465,23 @@ func (g guideModel) testView(pp *panelParts, s plan.Step) {
 		pp.add(partLive, func(b *lines) {
 			for i := range g.fields {
 				if i < len(g.labels) && i < len(g.values) {
-					b.kv(g.labels[i].label, valueText(t, i, g.values[i]))
+					b.kv(g.labels[i].label, g.verdictValue(t, i))
 				}
 			}
 			g.verdictView(b, g.verdict)
-			b.text("enter/y records it and goes on; esc types the readings again.", c.st.statusNow.Render)
+			yes, again := "enter/y records it and goes on", "esc types the readings again."
+			if g.verdict != nil && g.verdict.Level == "fail" {
+				yes = "y records it as failed"
+			}
+			if s.Test == plan.TestBalance {
+				again = fmt.Sprintf("esc goes back (these are step %d's readings: undo it to change them).", c.resistanceStep()+1)
+			}
+			b.text(yes+"; "+again, c.st.statusNow.Render)
 		})
 	default:
 		pp.add(partLive, func(b *lines) {
 			if s.Test != plan.TestBalance {
-				for _, e := range expectLines(t) {
+				for _, e := range expectLines(t, b.w) {
 					b.text(e, c.st.value.Render)
 				}
 			}
@@ -556,6 +563,23 @@ func (g guideModel) doneView(b *lines) {
 	c := g.c
 	b.titled("all steps done", fmt.Sprintf("%d of %d", c.prog.DoneCount(), len(c.steps())))
 	b.text(fmt.Sprintf("Every step of %s is recorded: %d coils wound.", c.planName(), c.prog.CoilsDone()), c.st.value.Render)
+	// A failed test is not forgotten at the end: named with its step.
+	var failed, skipped []string
+	for i, s := range c.steps() {
+		ps := c.prog.Steps[i]
+		switch {
+		case ps.Skipped:
+			skipped = append(skipped, fmt.Sprintf("step %d", s.Index))
+		case ps.Reading != nil && ps.Reading.Verdict == "fail":
+			failed = append(failed, fmt.Sprintf("step %d (%s)", s.Index, strings.TrimPrefix(s.Title, "Test: ")))
+		}
+	}
+	if len(failed) > 0 {
+		b.text("FAILED: "+strings.Join(failed, ", ")+": find the fault and test again before the stator is used.", c.st.fail.Render)
+	}
+	if len(skipped) > 0 {
+		b.text("skipped (optional): "+strings.Join(skipped, ", "), c.st.dim.Render)
+	}
 	b.text("o shows every step with its record; u takes back the last one; q quits.", c.st.dim.Render)
 }
 

@@ -242,12 +242,15 @@ func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 			}
 		}
 		b.text(polarityRow(teeth, v), st.value.Render)
+		verdictShown := next == len(teeth) && !looking
 		for i, tp := range teeth {
-			if seen, ok := plan.PoleFromValue(v[i]); ok && seen != tp.Pole {
+			if seen, ok := plan.PoleFromValue(v[i]); ok && seen != tp.Pole && !verdictShown {
+				// Once every tooth is read the verdict names it, with
+				// what to do: said once.
 				b.text(mismatchText(tp, seen), st.fail.Render)
 			}
 		}
-		if next == len(teeth) && !looking {
+		if verdictShown {
 			verdict := polarityVerdict(c.plan, s, v)
 			g.verdictView(b, &verdict)
 			b.text("enter records the step; n adds a note; bksp reads the last tooth again.", st.statusNow.Render)
@@ -257,7 +260,11 @@ func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 	pp.add(partUseful, func(b *lines) {
 		b.text(s.Title, st.strong.Render)
 		if t.Current > 0 {
-			b.kv("DC", fmt.Sprintf("%s A into X1, out of X2 (%s of heat in the phase)", fmtNum(t.Current), fmtWatts(t.HeatW)))
+			into, out := "each phase's start lead", "its finish lead, one phase at a time,"
+			if len(s.Phases) == 1 {
+				into, out = s.Phases[0]+"1", s.Phases[0]+"2"
+			}
+			b.kv("DC", fmt.Sprintf("%s A into %s (+), out of %s (-) (%s of heat in the phase)", fmtNum(t.Current), into, out, fmtWatts(t.HeatW)))
 		}
 	})
 	pp.add(partProse, func(b *lines) {

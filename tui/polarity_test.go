@@ -55,7 +55,7 @@ func TestPolarityWalkAllRight(t *testing.T) {
 		t.Fatalf("polarity step walks %d teeth, tooth in hand %d; want 8 starting at tooth %d", len(teeth), m.c.currentTooth(), teeth[0].Tooth)
 	}
 	v := plain(m)
-	for _, want := range []string{"tooth 1  phase U  expect S (south)", "north end points AT the face", "1.3 A into X1", "current-limited", "n north", "s south", "x unsure"} {
+	for _, want := range []string{"tooth 1  phase U  expect S (south)", "north end points AT the face", "1.3 A into U1 (+), out of U2 (-)", "current-limited", "n north", "s south", "x unsure"} {
 		if !strings.Contains(v, want) {
 			t.Errorf("polarity step view lacks %q:\n%s", want, v)
 		}

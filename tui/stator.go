@@ -205,7 +205,7 @@ func styledToken(st *styles, t int, ti toothInfo, mk marks, tw int) string {
 // renderRing draws the ring with a caption in the middle.
 func renderRing(st *styles, g ringGeometry, teeth []toothInfo, mk marks, caption []string) drawing {
 	type seg struct {
-		x    int
+		x, y int
 		w    int
 		text string
 	}
@@ -214,26 +214,44 @@ func renderRing(st *styles, g ringGeometry, teeth []toothInfo, mk marks, caption
 		if i >= len(g.x) {
 			break
 		}
-		rows[g.y[i]] = append(rows[g.y[i]], seg{g.x[i], g.tw, styledToken(st, i+1, ti, mk, g.tw)})
+		rows[g.y[i]] = append(rows[g.y[i]], seg{x: g.x[i], y: g.y[i], w: g.tw, text: styledToken(st, i+1, ti, mk, g.tw)})
 	}
-	// Caption lines centred in the ring.
-	top := g.cy - len(caption)/2
-	for k, c := range caption {
-		y := top + k
-		cw := len(c)
-		if y < 1 || y >= g.h-1 || cw == 0 || cw > g.innerWidth(y) {
-			continue
+	// Caption lines centred in the ring, all of them or, when they do not
+	// all fit, those before the first blank line, or none: a caption cut in
+	// the middle could say half of what the signs mean.
+	place := func(caption []string) ([]seg, bool) {
+		var out []seg
+		top := g.cy - len(caption)/2
+		for k, c := range caption {
+			y := top + k
+			cw := len(c)
+			if cw == 0 {
+				continue
+			}
+			if y < 1 || y >= g.h-1 || cw > g.innerWidth(y) {
+				return nil, false
+			}
+			x := g.cx - cw/2
+			for _, t := range rows[y] {
+				if x < t.x+t.w+1 && t.x < x+cw+1 {
+					return nil, false
+				}
+			}
+			out = append(out, seg{x: x, y: y, w: cw, text: st.dim.Render(c)})
 		}
-		x := g.cx - cw/2
-		free := true
-		for _, t := range rows[y] {
-			if x < t.x+t.w+1 && t.x < x+cw+1 {
-				free = false
+		return out, true
+	}
+	segs, ok := place(caption)
+	if !ok {
+		for i, c := range caption {
+			if c == "" {
+				segs, _ = place(caption[:i])
+				break
 			}
 		}
-		if free {
-			rows[y] = append(rows[y], seg{x, cw, st.dim.Render(c)})
-		}
+	}
+	for _, sg := range segs {
+		rows[sg.y] = append(rows[sg.y], sg)
 	}
 	d := drawing{width: g.w, lines: make([]string, g.h)}
 	var b strings.Builder
@@ -345,25 +363,49 @@ func stripCaption(a, b, q, w int) string {
 	return s
 }
 
-// legend explains the marks in one line, shortened to fit w; while a step
-// other than the current one is looked at it names the '*' mark too, on a
-// second line when one is too narrow.
+// legend explains the marks in as few lines of width w as it takes (two at
+// most), the words for the signs shortened first; while a step other than
+// the current one is looked at it names the '*' mark too. The sense of the
+// signs is never shown without its view: "seen from the air gap", or
+// "(from air gap)" when short; nil when not even that fits.
 func legend(w int, looking bool) []string {
-	long := "# wound  @ now  f from  n next  +U clockwise  -U counter-clockwise (seen from the air gap)"
-	short := "# wound  @ now  f from  n next  +U cw  -U ccw"
+	marks := []string{"# wound", "@ now"}
 	if looking {
-		long = "# wound  @ now  * looking  f from  n next  +U cw  -U ccw (seen from the air gap)"
-		short = "# wound  @ now  * looking  +U cw  -U ccw"
+		marks = append(marks, "* looking")
 	}
-	switch {
-	case len(long) <= w:
-		return []string{long}
-	case len(short) <= w:
-		return []string{short}
-	case looking && len("# wound  @ now  * looking") <= w && len("f from  n next  +U cw  -U ccw") <= w:
-		return []string{"# wound  @ now  * looking", "f from  n next  +U cw  -U ccw"}
-	case len("# wound  @ now  f from  n next") <= w && len("+U cw  -U ccw") <= w:
-		return []string{"# wound  @ now  f from  n next", "+U cw  -U ccw"}
+	marks = append(marks, "f from", "n next")
+	senses := []string{
+		"+U clockwise  -U counter-clockwise, seen from the air gap",
+		"+U cw  -U ccw, seen from the air gap",
+		"+U cw -U ccw (from air gap)",
+	}
+	for _, lines := range []int{1, 2} {
+		for _, sense := range senses {
+			if out := packLegend(append(append([]string{}, marks...), sense), w); out != nil && len(out) <= lines {
+				return out
+			}
+		}
 	}
 	return nil
+}
+
+// packLegend lays legend items two spaces apart into lines of width w,
+// never splitting an item; nil when an item is wider than w.
+func packLegend(items []string, w int) []string {
+	var out []string
+	line := ""
+	for _, it := range items {
+		switch {
+		case len(it) > w:
+			return nil
+		case line == "":
+			line = it
+		case len(line)+2+len(it) <= w:
+			line += "  " + it
+		default:
+			out = append(out, line)
+			line = it
+		}
+	}
+	return append(out, line)
 }

@@ -18,8 +18,9 @@ import (
 // out with the skip key and recorded as skipped.
 
 // expectText says what the meter should show for reading i of test t, or ""
-// where the plan does not say: "expect 278.4 mΩ (259.2 – 298.3 mΩ)".
-func expectText(t plan.Test, i int) string {
+// where the plan does not say, the way the plan text says it:
+// "expect 285.5 mΩ (265.9 mΩ .. 305.8 mΩ)"; short leaves the window out.
+func expectText(t plan.Test, i int, short bool) string {
 	if i < 0 || i >= len(t.Readings) || t.Readings[i].Expected == nil {
 		return ""
 	}
@@ -27,8 +28,9 @@ func expectText(t plan.Test, i int) string {
 	e := r.Expected
 	s := "expect " + plan.FormatValue(e.Value, r.Unit)
 	switch {
+	case short:
 	case e.Low > 0 && e.High > 0:
-		s += " (" + plan.FormatValue(e.Low, r.Unit) + " – " + plan.FormatValue(e.High, r.Unit) + ")"
+		s += " (" + plan.FormatValue(e.Low, r.Unit) + " .. " + plan.FormatValue(e.High, r.Unit) + ")"
 	case e.High > 0:
 		s += " (under " + plan.FormatValue(e.High, r.Unit) + ")"
 	}
@@ -36,32 +38,77 @@ func expectText(t plan.Test, i int) string {
 }
 
 // expectLines is the expected readings of a test before its fields open:
-// one line per reading the plan knows a value for.
-func expectLines(t plan.Test) []string {
+// one line per reading the plan knows a value for, each shortened to w.
+func expectLines(t plan.Test, w int) []string {
 	var out []string
 	for i, r := range t.Readings {
-		if e := expectText(t, i); e != "" {
+		if e := expectText(t, i, false); e != "" {
+			if len(r.Label)+2+ansi.StringWidth(e) > w {
+				e = expectText(t, i, true)
+			}
 			out = append(out, r.Label+"  "+e)
 		}
 	}
 	return out
 }
 
-// fieldLine is a reading field with what the meter should show beside it.
-func (g guideModel) fieldLine(t plan.Test, i int) string {
-	v := g.fields[i].View()
-	e := expectText(t, i)
-	if e == "" {
-		return v
+// fieldCols are the columns of the reading fields: the labels, then the
+// input boxes, lined up down the fields that have an expected value (the
+// others take the width of their own label).
+func (g guideModel) fieldCols() (labelW, inputW int) {
+	labelW = 5
+	for _, f := range g.labels {
+		if f.expected != nil {
+			labelW = max(labelW, ansi.StringWidth(f.label))
+		}
 	}
-	col := fieldWidth(g.fields[i]) + 1
-	return v + strings.Repeat(" ", max(1, col-ansi.StringWidth(v))) + g.c.st.dim.Render(e)
+	for i := range g.fields {
+		inputW = max(inputW, fieldWidth(g.fields[i]))
+	}
+	return min(labelW, 20), inputW
+}
+
+// fieldLine is a reading field as "> U–V   [0.286     ]  expect ..." with
+// what the meter should show beside it ('>' marks the field being typed),
+// shortened to fit w, or with the expected value on a line of its own
+// when even the short form does not fit.
+func (g guideModel) fieldLine(t plan.Test, i, w int) []string {
+	st := g.c.st
+	lw, iw := g.fieldCols()
+	mark := "  "
+	if g.mode == modeReadings && i == g.focus {
+		mark = "> "
+	}
+	label := g.labels[i].label
+	in := ansi.Truncate(g.fields[i].View(), iw, "")
+	in += strings.Repeat(" ", max(0, iw-ansi.StringWidth(in)))
+	line := mark + st.strong.Render(label) + strings.Repeat(" ", max(1, lw+1-ansi.StringWidth(label))) + "[" + in + "]"
+	lineW := 2 + max(lw+1, ansi.StringWidth(label)+1) + iw + 2
+	long, short := expectText(t, i, false), expectText(t, i, true)
+	switch {
+	case long == "":
+		return []string{line}
+	case lineW+2+ansi.StringWidth(long) <= w:
+		return []string{line + "  " + st.dim.Render(long)}
+	case lineW+2+ansi.StringWidth(short) <= w:
+		return []string{line + "  " + st.dim.Render(short)}
+	}
+	return []string{line, "    " + st.dim.Render(ansi.Truncate(long, max(0, w-4), ""))}
+}
+
+// verdictValue is reading i as recorded, "not taken" for an optional field
+// left empty.
+func (g guideModel) verdictValue(t plan.Test, i int) string {
+	if i < len(g.labels) && g.labels[i].optional && i < len(g.fields) && strings.TrimSpace(g.fields[i].Value()) == "" {
+		return "not taken"
+	}
+	return valueText(t, i, g.values[i])
 }
 
 // skip records an optional test as left out.
 func (g guideModel) skip(s plan.Step) (guideModel, tea.Cmd) {
 	g.c.record(Entry{Kind: EntryDone, Step: s.Index, Skipped: true})
-	g.flash = fmt.Sprintf("step %d skipped (recorded as skipped): %s", s.Index, s.Title)
+	g.flash = fmt.Sprintf("step %d skipped: recorded as skipped", s.Index)
 	return g, nil
 }
 
@@ -105,10 +152,10 @@ func (g guideModel) balanceFromResistance(s plan.Step) (guideModel, tea.Cmd) {
 	return g, nil
 }
 
-// fieldWidth is the width a reading field takes: its prompt, then room for
-// the reading or its placeholder (the textinput counts the prompt in).
+// fieldWidth is the width of a reading field's box: room for the reading
+// or its placeholder, and the cursor.
 func fieldWidth(f textinput.Model) int {
-	return ansi.StringWidth(f.Prompt) + max(14, ansi.StringWidth(f.Placeholder)+2)
+	return max(10, ansi.StringWidth(f.Placeholder)+1)
 }
 
 // valueText is reading i of test t as the meter shows it, in the plan's one

@@ -49,8 +49,8 @@ func TestResistanceFieldsShowWhatTheMeterShows(t *testing.T) {
 			continue
 		}
 		want := r.Label + "  " // the field, then what it should read beside it
-		if !strings.Contains(v, r.Label) || !strings.Contains(v, expectText(res, i)) || !strings.Contains(v, "expect "+plan.FormatValue(r.Expected.Value, r.Unit)) {
-			t.Errorf("the resistance fields lack %q with %q:\n%s", want, expectText(res, i), v)
+		if !strings.Contains(v, r.Label) || !strings.Contains(v, expectText(res, i, false)) || !strings.Contains(v, "expect "+plan.FormatValue(r.Expected.Value, r.Unit)) {
+			t.Errorf("the resistance fields lack %q with %q:\n%s", want, expectText(res, i, false), v)
 		}
 	}
 	if p.Connection.String() == "star" && !strings.Contains(v, "U–V") {

@@ -15,7 +15,7 @@ import (
 // mirror for a counter-clockwise one. These marks are arrows, and they are
 // only ever drawn in this view, under the words that name it. Above the two
 // sides stand where the wire comes from (over the down slot) and where it
-// goes next (over the up slot).
+// goes next (over the up slot: "to tooth 7").
 
 // toothPictureWidth is the width of the picture in cells.
 const toothPictureWidth = 28
@@ -59,7 +59,9 @@ func toothPicture(cs *plan.CoilStep, tall bool) []string {
 		top, bottom, lside, rside = "<", ">", "v", "^"
 		lword, rword = "DOWN", "UP"
 	}
-	from, next := "from "+shortEnd(cs.From), "next "+shortEnd(cs.To)
+	// "to", not "next": the words stand over the slot the wire leaves by,
+	// which is not the side the next tooth lies on.
+	from, next := "from "+shortEnd(cs.From), "to "+shortEnd(cs.To)
 	lends, rends := next, from
 	if !downRight {
 		lends, rends = from, next
@@ -70,6 +72,10 @@ func toothPicture(cs *plan.CoilStep, tall bool) []string {
 			return clip(l+" "+r, toothPictureWidth)
 		}
 		return l + strings.Repeat(" ", gap) + r
+	}
+	centre := func(s string) string {
+		lp := max(0, (toothPictureWidth-len(s))/2)
+		return strings.Repeat(" ", lp) + s + strings.Repeat(" ", max(0, toothPictureWidth-lp-len(s)))
 	}
 	num := strconv.Itoa(cs.Tooth)
 	box := 11 // "+---------+"
@@ -102,7 +108,7 @@ func toothPicture(cs *plan.CoilStep, tall bool) []string {
 	out = append(out,
 		row(lside, "+---------+", rside),
 		back,
-		pad("air-gap view,", "lead end up"),
+		centre("air-gap view, lead end up"),
 	)
 	return out
 }

@@ -82,14 +82,16 @@ func (c *shared) ringCaption(i int) []string {
 		return nil
 	}
 	if s, ok := c.step(i); ok && s.Kind == plan.StepSetup {
-		return []string{"slot 1 lies", "between", "tooth 1 and 2", "", "lead end view", "numbers ccw"}
+		return []string{"slot 1 lies", "between", "tooth 1 and 2", "", "ring seen from", "the lead end,", "numbers ccw"}
 	}
 	s := c.plan.Layout.Spec
 	out := []string{strconv.Itoa(s.Slots) + " slots", strconv.Itoa(s.Poles) + " poles"}
 	if c.plan.Rotor != "" {
 		out = append(out, string(c.plan.Rotor)+" rotor")
 	}
-	return append(out, "", "lead end view", "numbers ccw")
+	// The ring is the lead-end view, but the signs are senses seen from
+	// the air gap: the caption says both, so no sign is read as an arrow.
+	return append(out, "", "ring seen from", "the lead end,", "numbers ccw;", "+U cw, -U ccw", "seen from", "the air gap")
 }
 
 // joinColumns puts two blocks side by side with a gap, padding the left one
