@@ -17,8 +17,12 @@ import (
 // minimum, 60x18, and checks that the parts the work depends on are on the
 // screen: the key line with ? and q; for a coil its tooth, its sense in
 // words, its down and up slots and the count; for a jumper the slots it
-// leaves and enters; for a test its fields once opened and an error typed
-// into them; the note field once opened.
+// leaves and enters; for a test the expected values, then its fields once
+// opened, each with what the meter should show on its line, and an error
+// typed into them; for the balance its verdict from the resistance readings
+// recorded; for a polarity step the tooth in hand and the pole it must show,
+// an unsure tooth marked, and with every tooth read (one the other pole) the
+// verdict naming it; the note field once opened.
 func TestEveryStepShowsItsLiveParts(t *testing.T) {
 	inner := job.Demo()
 	inner.Stator.Rotor = job.RotorInner
@@ -35,7 +39,11 @@ func TestEveryStepShowsItsLiveParts(t *testing.T) {
 				name := fmt.Sprintf("%s %dx%d step %d (%s)", jc.name, size[0], size[1], s.Index, s.Kind)
 				open := func() *Model {
 					var history []Entry
-					for _, e := range doneUpTo(p, func(x plan.Step) bool { return x.Index == s.Index }) {
+					h := doneUpTo(p, func(x plan.Step) bool { return x.Index == s.Index })
+					if s.Test == plan.TestBalance {
+						h = resistanceReadings(t, p) // the readings the balance is judged from
+					}
+					for _, e := range h {
 						history = append(history, progress.Stamp(p, e))
 					}
 					m := New(Options{Plan: p, Recorder: &memRecorder{}, Now: fixedNow, History: history})
@@ -47,17 +55,47 @@ func TestEveryStepShowsItsLiveParts(t *testing.T) {
 				if got := m.c.prog.Current(); got != s.Index-1 {
 					t.Fatalf("%s: current step %d; want %d", name, got+1, s.Index)
 				}
-				checkLive(t, name, plain(m), liveWords(s))
+				checkLive(t, name, plain(m), liveWords(p, s))
 				if isPolarity(s) {
-					continue // its own keys (n is north there): polarity_test.go
+					// Every tooth read right but the last: the verdict, the
+					// tooth named and the key that records it.
+					teeth := polarityTeeth(p, s)
+					for i, tp := range teeth {
+						k := strings.ToLower(string(tp.Pole))
+						if i == len(teeth)-1 {
+							k = map[string]string{"n": "s", "s": "n"}[k]
+						}
+						keys(t, m, k)
+					}
+					last := teeth[len(teeth)-1]
+					checkLive(t, name+" verdict", plain(m), []string{"verdict: FAIL", fmt.Sprintf("tooth %d shows", last.Tooth), "enter records the step"})
+					m = open()
+					keys(t, m, "x") // unsure: the next tooth comes up
+					if len(teeth) > 1 {
+						checkLive(t, name+" unsure", plain(m), []string{fmt.Sprintf("tooth %d", teeth[1].Tooth), "expect " + poleWord(teeth[1].Pole), fmt.Sprintf("%d%s?", teeth[0].Tooth, teeth[0].Pole)})
+					}
+					continue // n is north there, not a note: polarity_test.go
+				}
+				if s.Test == plan.TestBalance {
+					keys(t, m, "enter")
+					checkLive(t, name+" verdict", plain(m), []string{"verdict: PASS", "285.5 mΩ", "286.1 mΩ", "285.8 mΩ", "enter/y records it"})
 				}
 				if s.Kind == plan.StepTest && s.Test != plan.TestBalance {
 					keys(t, m, "enter")
+					v := plain(m)
 					var want []string
 					for _, f := range m.guide.labels {
 						want = append(want, f.label)
 					}
-					checkLive(t, name+" fields", plain(m), want)
+					checkLive(t, name+" fields", v, want)
+					// What the meter should show stands beside its field,
+					// on the field's own line.
+					tst := m.c.tests[s.Test]
+					for i, r := range tst.Readings {
+						if e := expectText(tst, i, true); e != "" && !lineHas(v, r.Label, e) {
+							t.Errorf("%s: no line with the field %q and %q beside it:\n%s", name, r.Label, e, v)
+						}
+					}
 					keys(t, m, "x")
 					for range m.guide.labels {
 						keys(t, m, "enter")
@@ -76,20 +114,49 @@ func TestEveryStepShowsItsLiveParts(t *testing.T) {
 	}
 }
 
+// lineHas reports whether one line of v holds every word, in order.
+func lineHas(v string, words ...string) bool {
+	for _, l := range strings.Split(v, "\n") {
+		rest, ok := l, true
+		for _, w := range words {
+			i := strings.Index(rest, w)
+			if i < 0 {
+				ok = false
+				break
+			}
+			rest = rest[i+len(w):]
+		}
+		if ok {
+			return true
+		}
+	}
+	return false
+}
+
 // liveWords are the words step s must show.
-func liveWords(s plan.Step) []string {
+func liveWords(p *plan.Plan, s plan.Step) []string {
 	switch {
 	case s.Coil != nil:
 		c := s.Coil
 		return []string{fmt.Sprintf("tooth %d", c.Tooth), senseWord(c), plan.SlotWords(c.DownSlot, c.UpSlot), fmt.Sprintf("of %d turns", c.Turns)}
 	case isPolarity(s):
-		return []string{"expect", "read:"}
+		tp := polarityTeeth(p, s)[0]
+		return []string{fmt.Sprintf("tooth %d", tp.Tooth), "expect " + poleWord(tp.Pole), "read:"}
 	case s.Jumper != nil:
 		return []string{fmt.Sprintf("leaves slot %d", s.Jumper.LeavesSlot), fmt.Sprintf("enters slot %d", s.Jumper.EntersSlot)}
 	case s.Kind == plan.StepTest && s.Test == plan.TestBalance:
 		return []string{"Press enter to judge the balance"}
 	case s.Kind == plan.StepTest:
-		return []string{"Press enter to type the readings"}
+		// The expected values before the fields open, too.
+		out := []string{"Press enter to type the readings"}
+		for _, t := range p.Tests {
+			for i := range t.Readings {
+				if e := expectText(t, i, true); t.Name == s.Test && e != "" {
+					out = append(out, e)
+				}
+			}
+		}
+		return out
 	}
 	return []string{"Press enter when this is done"}
 }

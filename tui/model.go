@@ -275,8 +275,16 @@ func (m *Model) header() string {
 		rest += " | " + spec
 	}
 	room := max(0, c.width-len(right)-2-len(title)) // two spaces before the counts
-	if lipglossWidth(rest) > room {
-		rest = " | " + c.planName()
+	if spec := c.specText(); lipglossWidth(rest) > room && spec != "" {
+		// The spec (an inner rotor where the name says outer, say) is kept
+		// whole and the name cut, while a readable part of the name is left.
+		if nameRoom := room - len(" | ") - lipglossWidth(" | "+spec); nameRoom >= 12 {
+			rest = " | " + ansi.Truncate(c.planName(), nameRoom, "...") + " | " + spec
+		} else if lipglossWidth(" | "+spec) <= room {
+			rest = " | " + spec
+		} else {
+			rest = " | " + c.planName()
+		}
 	}
 	if lipglossWidth(rest) > room {
 		rest = ansi.Truncate(rest, room, "...")

@@ -539,6 +539,18 @@ func (g guideModel) verdictView(b *lines, v *Verdict) {
 		return
 	}
 	st := g.c.st
+	g.verdictLines(b, v)
+	if v.Level == "fail" {
+		b.text("Find the fault before going on: a failed test is recorded as failed.", st.fail.Render)
+	}
+}
+
+// verdictLines shows a verdict's word, in its colour, and its lines.
+func (g guideModel) verdictLines(b *lines, v *Verdict) {
+	if v == nil {
+		return
+	}
+	st := g.c.st
 	render := st.warn.Render
 	switch v.Level {
 	case "pass":
@@ -549,9 +561,6 @@ func (g guideModel) verdictView(b *lines, v *Verdict) {
 	b.raw(render("verdict: " + strings.ToUpper(v.Level)))
 	for _, l := range v.Lines {
 		b.text(l, st.value.Render)
-	}
-	if v.Level == "fail" {
-		b.text("Find the fault before going on: a failed test is recorded as failed.", st.fail.Render)
 	}
 }
 

@@ -241,8 +241,14 @@ func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 				b.text(fmt.Sprintf("clips on %s1 (+) and %s2 (-) now; switch the supply off before moving them", tp.Phase, tp.Phase), st.warn.Render)
 			}
 		}
-		b.text(polarityRow(teeth, v), st.value.Render)
 		verdictShown := next == len(teeth) && !looking
+		if row := polarityRow(teeth, v, !verdictShown); !verdictShown || len(row) <= b.w {
+			b.text(row, st.value.Render)
+		} else {
+			// Every tooth is read: the verdict names the teeth that
+			// matter, and the row of them all gives way to a count.
+			b.text(polaritySummary(teeth, v), st.value.Render)
+		}
 		for i, tp := range teeth {
 			if seen, ok := plan.PoleFromValue(v[i]); ok && seen != tp.Pole && !verdictShown {
 				// Once every tooth is read the verdict names it, with
@@ -252,8 +258,8 @@ func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 		}
 		if verdictShown {
 			verdict := polarityVerdict(c.plan, s, v)
-			g.verdictView(b, &verdict)
-			b.text("enter records the step; n adds a note; bksp reads the last tooth again.", st.statusNow.Render)
+			g.verdictLines(b, &verdict) // its lines say what to do
+			b.text("enter records the step; bksp reads the last tooth again.", st.statusNow.Render)
 		}
 		b.text(polarityCautionShort, st.caution.Render)
 	})
@@ -277,9 +283,27 @@ func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 // on small terminals; the whole caution follows it.
 const polarityCautionShort = "CAUTION current-limited supply; switch it off before unclipping (inductive kick); steel tools get magnetised"
 
+// polaritySummary counts the teeth read by what they showed.
+func polaritySummary(teeth []plan.ToothPole, v []float64) string {
+	right, other, unsure := 0, 0, 0
+	for i, tp := range teeth {
+		switch seen, ok := plan.PoleFromValue(v[i]); {
+		case math.IsNaN(v[i]):
+		case !ok:
+			unsure++
+		case seen == tp.Pole:
+			right++
+		default:
+			other++
+		}
+	}
+	return fmt.Sprintf("read: %d teeth, %d as planned, %d the other pole, %d unsure", len(teeth), right, other, unsure)
+}
+
 // polarityRow shows every tooth of the step: tooth, planned pole, and what
-// was seen (= as planned, ! the other pole, ? unsure, . not read).
-func polarityRow(teeth []plan.ToothPole, v []float64) string {
+// was seen (= as planned, ! the other pole, ? unsure, . not read), with the
+// marks explained when legend is set.
+func polarityRow(teeth []plan.ToothPole, v []float64, legend bool) string {
 	parts := make([]string, len(teeth))
 	for i, tp := range teeth {
 		mark := "."
@@ -293,6 +317,9 @@ func polarityRow(teeth []plan.ToothPole, v []float64) string {
 			mark = "!" + string(seen)
 		}
 		parts[i] = fmt.Sprintf("%d%s%s", tp.Tooth, tp.Pole, mark)
+	}
+	if !legend {
+		return "read: " + strings.Join(parts, " ")
 	}
 	return "read: " + strings.Join(parts, " ") + "   (= as planned, ! other pole, ? unsure, . to read)"
 }
