@@ -50,13 +50,13 @@ func (b *builder) computedFrom(t plan.Test) (from, formula string) {
 	switch {
 	case b.p.Connection == winding.Star && len(names) == 3:
 		u, v, w := names[0], names[1], names[2]
-		conv = fmt.Sprintf("R_%s = (R_%s–%s + R_%s–%s − R_%s–%s) / 2, and so round the phases (star)", u, u, v, w, u, v, w)
+		conv = fmt.Sprintf("R_%s = (R_%s–%s + R_%s–%s − R_%s–%s) / 2 and so round the phases (star)", u, u, v, w, u, v, w)
 	case b.p.Connection == winding.Star:
-		conv = "each phase from the line readings, each of which is two phases in series (star)"
+		conv = "each line reading being two phases in series (star)"
 	default:
-		conv = "each phase from the line readings, each of which is one phase in parallel with the others in series (delta)"
+		conv = "each line reading being one phase in parallel with the others in series (delta)"
 	}
-	formula = fmt.Sprintf("%s at 20 °C; R_mean = their mean; imbalance = largest |R_phase − R_mean| / R_mean × 100 %%, at most %s (EASA AR100)",
+	formula = fmt.Sprintf("Phases at 20 °C from the line readings, %s; R_mean = their mean; imbalance = largest |R_phase − R_mean| / R_mean × 100 %%, at most %s (EASA AR100)",
 		conv, plan.FormatValue(t.Limit, plan.UnitPercent))
 	var ph []float64
 	var parts []string

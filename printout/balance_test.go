@@ -2,11 +2,14 @@ package printout
 
 import (
 	"math"
+	"path/filepath"
 	"slices"
 	"strings"
 	"testing"
 	"time"
 
+	"coilwright/winding/job"
+	"coilwright/winding/job/jobtest"
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
 	"coilwright/winding/progress"
@@ -119,5 +122,48 @@ func TestSkippedTestPrintsSkipped(t *testing.T) {
 	b := &builder{p: p, o: Options{Readings: readingsOf(st, p.Steps)}, paper: A4}
 	if r := b.o.Readings[plan.TestBackEMF]; !r.Skipped || r.Verdict != "" {
 		t.Errorf("record of the back-EMF test = %+v; want skipped without a verdict", r)
+	}
+}
+
+// The back-EMF cells say what the meter should show per 1000 rpm: the
+// demo's phase constant times √3 for a star read line to line (adjacent
+// lines of three phases 120° apart), about 68.3 V.
+func TestBackEMFCellsPerThousandRPM(t *testing.T) {
+	p := demoPlan(t)
+	if p.EMF == nil {
+		t.Fatal("demo plan has no EMF")
+	}
+	want := plan.FormatValue(1000*p.EMF.VoltsPerRPMPhase*math.Sqrt(3), plan.UnitVolt) + " per 1000 rpm"
+	got := blockText(recordTexts(t, p, Options{}), "8. Back-EMF", "Instruments used")
+	if strings.Count(got, want) != 3 {
+		t.Errorf("back-EMF block: %q; want %q in each of the 3 line cells", got, want)
+	}
+}
+
+// Where the plan cannot estimate the iron loss, the machine sheet says so
+// and gives the losses as a lower bound, never "iron 0.0"; each note reads
+// once ("… not estimated: give …"), not prefixed a second time.
+func TestMachineSheetIronNotEstimated(t *testing.T) {
+	j, err := job.Load(filepath.Join(jobtest.Dir(t), "delta_paths_airgap.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := plan.Build(j)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if p.Machine == nil || p.Machine.Iron != nil {
+		t.Skip("this job now gives the iron loss")
+	}
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	all := words(strings.Join(pagesOf(pk, MachinePage)[0].Texts(), " "))
+	if !strings.Contains(all, "iron not estimated") || !strings.Contains(all, "at least ") || strings.Contains(all, "iron 0.0") {
+		t.Errorf("machine sheet without an iron loss: %q", all)
+	}
+	if strings.Contains(all, "Not estimated:") {
+		t.Errorf("machine sheet notes say \"not estimated\" twice: %q", all)
 	}
 }

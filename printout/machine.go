@@ -39,7 +39,8 @@ func (b *builder) machine() {
 		y = b.voltagePlot(c, x0, y, w, plotH)
 	}
 	for _, n := range mc.Notes {
-		y = c.para(x0, y, w, sizeSmall, Regular, Ink, "Not estimated: "+n) + 0.5
+		// each note says what is not estimated and what would give it
+		y = c.para(x0, y, w, sizeSmall, Regular, Ink, sentence(n)) + 0.5
 	}
 	if len(mc.LoadCurve) > 0 && y+16 < b.bottom() {
 		y += 2
@@ -80,7 +81,12 @@ func machineRows(p *plan.Plan) [][2]string {
 			if mc.MechanicalAllowance {
 				mech = " (allowance)"
 			}
-			add("Losses", "%.1f W: copper %.1f at %g °C, iron %.1f, mechanical %.1f%s", ls.Total, ls.Copper, p.CopperLossTemperatureC, ls.Iron, ls.Mechanical, mech)
+			if mc.Iron == nil {
+				// without the iron loss the sum is a lower bound
+				add("Losses", "at least %.1f W: copper %.1f at %g °C, iron not estimated, mechanical %.1f%s", ls.Total, ls.Copper, p.CopperLossTemperatureC, ls.Mechanical, mech)
+			} else {
+				add("Losses", "%.1f W: copper %.1f at %g °C, iron %.1f, mechanical %.1f%s", ls.Total, ls.Copper, p.CopperLossTemperatureC, ls.Iron, ls.Mechanical, mech)
+			}
 		}
 		if mc.Efficiency > 0 {
 			add("Efficiency", "%.1f %% (%s: %.0f W out of %.0f W in)", 100*mc.Efficiency, mc.Operation, mc.OutputW, mc.InputW)

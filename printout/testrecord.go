@@ -163,6 +163,17 @@ func expectedText(t plan.Test, r plan.Reading) string {
 	return ""
 }
 
+// expectedText is expectedText with what the plan says beyond the
+// reading's schema: a line voltage of the back-EMF test scales with the
+// speed, so it is said per 1000 rpm (the plan's line EMF at its rated speed).
+func (b *builder) expectedText(t plan.Test, r plan.Reading) string {
+	if e := b.p.EMF; t.Name == plan.TestBackEMF && r.Unit == plan.UnitVolt && r.Expected == nil &&
+		e != nil && e.RatedSpeedRPM > 0 && e.LineRMSAtRated > 0 {
+		return plan.FormatValue(1000*e.LineRMSAtRated/e.RatedSpeedRPM, plan.UnitVolt) + " per 1000 rpm"
+	}
+	return expectedText(t, r)
+}
+
 // unitCell is the unit printed at the end of an empty reading cell.
 func unitCell(u plan.Unit) string {
 	switch u {
@@ -457,7 +468,7 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 		}
 		base := cy + tbCellH/2 + 1.2
 		c.text(xs[0]+1.2, base, sizeBody, Bold, Ink, left, fit(r.Label, xs[1]-xs[0]-2.4, sizeBody, Bold))
-		c.text(xs[1]+1.2, base, sizeBody, Regular, Ink, left, fit(expectedText(t, r), xs[2]-xs[1]-2.4, sizeBody, Regular))
+		c.text(xs[1]+1.2, base, sizeBody, Regular, Ink, left, fit(b.expectedText(t, r), xs[2]-xs[1]-2.4, sizeBody, Regular))
 		c.text(xs[2]+1.2, base, sizeSmall, Regular, Ink, left, fit(windowText(r), xs[3]-xs[2]-2.4, sizeSmall, Regular))
 		if v, ok := shown[r.Key]; ok && r.Key != "" && !rec.Skipped {
 			c.text(xs[3]+1.2, base, sizeBody, Bold, Ink, left, plan.FormatValue(v, r.Unit))
