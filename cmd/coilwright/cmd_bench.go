@@ -60,9 +60,12 @@ entries no longer fit. Delete the record to start the job again.`,
 			}
 			err = tui.Run(p, tui.RunOptions{RecordPath: rec, AltScreen: true, NoBell: noBell})
 			var le *journal.LockedError
+			var de *journal.DamagedError
 			switch {
 			case errors.As(err, &le):
 				return fmt.Errorf("bench: another guide has this job open: %w", err)
+			case errors.As(err, &de):
+				return badInputf("bench: %w", err)
 			case errors.Is(err, tui.ErrStopped):
 				return fmt.Errorf("bench: stopped by a signal; everything counted is saved in %s", rec)
 			}

@@ -88,7 +88,9 @@ override it. --record appends the readings and the verdict to the job's
 progress record, where the bench guide and the printed test record show them.
 
 The exit status is 0 whenever the check ran, whatever its verdict (read it in
-the output), and 2 for readings that cannot be judged.
+the output: PASS, WARN or FAIL), 2 for readings that cannot be judged, and 1
+when --record could not write the record (the report is still printed, and a
+last line says it was not recorded).
 
 High-voltage and insulation tests can kill: only trained people, following
 local codes and licensed practice.`,
@@ -151,6 +153,7 @@ func runCheck(cmd *cobra.Command, args []string, f *checkFlags) error {
 	case err != nil:
 		return err
 	}
+	var recErr error
 	if f.record {
 		path := f.progress
 		if path == "" && jobPath != "" {
@@ -161,17 +164,30 @@ func runCheck(cmd *cobra.Command, args []string, f *checkFlags) error {
 				return err
 			}
 		}
-		if err := recordCheck(path, p, r, rep); err != nil {
-			return err
+		if recErr = recordCheck(cmd, path, p, r, rep); recErr == nil {
+			fmt.Fprintf(cmd.ErrOrStderr(), "recorded in %s\n", path)
+		} else if errors.Is(recErr, journal.ErrLocked) {
+			recErr = fmt.Errorf("%w; quit the guide (q) and give the same check again", recErr)
 		}
-		fmt.Fprintf(cmd.ErrOrStderr(), "recorded in %s\n", path)
 	}
-	if f.asJSON {
+	if err := writeCheckReport(cmd, p, rep, f.asJSON); err != nil {
+		return err
+	}
+	if recErr != nil {
+		// The verdict is shown above; only the record failed (exit status 1).
+		return fmt.Errorf("check --record: %w. The check above was NOT recorded", recErr)
+	}
+	return nil
+}
+
+// writeCheckReport writes the check's report, as text or JSON.
+func writeCheckReport(cmd *cobra.Command, p *plan.Plan, rep *verify.Report, asJSON bool) error {
+	if asJSON {
 		return writeJSON(cmd.OutOrStdout(), rep)
 	}
 	w := cmd.OutOrStdout()
 	fmt.Fprintf(w, "Check of %s\n\n", planTitle(p))
-	_, err = fmt.Fprint(w, rep.Text())
+	_, err := fmt.Fprint(w, rep.Text())
 	return err
 }
 
@@ -366,11 +382,19 @@ func anyChanged(ch func(string) bool, names ...string) bool {
 // one event per plan test the check judged, on that test's step, so the bench
 // guide and the printed test record show them (progress.CheckEvents). The
 // plan's fingerprint goes first when the record lacks it.
-func recordCheck(path string, p *plan.Plan, r verify.Readings, rep *verify.Report) error {
-	s, events, _, err := journal.Open(path, "coilwright check")
+func recordCheck(cmd *cobra.Command, path string, p *plan.Plan, r verify.Readings, rep *verify.Report) error {
+	s, events, torn, err := journal.Open(path, "coilwright check")
 	if err != nil {
 		return err
 	}
+	if torn != nil {
+		fmt.Fprintf(cmd.ErrOrStderr(), "check: the last line of %s was cut short (%s) and is left out\n", path, torn)
+	}
+	defer func() {
+		for _, n := range s.Notices() {
+			fmt.Fprintf(cmd.ErrOrStderr(), "check: %s\n", n)
+		}
+	}()
 	evs := progress.CheckEvents(p, r, rep)
 	if progress.Fold(p, events).NeedsFingerprint() {
 		evs = append([]journal.Event{progress.FingerprintEvent(p)}, evs...)

@@ -146,7 +146,7 @@ func loadProgress(cmd *cobra.Command, p *plan.Plan, path string, explicit bool) 
 	}
 	events, torn, err := journal.Decode(data)
 	if err != nil {
-		return nil, badInputf("sheet: progress record %s: %v", path, err)
+		return nil, badInputf("sheet: %w", journal.Damaged(path, data, err))
 	}
 	if torn != nil {
 		fmt.Fprintf(cmd.ErrOrStderr(), "sheet: the last line of %s was cut short (%s) and is left out\n", path, torn)

@@ -3,6 +3,7 @@ package journal
 import (
 	"bytes"
 	"encoding/json"
+	"errors"
 	"fmt"
 )
 
@@ -34,6 +35,43 @@ func (e *DecodeError) Error() string {
 }
 
 func (e *DecodeError) Unwrap() error { return e.Err }
+
+// DamagedError is a record that cannot be used as it is: one of its lines
+// (not a torn last line) does not decode. It is what Open returns, and what a
+// reader of a record should say (Damaged): which line, that the file was left
+// as it is, and the two ways to go on.
+type DamagedError struct {
+	Path  string // the record
+	Lines int    // lines in the record
+	*DecodeError
+}
+
+// Damaged names the record in a *DecodeError returned by Decode of data read
+// from path; any other error is returned as it is.
+func Damaged(path string, data []byte, err error) error {
+	var de *DecodeError
+	if !errors.As(err, &de) {
+		return err
+	}
+	lines := bytes.Count(data, []byte{'\n'})
+	if len(data) > 0 && data[len(data)-1] != '\n' {
+		lines++
+	}
+	return &DamagedError{Path: path, Lines: lines, DecodeError: de}
+}
+
+func (e *DamagedError) Error() string {
+	where := fmt.Sprintf("line %d of %d,", e.Line, e.Lines)
+	if e.Line == e.Lines {
+		where = fmt.Sprintf("its last line, %d,", e.Line)
+	}
+	return fmt.Sprintf("the progress record %s is damaged at %s byte %d (%v). It was not used, and it is kept exactly as it is. "+
+		"To go on, either repair or delete line %d in a text editor (one entry per line) and start again, "+
+		"or move the file aside (rename it, e.g. to %s.damaged): a fresh, empty record then starts, and the old file stays for reference",
+		e.Path, where, e.Offset, e.Err, e.Line, e.Path)
+}
+
+func (e *DamagedError) Unwrap() error { return e.DecodeError }
 
 // Decode reads a record. Blank lines are skipped. A last line without its
 // newline that does not decode is a torn write: it is left out and reported

@@ -16,11 +16,17 @@
 // to a side file next to the record before it cuts them. Any other line that
 // does not decode, or holds a value beyond the record's bounds (MaxTurns and
 // the like), is a *DecodeError naming its line: the record was edited or
-// damaged and is not guessed at. Text fields are cleaned of control
+// damaged and is not guessed at. Open refuses such a record with a
+// *DamagedError (Damaged makes one for other readers), whose message gives the
+// line and the two ways on: repair or delete the line, or move the file aside
+// for a fresh record. Text fields are cleaned of control
 // characters on the way in and on the way out (Clean).
 //
 // Files. Decode is pure. Store is the only code in the engine that touches
-// the file system. It holds an exclusive lock: a lock file beside the record,
+// the file system; its methods may be called from several goroutines. It
+// holds the record open from Open on, so that a file put in its place is told
+// apart from it even when the file system gives the new file the removed
+// one's number. It holds an exclusive lock: a lock file beside the record,
 // whose kernel lock (flock) decides who holds it, on the record's path with
 // symbolic links resolved (Resolve), so two names for one record share one
 // lock; a lock file nobody holds is stale whatever process it names. Before

@@ -2,6 +2,7 @@ package journal_test
 
 import (
 	"errors"
+	"fmt"
 	"os"
 	"path/filepath"
 	"strings"
@@ -127,7 +128,9 @@ func TestStoreTornTailKeptAside(t *testing.T) {
 	dir := t.TempDir()
 	path := filepath.Join(dir, "job.toml.progress")
 	good := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}` + "\n"
-	os.WriteFile(path, []byte(good+`{"seq":2,"kind":"tu`), 0o644)
+	if err := os.WriteFile(path, []byte(good+`{"seq":2,"kind":"tu`), 0o644); err != nil {
+		t.Fatal(err)
+	}
 	s, ev, torn, err := journal.Open(path, "test")
 	if err != nil || len(ev) != 1 || torn == nil || torn.Line != 2 {
 		t.Fatalf("Open(torn) = %d events, torn %v, err %v; want 1 and line 2 torn", len(ev), torn, err)
@@ -135,7 +138,9 @@ func TestStoreTornTailKeptAside(t *testing.T) {
 	if side, _ := filepath.Glob(path + ".cut-*"); len(side) != 0 {
 		t.Errorf("side files %v before any write; want none (nothing is cut yet)", side)
 	}
-	s.Append(journal.Event{Kind: journal.Done, Step: 2})
+	if err := s.Append(journal.Event{Kind: journal.Done, Step: 2}); err != nil {
+		t.Fatalf("first Append after a torn tail: %v", err)
+	}
 	side, _ := filepath.Glob(path + ".cut-*")
 	n := s.Notices()
 	if len(side) != 1 || len(n) != 1 || !strings.Contains(n[0], side[0]) {
@@ -144,14 +149,18 @@ func TestStoreTornTailKeptAside(t *testing.T) {
 	if b, _ := os.ReadFile(side[0]); string(b) != `{"seq":2,"kind":"tu` {
 		t.Errorf("side file %s holds %q; want the torn bytes", side[0], b)
 	}
-	s.Close()
+	if err := s.Close(); err != nil {
+		t.Fatal(err)
+	}
 	if got := decodeFile(t, path); len(got) != 2 {
 		t.Errorf("record = %d events; want 2", len(got))
 	}
 
 	flipped := good + `{"seq":2,"time":"2025-03-08T09:00:00Z","kind":"done","step":2}` + "\n"
 	flipped = flipped[:len(flipped)-10] + "\x01" + flipped[len(flipped)-9:]
-	os.WriteFile(path, []byte(flipped), 0o644)
+	if err := os.WriteFile(path, []byte(flipped), 0o644); err != nil {
+		t.Fatal(err)
+	}
 	_, _, _, err = journal.Open(path, "test")
 	var de *journal.DecodeError
 	if !errors.As(err, &de) || de.Line != 2 {
@@ -262,5 +271,127 @@ func TestStaleLockTakenIsSaid(t *testing.T) {
 	n := s.Notices()
 	if len(n) != 1 || !strings.Contains(n[0], `"bench" (pid 1 on bench-pc`) || !strings.Contains(n[0], "taken") {
 		t.Errorf("Notices() after taking a stale lock = %q; want its holder named", n)
+	}
+}
+
+// A record removed and written anew before the store's first write is
+// noticed, though the new file may well get the removed one's number (file
+// systems reuse it at once): the store holds the record open from Open on.
+func TestStoreNoticesRecordRecreatedBeforeFirstWrite(t *testing.T) {
+	for round := 0; round < 20; round++ {
+		path := filepath.Join(t.TempDir(), "job.toml.progress")
+		ours := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}` + "\n"
+		if err := os.WriteFile(path, []byte(ours), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		s := openT(t, path)
+		if err := os.Remove(path); err != nil {
+			t.Fatal(err)
+		}
+		// Another program's file, longer than ours, at the same path.
+		theirs := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"note","note":"someone else's record, longer than ours"}` + "\n"
+		if err := os.WriteFile(path, []byte(theirs), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		if err := s.Append(journal.Event{Kind: journal.Done, Step: 2}); err != nil {
+			t.Fatal(err)
+		}
+		n := s.Notices()
+		if len(n) != 1 || !strings.Contains(n[0], "replaced") {
+			t.Fatalf("round %d: Notices() = %q; want the replaced record noticed", round, n)
+		}
+		got := decodeFile(t, path)
+		if len(got) != 2 || got[0].Step != 1 || got[1].Step != 2 {
+			t.Fatalf("round %d: record = %+v; want our two entries", round, got)
+		}
+		side, _ := filepath.Glob(path + ".replaced-*")
+		if len(side) != 1 {
+			t.Fatalf("round %d: side files %v; want the other file kept", round, side)
+		}
+		if b, _ := os.ReadFile(side[0]); string(b) != theirs {
+			t.Errorf("round %d: side file holds %q; want the other program's file", round, b)
+		}
+	}
+}
+
+// The guide may close the store while its last write still runs: the calls
+// take turns, and every event is written once.
+func TestStoreConcurrentAppendAndClose(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	s, _, _, err := journal.Open(path, "test")
+	if err != nil {
+		t.Fatal(err)
+	}
+	var wg sync.WaitGroup
+	for g := 0; g < 4; g++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := 0; i < 25; i++ {
+				if err := s.Append(journal.Event{Kind: journal.Turns, Step: 2, Tooth: 1, Turns: i}); err != nil {
+					t.Error(err)
+					return
+				}
+				s.Notices()
+				s.Pending()
+			}
+		}()
+	}
+	wg.Wait()
+	if err := s.Close(); err != nil {
+		t.Fatal(err)
+	}
+	got := decodeFile(t, path)
+	if len(got) != 100 {
+		t.Fatalf("record = %d events; want 100", len(got))
+	}
+	for i, e := range got {
+		if e.Seq != i+1 {
+			t.Fatalf("event %d has seq %d; want %d (each written once, in order)", i, e.Seq, i+1)
+		}
+	}
+}
+
+// A damaged line, last or in the middle, refuses the record, leaves it as it
+// is, and says how to go on: the line, and the two ways forward.
+func TestOpenDamagedSaysHowToGoOn(t *testing.T) {
+	line := func(seq, step int) string {
+		return fmt.Sprintf(`{"seq":%d,"time":"2025-03-08T09:00:00Z","kind":"done","step":%d}`, seq, step) + "\n"
+	}
+	cases := []struct {
+		name  string
+		data  string
+		line  int
+		where string
+	}{
+		{"last line", line(1, 1) + line(2, 2) + "{\"seq\":3,\x01}\n", 3, "its last line, 3"},
+		{"middle line", line(1, 1) + "{\"seq\":2,\"kind\":\"done\",\n" + line(3, 3) + line(4, 4), 2, "line 2 of 4"},
+		{"absurd turns", line(1, 1) + `{"seq":2,"kind":"done","step":5,"tooth":1,"turns":9e18}` + "\n" + line(3, 3), 2, "line 2 of 3"},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			path := filepath.Join(t.TempDir(), "job.toml.progress")
+			if err := os.WriteFile(path, []byte(c.data), 0o644); err != nil {
+				t.Fatal(err)
+			}
+			_, _, _, err := journal.Open(path, "test")
+			var de *journal.DamagedError
+			var dec *journal.DecodeError
+			if !errors.As(err, &de) || !errors.As(err, &dec) || de.Line != c.line {
+				t.Fatalf("Open err = %v; want a DamagedError on line %d", err, c.line)
+			}
+			msg := err.Error()
+			for _, want := range []string{c.where, path, "kept exactly as it is", fmt.Sprintf("delete line %d", c.line), path + ".damaged", "fresh, empty record"} {
+				if !strings.Contains(msg, want) {
+					t.Errorf("message %q\nlacks %q", msg, want)
+				}
+			}
+			if b, _ := os.ReadFile(path); string(b) != c.data {
+				t.Errorf("the damaged record was changed")
+			}
+			if _, err := os.Stat(journal.LockPathFor(path)); !errors.Is(err, os.ErrNotExist) {
+				t.Errorf("a lock was left on the refused record")
+			}
+		})
 	}
 }

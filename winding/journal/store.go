@@ -7,6 +7,7 @@ import (
 	"io"
 	"os"
 	"path/filepath"
+	"sync"
 	"syscall"
 	"time"
 )
@@ -35,8 +36,9 @@ func Resolve(path string) string {
 	return path
 }
 
-// Store appends events to one record file under an exclusive lock. It is not
-// safe for concurrent use by several goroutines.
+// Store appends events to one record file under an exclusive lock. Its
+// methods may be called from several goroutines (a guide's last write may
+// still run while it closes); they take turns.
 //
 // Before each write it checks that the file at its path is still the one it
 // holds. When the record was removed, replaced or moved by another program
@@ -46,9 +48,14 @@ func Resolve(path string) string {
 // (a torn last line, lines appended by another program) are first copied to a
 // side file.
 type Store struct {
-	path    string // resolved
-	lock    *lockFile
-	f       file        // nil when the file must be (re)opened
+	mu   sync.Mutex
+	path string // resolved
+	lock *lockFile
+	// f is the record, held open from Open (or its first write) on, so that
+	// the file at the path can be told apart from it: a file system reuses
+	// the number of a removed file at once, so a file not held open cannot
+	// be recognised by its number. nil after a failed write, until reopened.
+	f       file
 	ident   os.FileInfo // the record file as last written or read; nil before it exists
 	size    int64       // bytes of good, synced lines
 	ownTail bool        // bytes past size are a write of ours cut short
@@ -122,7 +129,9 @@ func (e *WriteError) Unwrap() error { return e.Err }
 // "bench", "check") and reads it. A missing record is an empty one; the file is
 // created by the first Append. A torn last line (cut short, without its
 // newline) is reported; before anything is appended its bytes are copied to
-// a side file, named in a notice (Notices), and cut off. A record locked by a running
+// a side file, named in a notice (Notices), and cut off. Any other line that
+// does not decode refuses the record with a *DamagedError, which says how to
+// go on; the file is left as it is. A record locked by a running
 // program is refused with a *LockedError; a lock file nobody holds is stale
 // and taken, whatever process it names.
 func Open(path, holder string) (*Store, []Event, *TornTail, error) {
@@ -131,19 +140,27 @@ func Open(path, holder string) (*Store, []Event, *TornTail, error) {
 	if err != nil {
 		return nil, nil, nil, err
 	}
-	data, err := os.ReadFile(path)
-	if err != nil && !errors.Is(err, os.ErrNotExist) {
+	f, data, err := openExisting(path)
+	if err != nil {
 		lk.release()
 		return nil, nil, nil, fmt.Errorf("journal: read %s: %w", path, err)
 	}
 	events, torn, err := Decode(data)
 	if err != nil {
+		if f != nil {
+			f.Close()
+		}
 		lk.release()
-		return nil, nil, nil, fmt.Errorf("journal: %s: %w", path, err)
+		return nil, nil, nil, Damaged(path, data, err)
 	}
 	s := &Store{path: path, lock: lk, size: int64(len(data)), now: time.Now, open: openRecord, events: events}
-	if fi, err := os.Stat(path); err == nil {
-		s.ident = fi
+	if f != nil {
+		s.f = f
+		if fi, err := f.Stat(); err == nil {
+			s.ident = fi
+		}
+	} else if fi, err := os.Stat(path); err == nil {
+		s.ident = fi // read-only: it cannot be written anyway
 	}
 	if old := lk.stale; old != nil {
 		s.notices = append(s.notices, fmt.Sprintf("The record's lock named %q (pid %d on %s since %s), which no longer held it: that program stopped without releasing it, so the lock was taken.",
@@ -171,6 +188,8 @@ func (s *Store) Path() string { return s.path }
 // *WriteError is returned; pending events are written, in order, before the
 // next ones.
 func (s *Store) Append(events ...Event) error {
+	s.mu.Lock()
+	defer s.mu.Unlock()
 	batch := make([]Event, 0, len(events))
 	seq := s.nextSeq
 	for _, e := range events {
@@ -193,15 +212,25 @@ func (s *Store) Append(events ...Event) error {
 }
 
 // Retry writes the pending events. It returns nil when none are left.
-func (s *Store) Retry() error { return s.flush() }
+func (s *Store) Retry() error {
+	s.mu.Lock()
+	defer s.mu.Unlock()
+	return s.flush()
+}
 
 // Pending returns the events kept in memory, not yet written.
-func (s *Store) Pending() []Event { return append([]Event(nil), s.pending...) }
+func (s *Store) Pending() []Event {
+	s.mu.Lock()
+	defer s.mu.Unlock()
+	return append([]Event(nil), s.pending...)
+}
 
 // Notices returns what the store had to do about the file since the last
 // call (a record written again after it was removed or replaced, bytes kept
 // in a side file), in words, and forgets them.
 func (s *Store) Notices() []string {
+	s.mu.Lock()
+	defer s.mu.Unlock()
 	n := s.notices
 	s.notices = nil
 	return n
@@ -211,6 +240,8 @@ func (s *Store) Notices() []string {
 // lock is released even when pending events could not be written; the error
 // then says how many were lost.
 func (s *Store) Close() error {
+	s.mu.Lock()
+	defer s.mu.Unlock()
 	err := s.flush()
 	s.drop()
 	if s.lock != nil {
@@ -268,6 +299,11 @@ func (s *Store) flush() error {
 // changedUnderUs says, in words, how the file at the path is no longer the
 // record this store holds ("" when it still is).
 func (s *Store) changedUnderUs() (string, error) {
+	if s.f != nil {
+		if fi, err := s.f.Stat(); err == nil {
+			s.ident = fi // the file held open: its number cannot be reused
+		}
+	}
 	at, err := os.Stat(s.path)
 	switch {
 	case errors.Is(err, os.ErrNotExist):
@@ -315,10 +351,16 @@ func (s *Store) rewrite(how string) error {
 	if err := WriteFileAtomic(s.path, buf.Bytes(), 0o644); err != nil {
 		return fmt.Errorf("the record %s; writing it again failed: %w", how, err)
 	}
-	fi, err := os.Stat(s.path)
+	f, err := s.open(s.path)
 	if err != nil {
+		return fmt.Errorf("the record %s; it was written again but cannot be opened: %w", how, err)
+	}
+	fi, err := f.Stat()
+	if err != nil {
+		f.Close()
 		return err
 	}
+	s.f = f
 	s.ident, s.size, s.needNewline, s.ownTail = fi, int64(buf.Len()), false, false
 	s.events, s.pending = all, nil
 	msg := fmt.Sprintf("The progress record %s %s while open; it was written again from the work in memory (%d entries)", s.path, how, len(all))
@@ -378,6 +420,28 @@ func (s *Store) reopen() error {
 		s.needNewline = false
 	}
 	return nil
+}
+
+// openExisting opens the record at path for reading and writing and reads it
+// whole; a record that does not exist yet is (nil, nil, nil).
+func openExisting(path string) (file, []byte, error) {
+	f, err := os.OpenFile(path, os.O_RDWR, 0)
+	switch {
+	case errors.Is(err, os.ErrNotExist):
+		return nil, nil, nil
+	case errors.Is(err, os.ErrPermission) || errors.Is(err, syscall.EROFS):
+		// Readable but not writable: read it; the first write says why it fails.
+		data, err := os.ReadFile(path)
+		return nil, data, err
+	case err != nil:
+		return nil, nil, err
+	}
+	data, err := io.ReadAll(f)
+	if err != nil {
+		f.Close()
+		return nil, nil, err
+	}
+	return f, data, nil
 }
 
 func (s *Store) drop() {

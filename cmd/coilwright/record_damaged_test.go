@@ -1,0 +1,69 @@
+package main
+
+import (
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"coilwright/winding/job"
+	"coilwright/winding/journal"
+)
+
+// A record damaged in the middle or at its last line is refused by every
+// command that reads it, with its line and how to go on, and left as it is.
+// check --record still shows its verdict and says it was not recorded.
+func TestDamagedRecordRefusedWithTheWayOn(t *testing.T) {
+	good := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}` + "\n"
+	cases := []struct {
+		name, data, where string
+	}{
+		{"middle", good + "{\"seq\":2,\"kind\":\n" + strings.Replace(good, `"seq":1`, `"seq":3`, 1), "line 2 of 3"},
+		{"last", good + "{\"seq\":2,\x01}\n", "its last line, 2"},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			dir := t.TempDir()
+			jobPath := filepath.Join(dir, "leat.toml")
+			if err := os.WriteFile(jobPath, job.DemoTOML(), 0o644); err != nil {
+				t.Fatal(err)
+			}
+			rec := journal.PathFor(jobPath)
+			if err := os.WriteFile(rec, []byte(c.data), 0o644); err != nil {
+				t.Fatal(err)
+			}
+			runs := []struct {
+				args   []string
+				code   int
+				stdout string
+			}{
+				{[]string{"sheet", jobPath, "-o", filepath.Join(dir, "pack.pdf")}, 2, ""},
+				{[]string{"bench", jobPath}, 2, ""},
+				{append([]string{"check", jobPath, "--four-wire", "--record"}, demoLines(t, 21, [3]float64{1, 1, 1})...), 1, "Verdict: PASS"},
+			}
+			for _, r := range runs {
+				code, out, errs := runCLI(t, r.args...)
+				if code != r.code || strings.Count(strings.TrimSpace(errs), "\n") != 0 {
+					t.Errorf("%s = exit %d, %q; want %d and one line", r.args[0], code, errs, r.code)
+				}
+				for _, want := range []string{c.where, "kept exactly as it is", "delete line 2", ".damaged", "fresh, empty record"} {
+					if !strings.Contains(errs, want) {
+						t.Errorf("%s says %q\nlacking %q", r.args[0], errs, want)
+					}
+				}
+				if !strings.Contains(out, r.stdout) {
+					t.Errorf("%s printed %q; want %q", r.args[0], out, r.stdout)
+				}
+				if r.args[0] == "check" && !strings.Contains(errs, "NOT recorded") {
+					t.Errorf("check --record says %q; want it to say the check was not recorded", errs)
+				}
+				if b, _ := os.ReadFile(rec); string(b) != c.data {
+					t.Fatalf("%s changed the damaged record", r.args[0])
+				}
+			}
+			if _, err := os.Stat(filepath.Join(dir, "pack.pdf")); err == nil {
+				t.Errorf("sheet wrote a pack from a damaged record")
+			}
+		})
+	}
+}
