@@ -35,11 +35,15 @@ func (b *builder) checklist() {
 		b.progressSummary(f, rec, steps)
 	}
 	b.checkHeader(f)
-	for _, st := range steps {
-		b.checkRow(f, st, rec)
+	for i, st := range steps {
+		keep := 0.0
+		if i == len(steps)-1 {
+			keep = signOffKeep // the sign-off never stands alone on a sheet
+		}
+		b.checkRow(f, st, rec, keep)
 	}
 	// closing sign-off, under the column header on a page of its own
-	if f.need(22) {
+	if f.need(signOffKeep) {
 		b.checkHeader(f)
 	}
 	f.y += 4
@@ -350,10 +354,14 @@ func (b *builder) signOff(f *flow, what string) {
 	f.y += 18
 }
 
+// signOffKeep is the room the closing sign-off takes under the last row.
+const signOffKeep = 22
+
 // checkRow draws one step's row and the recorded notes under it. A row and
-// its notes are kept on one page when they fit on one; notes longer than a
-// page flow on line by line under a repeated header.
-func (b *builder) checkRow(f *flow, st plan.Step, rec *recorded) {
+// its notes are kept on one page when they fit on one, with keep mm more
+// below them (the sign-off under the last row); notes longer than a page
+// flow on line by line under a repeated header.
+func (b *builder) checkRow(f *flow, st plan.Step, rec *recorded, keep float64) {
 	sp := rec.step(st.Index)
 	notes := b.noteLines(rec.notesFor(st.Index))
 	var ft []string
@@ -366,7 +374,7 @@ func (b *builder) checkRow(f *flow, st plan.Step, rec *recorded) {
 	}
 	nh := notesHeight(len(notes))
 	whole := f.b.bottom() - f.b.top() - 3 - ckHeadH
-	if f.need(min(h+nh, whole)) {
+	if f.need(min(h+nh+keep, whole)) {
 		b.checkHeader(f)
 	}
 	band := h

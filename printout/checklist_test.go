@@ -2,11 +2,14 @@ package printout
 
 import (
 	"fmt"
+	"regexp"
+	"slices"
 	"strings"
 	"testing"
 
 	"coilwright/printout/pdftext"
 	"coilwright/winding"
+	"coilwright/winding/job/jobtest"
 	"coilwright/winding/plan"
 )
 
@@ -66,5 +69,52 @@ func TestChecklistCoilRowsSayDownAndUp(t *testing.T) {
 	}
 	if n := strings.Count(all, "\ncw\n") + strings.Count(all, "\nccw\n"); n != coils {
 		t.Errorf("checklist prints %d sense words; want one per coil, %d", n, coils)
+	}
+}
+
+// The closing sign-off of the checklist never stands alone on a sheet: the
+// sheet that carries it carries the last step's row too.
+func TestChecklistSignOffNotAlone(t *testing.T) {
+	packs := packsUnderTest(t)
+	for _, v := range []jobtest.Variant{
+		{Slots: 20, Poles: 18, Layers: 2, Paths: 1, Phases: 5, TurnsPerCoil: 18},
+		{Slots: 36, Poles: 32, Layers: 2, Paths: 2, Phases: 3, Delta: true, TurnsPerCoil: 12},
+		// these left the sign-off alone on its last sheet
+		{Slots: 9, Poles: 8, Layers: 2, Paths: 1, Phases: 3, Delta: true, TurnsPerCoil: 12},
+		{Slots: 18, Poles: 12, Layers: 2, Paths: 2, Phases: 3, TurnsPerCoil: 12},
+		{Slots: 54, Poles: 48, Layers: 2, Paths: 2, Phases: 3, Delta: true, TurnsPerCoil: 12},
+	} {
+		p, err := plan.Build(jobtest.DemoVariant(v))
+		if err != nil {
+			t.Fatal(err)
+		}
+		pk, err := Build(p, Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		packs[fmt.Sprintf("%d/%d m%d paths %d delta %v", v.Slots, v.Poles, v.Phases, v.Paths, v.Delta)] = pk
+	}
+	for name, pk := range packs {
+		for _, pg := range pagesOf(pk, ChecklistPage) {
+			texts := pg.Texts()
+			if !slices.Contains(texts, "Winding finished") {
+				continue
+			}
+			rows := 0
+			coil := regexp.MustCompile(`^\d+ of \d+$`)
+			for _, s := range texts {
+				for _, kw := range kindWords {
+					if s == kw {
+						rows++
+					}
+				}
+				if coil.MatchString(s) {
+					rows++
+				}
+			}
+			if rows == 0 {
+				t.Errorf("%s: the sign-off stands alone on %q", name, pg.Title)
+			}
+		}
 	}
 }
