@@ -24,7 +24,10 @@
 // from the air gap), '·' for a tooth without a coil; letter case never carries
 // meaning. A wound coil carries '#', the tooth of the current step '@', the
 // tooth of a step looked at '*', the coils the wire comes from and goes to
-// next 'f' and 'n'; colour only repeats what the text says. The ring shows
+// next 'f' and 'n'; colour only repeats what the text says. The legend
+// under the drawing never drops "seen from the air gap" (shortened to "(from
+// air gap)" on a narrow terminal), and the ring's caption says both views:
+// the ring seen from the lead end, the signs seen from the air gap. The ring shows
 // no arrows: the only arrows are in the picture of the coil in hand, drawn
 // as the winder sees it (facing the tooth from the air gap, lead end up, the
 // down and up slots labelled), under the words that name that view.
@@ -33,7 +36,8 @@
 // live parts (the tooth, its sense in words, its down and up slots and the
 // count; a test's fields, errors and verdict; the note being typed) are
 // always shown; the useful ones while they fit; cautions, sources and
-// reminders are cut first behind a "more" line that the m key pages through.
+// reminders are cut first behind a "more" line that the m key pages through
+// (each press shows the next cut lines, then the panel as it was).
 // The panel takes the roomiest of a few levels that fits (the count in '#'
 // figures that grow with the terminal, down to one line), and the stator
 // drawing is dropped before a live part would be. The key line always ends
@@ -48,7 +52,10 @@
 //
 // The models do no I/O of their own: the progress record is a Recorder given
 // by the caller (JournalRecorder over a winding/journal store; Run opens one),
-// and every call to it runs inside a tea.Cmd. It reads plans and never
+// and every call to it runs inside a tea.Cmd. Readings are typed as the
+// meter shows them (readingvalue.go): a metric prefix and the unit are read,
+// and a plain number a thousand times the expected value is refused as a
+// slipped prefix; a failed test is recorded only with y. It reads plans and never
 // changes them. It computes no verdicts of its own beyond a
 // plain limit comparison used when no Judge is given.
 package tui

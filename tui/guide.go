@@ -482,6 +482,13 @@ func (g guideModel) updateReadings(msg tea.KeyMsg, s plan.Step, ok bool) (guideM
 		return g, g.focusField(g.focus + 1)
 	case key.Matches(msg, k.typing.Accept):
 		if g.focus < len(g.fields)-1 {
+			// Each reading is read as it is left, so a slip is said
+			// while the meter still shows it.
+			if _, _, err := parseReadings(g.fields[g.focus:g.focus+1], g.labels[g.focus:g.focus+1]); err != "" {
+				g.inErr = err
+				return g, nil
+			}
+			g.inErr = ""
 			return g, g.focusField(g.focus + 1)
 		}
 		vals, bad, err := parseReadings(g.fields, g.labels)

@@ -64,9 +64,13 @@ func limitJudge(_ *plan.Plan, t plan.Test, v []float64) Verdict {
 	switch t.Compare {
 	case plan.AtMost, plan.AtLeast:
 		var bad []string
-		for _, x := range v {
+		for i, x := range v {
 			if (t.Compare == plan.AtMost && x > t.Limit) || (t.Compare == plan.AtLeast && x < t.Limit) {
-				bad = append(bad, plan.FormatValue(x, t.Unit))
+				who := ""
+				if i < len(t.Readings) {
+					who = t.Readings[i].Label + " " // which path or pair
+				}
+				bad = append(bad, who+plan.FormatValue(x, t.Unit))
 			}
 		}
 		if len(bad) > 0 {

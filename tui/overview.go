@@ -155,7 +155,10 @@ func stepLine(c *shared, s plan.Step, i int) string {
 			title = title[len(k):]
 		}
 		if k := string(s.Kind) + " (optional): "; len(title) > len(k) && strings.EqualFold(title[:len(k)], k) {
-			title = title[len(k):] + " (optional)"
+			title = title[len(k):]
+			if !c.prog.Steps[i].Skipped { // "-> skipped" says it then
+				title += " (optional)"
+			}
 		}
 		t = fmt.Sprintf("%-10s %s", s.Kind, title)
 	}

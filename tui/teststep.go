@@ -54,11 +54,16 @@ func expectLines(t plan.Test, w int) []string {
 
 // fieldCols are the columns of the reading fields: the labels, then the
 // input boxes, lined up down the fields that have an expected value (the
-// others take the width of their own label).
+// others take the width of their own label), or down every field when none
+// has.
 func (g guideModel) fieldCols() (labelW, inputW int) {
 	labelW = 5
+	anyExpected := false
 	for _, f := range g.labels {
-		if f.expected != nil {
+		anyExpected = anyExpected || f.expected != nil
+	}
+	for _, f := range g.labels {
+		if f.expected != nil || !anyExpected {
 			labelW = max(labelW, ansi.StringWidth(f.label))
 		}
 	}
