@@ -160,13 +160,16 @@ func (c *checker) outlierFinding(x int, rx, ref float64, atTemp [3]float64) Find
 			causes = append(causes, fmt.Sprintf("about %.0f turns fewer than planned%s: turns miscounted on a coil, or shorted turns (enamel damaged at a slot exit)", k, inPath))
 		}
 	} else {
-		if a > 1 && math.Abs(ratio/(float64(a)/float64(a-1))-1) < 0.05 {
+		pathOpen := a > 1 && math.Abs(ratio/(float64(a)/float64(a-1))-1) < 0.05
+		if pathOpen {
 			causes = append(causes, fmt.Sprintf("one of its %d parallel paths is open (%.3f× fits %d paths becoming %d): a broken wire or a path end not joined at the terminals", a, ratio, a, a-1))
 		}
 		dOhm := atTemp[x] - (atTemp[o[0]]+atTemp[o[1]])/2
 		causes = append(causes, fmt.Sprintf("a poor joint or crimp adding about %s", ohm(dOhm)))
-		if g > 0 {
-			k := (1/g - 1) * pathM / turnM
+		// Extra turns only while they are a plausible count: at most as many
+		// again as the path holds (a path that reads twice its length or
+		// more, or an open parallel path, is no miscount).
+		if k := (1/g - 1) * pathM / turnM; g > 0 && !pathOpen && k <= pathM/turnM {
 			causes = append(causes, fmt.Sprintf("about %.0f extra turns%s", k, inPath))
 		}
 		if d := c.p.Wire.BareDiameterMM; d > 0 {
