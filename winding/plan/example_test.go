@@ -57,9 +57,9 @@ func ExampleCutInLineRMS() {
 
 func ExampleBridge_MeanDCCurrent() {
 	// The demo machine at 500 rpm (116.7 Hz) into its 26 V battery.
-	br := plan.Bridge{PhaseEMF: 19.70, Hz: 116.67, R: 0.189, L: 1.094e-3, BusV: 26, DiodesV: 1.6}
+	br := plan.Bridge{PhaseEMF: 19.70, Hz: 116.67, R: 0.189, L: 1.026e-3, BusV: 26, DiodesV: 1.6}
 	fmt.Printf("%.0f A DC\n", br.MeanDCCurrent())
-	// Output: 19 A DC
+	// Output: 20 A DC
 }
 
 func ExampleCarterFactor() {

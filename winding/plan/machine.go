@@ -297,11 +297,21 @@ func (b *builder) inductance() Inductance {
 	// Slot and tooth-tip leakage: μ0·l·N_c²·λ per coil side, times the
 	// coupling of the currents sharing its slot, the paths in parallel
 	// dividing by their number squared (Pyrhönen et al., ch. 4: slot
-	// leakage permeance h/(3b) of the conductor region, h1/b1 of the
-	// opening, and the tooth-tip leakage 5(δ/b1)/(5 + 4δ/b1); from memory).
+	// leakage permeance of the conductor region from the slot's own shape
+	// (SlotPermeance; h/(3b) for parallel sides), h1/b1 of the opening, and
+	// the tooth-tip leakage 5(δ/b1)/(5 + 4δ/b1); from memory). The field
+	// crosses the slot from iron to iron, liners included; the conductors
+	// start above the liner at the bottom. A slot given by its area alone is
+	// taken as parallel-sided.
 	depth := p.Slot.DepthMM - st.LinerMM
-	width := p.Slot.MeanWidthMM
-	ind.SlotPermeance = depth / (3 * width)
+	top, bottom := p.Slot.MeanWidthMM, p.Slot.MeanWidthMM
+	if st.Slot.Parametric() {
+		top, bottom = st.Slot.WidthTopMM, st.Slot.WidthBottomMM
+		// The liner at the bottom lifts the conductors: their region
+		// starts where the slot is already a little wider or narrower.
+		bottom += (top - bottom) * st.LinerMM / p.Slot.DepthMM
+	}
+	ind.SlotPermeance = SlotPermeance(depth, top, bottom)
 	b0 := st.Slot.OpeningMM
 	ind.ToothTipPermeance = jm.ToothTipHeightMM/b0 + 5*(gMag/b0)/(5+4*gMag/b0)
 	ind.SlotCoupling = slotCoupling(l, 0)

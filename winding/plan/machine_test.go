@@ -33,11 +33,17 @@ func demoWith(t testing.TB, oldNew ...string) *Plan {
 //	magnetising    m·μ0·D·l·(N·k_w)²/(π·p²·g_ef)
 //	               = 3·4π·10⁻⁷·0.15·0.03·(144·0.9330127)²/(π·196·4.892434·10⁻³)
 //	                                                      = 0.1016513 mH
-//	slot           λ = 19.75/(3·8.45) = 0.779093; each U coil has one side in
+//	slot           the conductors 19.75 mm deep above the 0.25 mm liner, the
+//	               slot 5.96375 mm wide there (5.9 + 5.1·0.25/20) and 11 mm
+//	               under the tips; λ = ∫(A(y)/A)²/b(y) dy in closed form with
+//	               u = b(y), k = 5.03625/19.75 = 0.255, A = 167.5170 mm²:
+//	               λ = [(b_t⁴−b_b⁴)/4 − b_b²(b_t²−b_b²) + b_b⁴·ln(b_t/b_b)]/(4k³A²)
+//	                 = 0.5801845 (h/(3·b_mean) = 0.779 would be 34 % high
+//	               for a slot narrow at the yoke); each U coil has one side in
 //	               a slot with the same-phase neighbour (currents add: 2) and
 //	               one beside another phase, its current −I_U + I_V (or W):
 //	               Re((−1 + e^{−j120°})/(−1)) = 1.5; 8 coils → coupling 28;
-//	               μ0·l·N_c²·28·λ = 4π·10⁻⁷·0.03·324·28·0.779093 = 0.2664546 mH
+//	               μ0·l·N_c²·28·λ = 4π·10⁻⁷·0.03·324·28·0.5801845 = 0.1984268 mH
 //	tooth tip      λ = 1.5/3 + 5·(4.809524/3)/(5 + 4·4.809524/3) = 1.202364;
 //	               4π·10⁻⁷·0.03·324·28·1.202364           = 0.4112162 mH
 //	               (Pyrhönen et al., ch. 4, slot and tooth-tip leakage, from memory)
@@ -57,9 +63,9 @@ func TestInductanceParts(t *testing.T) {
 		{"CarterFactor", ind.CarterFactor, 1.017239, 1e-6},
 		{"EffectiveAirGapMM", ind.EffectiveAirGapMM, 4.892434, 1e-6},
 		{"MagnetisingMH", ind.MagnetisingMH, 0.1016513, 1e-6},
-		{"SlotPermeance", ind.SlotPermeance, 0.779093, 1e-6},
+		{"SlotPermeance", ind.SlotPermeance, 0.5801845, 1e-6},
 		{"SlotCoupling", ind.SlotCoupling, 28, 1e-12},
-		{"SlotLeakageMH", ind.SlotLeakageMH, 0.2664546, 1e-6},
+		{"SlotLeakageMH", ind.SlotLeakageMH, 0.1984268, 1e-6},
 		{"ToothTipPermeance", ind.ToothTipPermeance, 1.202364, 1e-6},
 		{"ToothTipLeakageMH", ind.ToothTipLeakageMH, 0.4112162, 1e-6},
 		{"EndWindingLeakageMH", ind.EndWindingLeakageMH, 0.02428599, 1e-5},
@@ -72,6 +78,40 @@ func TestInductanceParts(t *testing.T) {
 	}
 	if l := p.Machine.PhaseInductanceMH; l < 0.2 || l > 3 {
 		t.Errorf("Build(demo).Machine.PhaseInductanceMH = %.3f; want 0.2 to 3 mH for a machine of this size", l)
+	}
+}
+
+// TestSlotPermeance checks the slot's permeance factor against hand-worked
+// cases: parallel sides h/(3b) (Pyrhönen et al., ch. 4, from memory), and
+// trapezoids worked in closed form, λ = [(b_t⁴−b_b⁴)/4 − b_b²(b_t²−b_b²) +
+// b_b⁴·ln(b_t/b_b)]/(4k³A²), k = (b_t−b_b)/h, A = h(b_t+b_b)/2 (the integral
+// of (A(y)/A)²/b(y) with u = b(y)).
+func TestSlotPermeance(t *testing.T) {
+	closed := func(h, bt, bb float64) float64 {
+		k := (bt - bb) / h
+		a := h * (bt + bb) / 2
+		return ((bt*bt*bt*bt-bb*bb*bb*bb)/4 - bb*bb*(bt*bt-bb*bb) + bb*bb*bb*bb*math.Log(bt/bb)) / (4 * k * k * k * a * a)
+	}
+	cases := []struct {
+		name           string
+		h, top, bottom float64
+		want           float64
+	}{
+		{"parallel 10 × 4 mm: 10/12", 10, 4, 4, 10.0 / 12},
+		{"demo, narrow at the yoke", 19.75, 11, 5.96375, 0.5801845},
+		{"template, narrow under the tips (inner rotor)", 9.8, 6, 8, closed(9.8, 6, 8)},
+		{"near-triangular", 20, 10, 0.5, closed(20, 10, 0.5)},
+	}
+	for _, c := range cases {
+		if got := SlotPermeance(c.h, c.top, c.bottom); math.Abs(got-c.want) > 1e-6*c.want {
+			t.Errorf("SlotPermeance(%g, %g, %g) = %.7f; want %.7f (%s)", c.h, c.top, c.bottom, got, c.want, c.name)
+		}
+	}
+	if got := closed(19.75, 11, 5.96375); math.Abs(got-0.5801845) > 1e-6 {
+		t.Errorf("closed form for the demo = %.7f; hand value 0.5801845", got)
+	}
+	if got := SlotPermeance(0, 4, 4); got != 0 {
+		t.Errorf("SlotPermeance(0, 4, 4) = %g; want 0", got)
 	}
 }
 
