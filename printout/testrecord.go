@@ -204,18 +204,32 @@ func (b *builder) resultLines(t plan.Test, values map[string]float64) []string {
 	var out []string
 	switch t.Name {
 	case plan.TestResistance, plan.TestBalance:
+		// the resistance test: each phase against the plan; the balance
+		// (its imbalance in its own cell): the phases worked through the
+		// formula
 		var ph []string
+		var ohm []float64
+		open := false
 		for _, x := range rep.Phases {
 			if x.Open {
-				ph = append(ph, x.Phase+" open")
+				ph, open = append(ph, x.Phase+" open"), true
 				continue
 			}
-			ph = append(ph, fmt.Sprintf("%s %s (%s %%)", x.Phase, plan.FormatValue(x.Ohm20C, plan.UnitOhm), signedPct(x.DeviationPercent)))
+			ohm = append(ohm, x.Ohm20C)
+			if t.Name == plan.TestBalance {
+				ph = append(ph, x.Phase+" "+plan.FormatValue(x.Ohm20C, plan.UnitOhm))
+			} else {
+				ph = append(ph, fmt.Sprintf("%s %s (%s %% of the plan)", x.Phase, plan.FormatValue(x.Ohm20C, plan.UnitOhm), signedPct(x.DeviationPercent)))
+			}
+		}
+		line := "phases at 20 °C: " + strings.Join(ph, ", ")
+		if pct, mean := plan.ImbalancePercent(ohm); t.Name == plan.TestBalance && !open && mean > 0 {
+			line += fmt.Sprintf("; mean %s, largest deviation %s, imbalance %s (limit %s)", plan.FormatValue(mean, plan.UnitOhm),
+				plan.FormatValue(pct*mean/100, plan.UnitOhm), plan.FormatValue(rep.ImbalancePercent, plan.UnitPercent), plan.FormatValue(rep.ImbalanceLimit, plan.UnitPercent))
 		}
 		if len(ph) > 0 {
-			out = append(out, "phases at 20 °C: "+strings.Join(ph, ", "))
+			out = append(out, line)
 		}
-		out = append(out, fmt.Sprintf("imbalance %s (limit %s)", plan.FormatValue(rep.ImbalancePercent, plan.UnitPercent), plan.FormatValue(rep.ImbalanceLimit, plan.UnitPercent)))
 	case plan.TestInsulation:
 		if ins := rep.Insulation; ins != nil {
 			s := "at 40 °C: " + plan.FormatValue(ins.IR1At40C, plan.UnitMegaohm)
@@ -289,8 +303,9 @@ func (b *builder) cautionPanel(f *flow) {
 
 // Test block geometry, mm.
 const (
-	tbCellH = 6.2 // one reading row
-	tbPad   = 2.0
+	tbCellH    = 6.2 // one reading row
+	tbPad      = 2.0
+	resultsPad = 1.2 // between the last cell and the results under it
 )
 
 // readingCols are the columns of a test's reading cells, as fractions of
@@ -398,6 +413,9 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	for _, l := range results {
 		footH += paraHeight(inner, sizeBody, Regular, l)
 	}
+	if len(results) > 0 {
+		footH += resultsPad
+	}
 	whole := headH + tbCellH*float64(len(rows)+1) + footH
 	// the whole block on one sheet where it fits on one (a block is never
 	// split to leave a row or two on the next sheet); else at least the head
@@ -497,9 +515,12 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 		c.line(xs[3]+10, cy+tbCellH-1.2, xs[4]-1.2, cy+tbCellH-1.2, Pen{Width: 0.2, Colour: Ink})
 		cy += meterH
 	}
-	// results of a recorded reading
+	// results of a recorded reading, clear of the rule above them
+	if len(results) > 0 {
+		cy += resultsPad
+	}
 	for _, l := range results {
-		cy = c.para(tx, cy+0.75*sizeBody*ptMM, inner, sizeBody, Regular, Ink, l) - 0.75*sizeBody*ptMM
+		cy = c.para(tx+1.2, cy+0.75*sizeBody*ptMM, inner-1.2, sizeBody, Regular, Ink, l) - 0.75*sizeBody*ptMM
 	}
 	// pass / fail, and skipped for an optional test
 	py := cy + 1.6
