@@ -22,7 +22,11 @@
 // connection end, tooth 1 at the top of the slot map; slot k lies between
 // tooth k and tooth k+1 (package winding conventions). A sense arrow shows the way round the
 // tooth seen from the air gap facing the tooth, following the path from its
-// start terminal. In the developed layout a cross marks a coil side whose
+// start terminal. A jumper on the connection sheet is labelled slot to slot
+// from the engine's values (plan.JumperStep): the slot it leaves and the
+// slot it enters ("s2→s6"), the slot pitches and the way round seen from
+// the lead end ("4 ccw"), as the checklist's jumper rows say in words. In
+// the developed layout a cross marks a coil side whose
 // current (from the start terminal) runs into the stack, away from the
 // connection end, and a dot one running out towards it; sideIntoStack
 // derives this from the sense and the rotor side. Phase colours follow IEC
@@ -39,7 +43,12 @@
 // stroked tick, not a glyph) with their dates, writes the turns counted on
 // each done coil (a count that differs from the plan white on black, the
 // plan's under it), prints the notes under their rows and sums up the record
-// at the top; the test record prints the readings with their dates. Entries
+// at the top; the test record prints the readings with their dates and the
+// results the check (winding/verify) works out from them. A test worked out
+// from another's readings (plan.Test.ReadingsFrom: the balance from the
+// resistance readings) asks for nothing to be read: it names that test and
+// gives one computed cell. An optional test left out prints as skipped,
+// in the checklist and on the record. Entries
 // naming a step or tooth the plan no longer has there are left out and
 // counted. Rows not done stay blank, to fill in by hand.
 //
