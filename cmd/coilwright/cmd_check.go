@@ -164,10 +164,15 @@ func runCheck(cmd *cobra.Command, args []string, f *checkFlags) error {
 				return err
 			}
 		}
-		if recErr = recordCheck(cmd, path, p, r, rep); recErr == nil {
-			fmt.Fprintf(cmd.ErrOrStderr(), "recorded in %s\n", path)
-		} else if errors.Is(recErr, journal.ErrLocked) {
-			recErr = fmt.Errorf("%w; quit the guide (q) and give the same check again", recErr)
+		var filed []journal.Event
+		if filed, recErr = recordCheck(cmd, path, p, r, rep); recErr == nil {
+			fmt.Fprintf(cmd.ErrOrStderr(), "recorded in %s: %s; the bench guide and the sheet show them\n", path, filedText(filed))
+		} else if le := (*journal.LockedError)(nil); errors.As(recErr, &le) {
+			who := "another program"
+			if le.Info.Holder != "" {
+				who = fmt.Sprintf("%q (pid %d on %s)", le.Info.Holder, le.Info.PID, le.Info.Host)
+			}
+			recErr = fmt.Errorf("%s is held by %s: quit it (q in the bench guide) and give the same check again", path, who)
 		}
 	}
 	if err := writeCheckReport(cmd, p, rep, f.asJSON); err != nil {
@@ -382,10 +387,10 @@ func anyChanged(ch func(string) bool, names ...string) bool {
 // one event per plan test the check judged, on that test's step, so the bench
 // guide and the printed test record show them (progress.CheckEvents). The
 // plan's fingerprint goes first when the record lacks it.
-func recordCheck(cmd *cobra.Command, path string, p *plan.Plan, r verify.Readings, rep *verify.Report) error {
+func recordCheck(cmd *cobra.Command, path string, p *plan.Plan, r verify.Readings, rep *verify.Report) ([]journal.Event, error) {
 	s, events, torn, err := journal.Open(path, "coilwright check")
 	if err != nil {
-		return err
+		return nil, err
 	}
 	if torn != nil {
 		fmt.Fprintf(cmd.ErrOrStderr(), "check: the last line of %s was cut short (%s) and is left out\n", path, torn)
@@ -395,13 +400,27 @@ func recordCheck(cmd *cobra.Command, path string, p *plan.Plan, r verify.Reading
 			fmt.Fprintf(cmd.ErrOrStderr(), "check: %s\n", n)
 		}
 	}()
-	evs := progress.CheckEvents(p, r, rep)
+	filed := progress.CheckEvents(p, r, rep)
+	evs := filed
 	if progress.Fold(p, events).NeedsFingerprint() {
 		evs = append([]journal.Event{progress.FingerprintEvent(p)}, evs...)
 	}
 	if err := s.Append(evs...); err != nil {
 		s.Close()
-		return err
+		return nil, err
 	}
-	return s.Close()
+	return filed, s.Close()
+}
+
+// filedText says which tests a check filed, on which steps, with their
+// verdicts: "resistance (step 75) PASS, balance (step 76) PASS".
+func filedText(evs []journal.Event) string {
+	parts := make([]string, 0, len(evs))
+	for _, e := range evs {
+		parts = append(parts, fmt.Sprintf("%s (step %d) %s", e.Test, e.Step, strings.ToUpper(e.Verdict)))
+	}
+	if len(parts) == 0 {
+		return "no test of the plan"
+	}
+	return strings.Join(parts, ", ")
 }

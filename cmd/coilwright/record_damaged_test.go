@@ -67,3 +67,37 @@ func TestDamagedRecordRefusedWithTheWayOn(t *testing.T) {
 		})
 	}
 }
+
+// check --record says which tests it filed on which steps; with the record
+// held by a guide it still prints its verdict, exits 1 and says how to go on.
+func TestCheckRecordSaysWhatItFiled(t *testing.T) {
+	rec := filepath.Join(t.TempDir(), "demo.progress")
+	args := append([]string{"check", "--demo", "--four-wire", "--record", "--progress", rec}, demoLines(t, 21, [3]float64{1, 1, 1})...)
+	code, out, errs := runCLI(t, args...)
+	if code != 0 || !strings.Contains(out, "Verdict: PASS") {
+		t.Fatalf("check --record = exit %d, %q", code, errs)
+	}
+	for _, want := range []string{"recorded in " + rec, "resistance (step ", ") PASS", "balance (step "} {
+		if !strings.Contains(errs, want) {
+			t.Errorf("check --record says %q; want %q in it", errs, want)
+		}
+	}
+	before, _ := os.ReadFile(rec)
+	held, _, _, err := journal.Open(rec, "bench")
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer held.Close()
+	code, out, errs = runCLI(t, args...)
+	if code != 1 || !strings.Contains(out, "Verdict: PASS") || strings.Count(strings.TrimSpace(errs), "\n") != 0 {
+		t.Errorf("check --record on a held record = exit %d, stdout %q, stderr %q; want 1, the verdict shown, one line", code, out, errs)
+	}
+	for _, want := range []string{`"bench"`, "quit it", "same check again", "NOT recorded"} {
+		if !strings.Contains(errs, want) {
+			t.Errorf("check --record on a held record says %q; want %q in it", errs, want)
+		}
+	}
+	if after, _ := os.ReadFile(rec); string(after) != string(before) {
+		t.Errorf("the held record was changed")
+	}
+}

@@ -119,8 +119,15 @@ type WriteError struct {
 	Err     error
 }
 
+// Error puts the cause first (no space left on device, read-only file
+// system), so a status line cut to the screen's width still shows it.
 func (e *WriteError) Error() string {
-	return fmt.Sprintf("journal: %s: %v; %d event(s) kept in memory, not yet saved: fix the disk or folder and retry", e.Path, e.Err, e.Pending)
+	cause := e.Err
+	var pe *os.PathError
+	if errors.As(cause, &pe) && (pe.Path == e.Path || filepath.Dir(pe.Path) == filepath.Dir(e.Path)) {
+		cause = pe.Err // the path is said once, below
+	}
+	return fmt.Sprintf("%v writing the progress record %s; %d event(s) kept in memory, not yet saved: free space or fix the disk or folder, and it is written again", cause, e.Path, e.Pending)
 }
 
 func (e *WriteError) Unwrap() error { return e.Err }

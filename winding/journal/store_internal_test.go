@@ -4,6 +4,7 @@ import (
 	"errors"
 	"os"
 	"path/filepath"
+	"strings"
 	"syscall"
 	"testing"
 )
@@ -136,5 +137,25 @@ func TestWriteFileAtomicFullDisk(t *testing.T) {
 	}
 	if b, _ := os.ReadFile(path); string(b) != "new" {
 		t.Errorf("file after WriteFileAtomic = %q; want new", b)
+	}
+}
+
+// A failed write names its cause first, so a status line cut to the
+// terminal's width still shows it, and the record's path once.
+func TestWriteErrorCauseFirst(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	cases := []struct {
+		err  error
+		want string
+	}{
+		{&os.PathError{Op: "write", Path: path, Err: syscall.ENOSPC}, "no space left on device writing the progress record " + path + ";"},
+		{&os.PathError{Op: "open", Path: path + ".tmp-1", Err: syscall.EROFS}, "read-only file system writing the progress record " + path + ";"},
+		{syscall.EIO, "input/output error writing the progress record " + path + ";"},
+	}
+	for _, c := range cases {
+		msg := (&WriteError{Path: path, Pending: 3, Err: c.err}).Error()
+		if !strings.HasPrefix(msg, c.want) || strings.Count(msg, path) != 1 || !strings.Contains(msg, "3 event(s) kept in memory") {
+			t.Errorf("WriteError(%v) = %q; want it to start %q and name the path once", c.err, msg, c.want)
+		}
 	}
 }
