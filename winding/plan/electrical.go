@@ -83,6 +83,10 @@ func (b *builder) electrical() error {
 func (b *builder) copperLoss() {
 	p, r := b.p, b.j.Rating
 	m := float64(len(p.Layout.PhaseNames))
+	p.ThermalClass = r.ThermalClass
+	if p.ThermalClass == 0 {
+		p.ThermalClass = job.DefaultThermalClass
+	}
 	switch {
 	case r.CopperTemperatureC != 0:
 		p.CopperLossTemperatureC = r.CopperTemperatureC

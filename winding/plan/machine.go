@@ -71,10 +71,13 @@ type Iron struct {
 
 // Losses are the losses at the rated point by kind, in W.
 type Losses struct {
-	Copper     float64 `json:"copper"` // the plan's copper loss, hot
-	Iron       float64 `json:"iron"`   // teeth and yoke
-	IronTeeth  float64 `json:"iron_teeth"`
-	IronYoke   float64 `json:"iron_yoke"`
+	Copper float64 `json:"copper"` // the plan's copper loss, hot
+	// Iron is the loss of teeth and yoke; absent (not 0) when the job does
+	// not give what it needs (Machine.Iron nil, said in Machine.Notes), and
+	// Total is then a lower bound.
+	Iron       float64 `json:"iron,omitempty"`
+	IronTeeth  float64 `json:"iron_teeth,omitempty"`
+	IronYoke   float64 `json:"iron_yoke,omitempty"`
 	Mechanical float64 `json:"mechanical"`
 	Total      float64 `json:"total"`
 }

@@ -1,6 +1,7 @@
 package plan
 
 import (
+	"encoding/json"
 	"math"
 	"math/cmplx"
 	"strings"
@@ -438,6 +439,18 @@ func TestMachineNotes(t *testing.T) {
 	noYoke := demoWith(t, "yoke_thickness_mm = 8 ", "# yoke_thickness_mm = 8 ")
 	if noYoke.Machine.Losses.Iron != 0 || noYoke.Machine.Efficiency != 0 || !strings.Contains(strings.Join(noYoke.Machine.Notes, " "), "machine.yoke_thickness_mm") {
 		t.Errorf("demo without the yoke: losses %+v, efficiency %g, notes %q; want no iron loss or efficiency and a note", *noYoke.Machine.Losses, noYoke.Machine.Efficiency, noYoke.Machine.Notes)
+	}
+	// An iron loss not estimated is never shown as 0 W: absent from the
+	// JSON, said in the text, and the sum said to be a lower bound.
+	js, err := json.Marshal(noYoke.Machine.Losses)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if strings.Contains(string(js), `"iron`) {
+		t.Errorf("losses_w without the yoke = %s; want no iron keys", js)
+	}
+	if txt := noYoke.Text(); !strings.Contains(txt, "losses at least") || !strings.Contains(txt, "iron not estimated") || strings.Contains(txt, "iron 0.0") {
+		t.Errorf("plan text without the yoke does not say the iron loss is not estimated:\n%s", txt)
 	}
 }
 

@@ -42,8 +42,14 @@ func (p *Plan) machineText(b *strings.Builder) {
 			if mc.MechanicalAllowance {
 				mech = "allowance"
 			}
-			row(at, "losses %.1f W: copper %.1f, iron %.1f (teeth %.1f, yoke %.1f), mechanical %.1f (%s)",
-				ls.Total, ls.Copper, ls.Iron, ls.IronTeeth, ls.IronYoke, ls.Mechanical, mech)
+			if mc.Iron == nil {
+				// Without the iron loss the sum is a lower bound.
+				row(at, "losses at least %.1f W: copper %.1f, iron not estimated, mechanical %.1f (%s)",
+					ls.Total, ls.Copper, ls.Mechanical, mech)
+			} else {
+				row(at, "losses %.1f W: copper %.1f, iron %.1f (teeth %.1f, yoke %.1f), mechanical %.1f (%s)",
+					ls.Total, ls.Copper, ls.Iron, ls.IronTeeth, ls.IronYoke, ls.Mechanical, mech)
+			}
 		}
 		if mc.Efficiency > 0 {
 			row("", "efficiency %.3f = %.0f W / %.0f W (%s)", mc.Efficiency, mc.OutputW, mc.InputW, mc.Operation)

@@ -3,6 +3,7 @@ package plan
 import (
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"coilwright/winding"
@@ -228,10 +229,25 @@ func (b *builder) polarityTest() Test {
 			amps, paths),
 		Unit: UnitPole, Compare: Matches, Current: amps, HeatW: round3(watts), Readings: poleReadings(p.Polarity),
 		Source: "common practice (the DC polarity test of rewinders); poles by the right-hand rule: a coil wound clockwise seen from the air gap, current entering at its start, makes its tooth face a south pole (a compass's north end points at it), counter-clockwise a north pole",
-		Note: fmt.Sprintf("%g A is a fifth of the rated phase current (at most %g A); it needs about %s across the phase and makes %s of heat in it (I²R at %s), "+
+		Note: fmt.Sprintf("%g A is %s of the rated phase current of %s (at most %g A); it needs about %s across the phase and makes %s of heat in it (I²R at %s), "+
 			"so the winding stays cool; a reversed coil shows the opposite pole of the plan, swapped start and finish leads reverse every tooth of the phase (or of the path)",
-			amps, PolarityCurrentMaxA, formatVolts(volts), formatWatts(watts), FormatValue(p.PhaseResistanceAmbient, UnitOhm)),
+			amps, fractionWords(amps, p.PhaseCurrentA), strconv.FormatFloat(p.PhaseCurrentA, 'g', 3, 64)+" A", PolarityCurrentMaxA, formatVolts(volts), formatWatts(watts), FormatValue(p.PhaseResistanceAmbient, UnitOhm)),
 		Caution: PolarityCaution}
+}
+
+// fractionWords says what share of the rated current the test current is,
+// as rounded to 0.1 A: "a fifth" when it is within 5 % of one, else "about
+// a fifth" (or the bench supply's limit when that set it).
+func fractionWords(amps, rated float64) string {
+	switch {
+	case rated <= 0:
+		return "a share"
+	case PolarityCurrentFraction*rated > PolarityCurrentMaxA:
+		return "the bench supply's limit, less than a fifth"
+	case math.Abs(amps/(PolarityCurrentFraction*rated)-1) <= 0.05:
+		return "a fifth"
+	}
+	return "about a fifth"
 }
 
 func formatVolts(v float64) string {

@@ -91,7 +91,7 @@ func (p *Plan) Resolutions() []Resolution {
 // back-EMF balance sees.
 func reversedCoilWords(reversed, seen int) string {
 	if reversed >= seen {
-		return fmt.Sprintf("a coil wound the wrong way round (%d turns the other way) shows", reversed)
+		return fmt.Sprintf("a coil wound the wrong way round (%d turns the other way) shows plainly", reversed)
 	}
 	return fmt.Sprintf("even a coil wound the wrong way round (%d turns the other way) can hide in the rotor's own spread: the polarity test finds it", reversed)
 }

@@ -41,8 +41,12 @@ type Plan struct {
 	// temperature of its thermal class.
 	CopperLossTemperatureC     float64 `json:"copper_loss_temperature_c"`
 	CopperLossTemperatureBasis string  `json:"copper_loss_temperature_basis"` // where the temperature comes from, in words
-	PhaseResistanceHot         float64 `json:"phase_resistance_hot_ohm"`      // at CopperLossTemperatureC
-	CopperLossAmbientW         float64 `json:"copper_loss_ambient_w"`         // all phases at rated current, at AmbientC
+	// ThermalClass is the insulation's thermal class of IEC 60085 (the
+	// job's rating.thermal_class, job.DefaultThermalClass when not given):
+	// it sets the polarization-index minimum that check applies.
+	ThermalClass       int     `json:"thermal_class"`
+	PhaseResistanceHot float64 `json:"phase_resistance_hot_ohm"` // at CopperLossTemperatureC
+	CopperLossAmbientW float64 `json:"copper_loss_ambient_w"`    // all phases at rated current, at AmbientC
 
 	// Added by the plan builder (the fields above are the shared contract).
 	PhaseOhms           []PhaseOhm `json:"phase_ohms"`      // each phase between its terminals, from its own path lengths

@@ -6,15 +6,17 @@ import (
 	"coilwright/winding/plan"
 )
 
-// IEEE 43-2013 values (Table 3 and the polarization-index clause; from
-// memory): the minimum insulation resistance
+// IEEE 43-2013 values (Table 3, Table 4 and the polarization-index clause;
+// from memory): the minimum insulation resistance
 // after 1 minute, corrected to 40 °C, is 5 MΩ for random-wound windings and
-// form-wound coils below 1 kV; the minimum polarization index for class B and
-// above is 2.0; the PI may be disregarded when IR1 at 40 °C exceeds 5000 MΩ.
-// Test voltage for windings rated below 1000 V: 500 V DC (Table 1).
+// form-wound coils below 1 kV; the minimum polarization index is 2.0 for
+// thermal class 130 (B) and above, 1.5 for class 105 (A); the PI may be
+// disregarded when IR1 at 40 °C exceeds 5000 MΩ. Test voltage for windings
+// rated below 1000 V: 500 V DC (Table 1).
 const (
 	MinIRMOhm         = 5.0
 	MinPI             = 2.0
+	MinPIClassA       = 1.5
 	PIMeaningfulBelow = 5000.0
 	IRTestVolts       = 500.0
 	// IEEE43ScopeW: the standard covers machines of 750 W and above.
@@ -35,11 +37,31 @@ func (c *checker) ratedPowerW() float64 {
 	return 3 * c.p.EMF.PhaseRMSAtRated * c.p.RatedCurrentA
 }
 
+// MinPIFor returns the IEEE 43-2013 minimum polarization index of an
+// insulation of the thermal class (IEC 60085): 1.5 for 105 (A), 2.0 for
+// 130 (B) and above, and for a class not known.
+func MinPIFor(thermalClass int) float64 {
+	if thermalClass == 105 {
+		return MinPIClassA
+	}
+	return MinPI
+}
+
+// thermalClass is the plan's thermal class, 130 for a plan that does not
+// say (one built before the plan carried it).
+func (c *checker) thermalClass() int {
+	if c.p.ThermalClass == 0 {
+		return 130
+	}
+	return c.p.ThermalClass
+}
+
 func (c *checker) insulation() {
 	in := c.r.Insulation
 	t := c.r.TempC
+	minPI := MinPIFor(c.p.ThermalClass)
 	res := &InsulationResult{IR1MOhm: in.IR1MOhm, IR10MOhm: in.IR10MOhm, IR1At40C: IRTo40C(in.IR1MOhm, t),
-		MinimumMOhm: MinIRMOhm, PIMinimum: MinPI, Volts: in.Volts, RatedPowerW: c.ratedPowerW(), Verdict: Pass}
+		MinimumMOhm: MinIRMOhm, PIMinimum: minPI, Volts: in.Volts, RatedPowerW: c.ratedPowerW(), Verdict: Pass}
 	c.rep.Insulation = res
 	scope := ""
 	switch {
@@ -65,18 +87,18 @@ func (c *checker) insulation() {
 		switch {
 		case res.IR1At40C > PIMeaningfulBelow:
 			add(Pass, fmt.Sprintf("polarization index %.2f: with IR1 above %g MΩ at 40 °C, IEEE 43 lets the index be disregarded", res.PI, PIMeaningfulBelow))
-		case res.PI < MinPI && !res.BelowScope && res.RatedPowerW > 0:
-			add(Fail, fmt.Sprintf("polarization index %.2f (IR10 %s / IR1 %s) is below %.1f (IEEE 43-2013): moisture or contamination in the insulation; dry and clean, then test again",
-				res.PI, mohm(in.IR10MOhm), mohm(in.IR1MOhm), MinPI))
-		case res.PI < MinPI:
+		case res.PI < minPI && !res.BelowScope && res.RatedPowerW > 0:
+			add(Fail, fmt.Sprintf("polarization index %.2f (IR10 %s / IR1 %s) is below %.1f (IEEE 43-2013, thermal class %d): moisture or contamination in the insulation; dry and clean, then test again",
+				res.PI, mohm(in.IR10MOhm), mohm(in.IR1MOhm), minPI, c.thermalClass()))
+		case res.PI < minPI:
 			// IEEE 43-2013 notes that the polarization index may not apply
 			// to small random-wound machines (from memory): their enamel
 			// and varnish polarise within the first minute, so a low index
 			// is a hint, not a verdict; the 1-minute IR judges.
 			add(Warn, fmt.Sprintf("polarization index %.2f (IR10 %s / IR1 %s) is below the %.1f IEEE 43-2013 gives for larger machines; for a small random-wound winding below its scope the index may not apply, and the insulation resistance of %s at 40 °C judges: a falling reading can still mean moisture, so dry the winding if it has been damp",
-				res.PI, mohm(in.IR10MOhm), mohm(in.IR1MOhm), MinPI, mohm(res.IR1At40C)))
+				res.PI, mohm(in.IR10MOhm), mohm(in.IR1MOhm), minPI, mohm(res.IR1At40C)))
 		default:
-			add(Pass, fmt.Sprintf("polarization index %.2f, at least %.1f (IEEE 43-2013)", res.PI, MinPI))
+			add(Pass, fmt.Sprintf("polarization index %.2f, at least %.1f (IEEE 43-2013, thermal class %d)", res.PI, minPI, c.thermalClass()))
 		}
 	}
 	switch {

@@ -354,6 +354,26 @@ func TestPILowInScope(t *testing.T) {
 	if rep.Verdict != verify.Fail || findText(rep, verify.Fail, "polarization index 1.20") == nil {
 		t.Errorf("Check(3 kW, PI 1.2) = %s, %+v; want fail on the polarization index", rep.Verdict, rep.Findings)
 	}
+	// IEEE 43-2013 Table 4 (from memory): minimum PI 1.5 for thermal class
+	// 105 (A), 2.0 for 130 (B) and above. PI 1.6 (IR 1000 → 1600 MΩ) passes
+	// class A and fails class B at 3 kW.
+	for _, c := range []struct {
+		class int
+		want  verify.Verdict
+	}{{105, verify.Pass}, {130, verify.Fail}, {155, verify.Fail}} {
+		q := *p
+		q.ThermalClass = c.class
+		rep, err := verify.Check(&q, verify.Readings{TempC: 20, Insulation: &verify.Insulation{IR1MOhm: 1000, IR10MOhm: 1600, Volts: 500}})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if rep.Verdict != c.want || rep.Insulation.PIMinimum != verify.MinPIFor(c.class) {
+			t.Errorf("Check(3 kW, class %d, PI 1.6) = %s (minimum %g), %+v; want %s", c.class, rep.Verdict, rep.Insulation.PIMinimum, rep.Findings, c.want)
+		}
+	}
+	if got := verify.MinPIFor(105); got != 1.5 {
+		t.Errorf("MinPIFor(105) = %g; want 1.5 (IEEE 43-2013 Table 4)", got)
+	}
 }
 
 func TestWithstandAgainstPlanVoltage(t *testing.T) {
