@@ -189,3 +189,65 @@ func TestPolarityFieldsAndVerdictLive(t *testing.T) {
 		checkLive(t, name+" verdict", plain(m), []string{"verdict: FAIL", fmt.Sprintf("tooth %d shows", wrong.Tooth), "enter records the step"})
 	}
 }
+
+// TestPolarityUnsureToothReadAgain reads the first tooth of a polarity step
+// as unsure and the rest as planned: the unsure tooth comes up again, and
+// read right the step passes.
+func TestPolarityUnsureToothReadAgain(t *testing.T) {
+	p := demoWith(t, "")
+	s := firstStep(t, p, isPolarity)
+	teeth := polarityTeeth(p, s)
+	m := New(Options{Plan: p, Recorder: &memRecorder{}, Now: fixedNow,
+		History: stamped(p, doneUpTo(p, func(x plan.Step) bool { return x.Index == s.Index }))})
+	drive(t, m, tea.WindowSizeMsg{Width: 80, Height: 24})
+	keys(t, m, "x")
+	for _, tp := range teeth[1:] {
+		keys(t, m, strings.ToLower(string(tp.Pole)))
+	}
+	first := teeth[0]
+	checkLive(t, "unsure again", plain(m), []string{fmt.Sprintf("tooth %d", first.Tooth), "again: it was unsure", "verdict: WARN"})
+	if got := m.c.polarityTooth(s.Index - 1); got != first.Tooth {
+		t.Errorf("tooth in hand %d; want the unsure tooth %d", got, first.Tooth)
+	}
+	keys(t, m, strings.ToLower(string(first.Pole)))
+	checkLive(t, "read again", plain(m), []string{"verdict: PASS"})
+	keys(t, m, "enter")
+	if !m.c.prog.Steps[s.Index-1].Done {
+		t.Error("the polarity step is not done after enter")
+	}
+}
+
+// TestLegendKeepsTheView checks the legend under the drawing at every width
+// from the minimum up: it fits, and the signs' sense is never shown without
+// the view it is seen from.
+func TestLegendKeepsTheView(t *testing.T) {
+	for _, looking := range []bool{false, true} {
+		for w := minWidth; w <= 220; w++ {
+			ls := legend(w, looking)
+			all := strings.Join(ls, " ")
+			if len(ls) == 0 || len(ls) > 2 || !strings.Contains(all, "+U") || !strings.Contains(all, "air gap") {
+				t.Fatalf("legend(%d, %v) = %q; want one or two lines with the signs and \"air gap\"", w, looking, ls)
+			}
+			for _, l := range ls {
+				if len(l) > w {
+					t.Errorf("legend(%d, %v) line %q is wider than %d", w, looking, l, w)
+				}
+			}
+			if looking && !strings.Contains(all, "* looking") {
+				t.Errorf("legend(%d, looking) = %q lacks the '*' mark", w, ls)
+			}
+		}
+	}
+}
+
+// TestLegendBesideANarrowRing: beside the narrowest ring the legend may take
+// three lines, never none.
+func TestLegendBesideANarrowRing(t *testing.T) {
+	for w := 28; w < minWidth; w++ {
+		for _, looking := range []bool{false, true} {
+			if ls := legend(w, looking); len(ls) == 0 || !strings.Contains(strings.Join(ls, " "), "air gap") {
+				t.Errorf("legend(%d, %v) = %q; want the signs with their view", w, looking, ls)
+			}
+		}
+	}
+}

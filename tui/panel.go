@@ -153,6 +153,15 @@ func (g guideModel) panelParts(cw, inner, lv int) *panelParts {
 			b.text("esc or home: back to "+g.backTo(), c.st.banner.Render)
 		})
 	}
+	if g.mode == modeConfirmUndo {
+		// The question first: it is about another step than the panel's.
+		if last := c.prog.LastDone(); last >= 0 {
+			ls, _ := c.step(last)
+			pp.add(partLive, func(b *lines) {
+				b.text(fmt.Sprintf("Undo step %d (%s)? enter/y undoes it, esc keeps it.", ls.Index, ls.Title), c.st.warn.Render)
+			})
+		}
+	}
 	switch {
 	case !ok:
 		pp.add(partLive, g.doneView)
@@ -169,14 +178,6 @@ func (g guideModel) panelParts(cw, inner, lv int) *panelParts {
 		pp.add(partLive, func(b *lines) { b.raw(g.note.View()) })
 	} else if ok && c.prog.Steps[cur].Note != "" {
 		pp.add(partUseful, func(b *lines) { b.kv("note", c.prog.Steps[cur].Note) })
-	}
-	if g.mode == modeConfirmUndo {
-		if last := c.prog.LastDone(); last >= 0 {
-			ls, _ := c.step(last)
-			pp.add(partLive, func(b *lines) {
-				b.text(fmt.Sprintf("Undo step %d (%s)? enter/y undoes it, esc keeps it.", ls.Index, ls.Title), c.st.warn.Render)
-			})
-		}
 	}
 	return pp
 }
@@ -343,7 +344,7 @@ func (g guideModel) countWords(n, want, i int) (of, state string) {
 	case looking:
 		state = fmt.Sprintf("wound %d short", want-n)
 	case n == want:
-		state = "= plan, press enter"
+		state = "as planned: press enter"
 	case n > want:
 		state = fmt.Sprintf("%d over", n-want)
 	default:
@@ -463,9 +464,15 @@ func (g guideModel) testView(pp *panelParts, s plan.Step) {
 		})
 	case modeVerdict:
 		pp.add(partLive, func(b *lines) {
+			// The values in a column after the longest label, so a
+			// label never runs into its value.
+			lw := 0
+			for _, f := range g.labels {
+				lw = max(lw, ansi.StringWidth(f.label))
+			}
 			for i := range g.fields {
 				if i < len(g.labels) && i < len(g.values) {
-					b.kv(g.labels[i].label, g.verdictValue(t, i))
+					b.kvIn(g.labels[i].label+strings.Repeat(" ", max(0, lw+1-ansi.StringWidth(g.labels[i].label))), g.verdictValue(t, i), c.st.strong)
 				}
 			}
 			g.verdictView(b, g.verdict)

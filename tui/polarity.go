@@ -82,6 +82,29 @@ func polarityNext(v []float64) int {
 	return len(v)
 }
 
+// polarityAgain is the index of the first tooth read as unsure once every
+// tooth is read, -1 when none: it is read again next.
+func polarityAgain(v []float64) int {
+	if polarityNext(v) < len(v) {
+		return -1
+	}
+	for i, x := range v {
+		if x == 0 {
+			return i
+		}
+	}
+	return -1
+}
+
+// polarityHand is the index of the tooth in hand: the first not read, then
+// the first unsure; len when there is none.
+func polarityHand(v []float64) int {
+	if a := polarityAgain(v); a >= 0 {
+		return a
+	}
+	return polarityNext(v)
+}
+
 // polarityTooth is the tooth to read now on step i (0-based), 0 when none.
 func (c *shared) polarityTooth(i int) int {
 	s, ok := c.step(i)
@@ -89,7 +112,7 @@ func (c *shared) polarityTooth(i int) int {
 		return 0
 	}
 	teeth := polarityTeeth(c.plan, s)
-	if n := polarityNext(c.polarityValues(s)); n < len(teeth) {
+	if n := polarityHand(c.polarityValues(s)); n < len(teeth) {
 		return teeth[n].Tooth
 	}
 	return 0
@@ -102,9 +125,10 @@ func (g guideModel) polarityKey(msg tea.KeyMsg, s plan.Step) (guideModel, tea.Cm
 	teeth := polarityTeeth(g.c.plan, s)
 	v := g.c.polarityValues(s)
 	next := polarityNext(v)
+	hand := polarityHand(v) // an unsure tooth is read again once all are read
 	var pole float64
 	switch {
-	case next >= len(teeth) && key.Matches(msg, g.c.keys.guide.Note):
+	case hand >= len(teeth) && key.Matches(msg, g.c.keys.guide.Note):
 		return g, nil, false // every tooth is read: n takes a note, as on other steps
 	case key.Matches(msg, k.North):
 		pole = plan.North.Value()
@@ -133,20 +157,22 @@ func (g guideModel) polarityKey(msg tea.KeyMsg, s plan.Step) (guideModel, tea.Cm
 	default:
 		return g, nil, false
 	}
-	if next >= len(teeth) {
+	if hand >= len(teeth) {
 		g.flash = "every tooth is read: enter records the step, n adds a note, bksp reads the last again"
 		return g, nil, true
 	}
-	v[next] = pole
+	v[hand] = pole
 	g.recordPolarity(s, v)
-	tp := teeth[next]
+	tp := teeth[hand]
 	switch seen, sure := plan.PoleFromValue(pole); {
+	case !sure && hand == next:
+		g.flash = fmt.Sprintf("tooth %d: unsure; it comes up again once every tooth is read", tp.Tooth)
 	case !sure:
-		g.flash = fmt.Sprintf("tooth %d: unsure, read it again later (bksp) or note it", tp.Tooth)
+		g.flash = fmt.Sprintf("tooth %d: still unsure; note it, or enter records the step with it unsure", tp.Tooth)
 	case seen == tp.Pole:
 		g.flash = fmt.Sprintf("tooth %d: %s as planned", tp.Tooth, seen)
 	default:
-		g.flash = ""
+		g.flash = fmt.Sprintf("tooth %d shows %s where the plan has %s: coil %d (step %d)", tp.Tooth, seen, tp.Pole, tp.Coil, tp.Step)
 	}
 	return g, nil, true
 }
@@ -227,17 +253,21 @@ func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 	// the other pole, the verdict, and the caution in short.
 	pp.add(partLive, func(b *lines) {
 		b.titled("polarity test", g.stepOf(s))
-		if next < len(teeth) && !looking {
-			tp := teeth[next]
+		if hand := polarityHand(v); hand < len(teeth) && !looking {
+			tp := teeth[hand]
 			where := "points AT the face"
 			if tp.Pole == plan.North {
 				where = "points AWAY from the face"
 			}
-			b.raw(fmt.Sprintf("tooth %s  phase %s  expect %s  (%d of %d)",
+			of := fmt.Sprintf("(%d of %d)", hand+1, len(teeth))
+			if hand != next {
+				of = "(again: it was unsure)"
+			}
+			b.raw(fmt.Sprintf("tooth %s  phase %s  expect %s  %s",
 				st.strong.Render(strconv.Itoa(tp.Tooth)), st.phaseStyle(c.phaseIndex(tp.Phase)).Render(tp.Phase),
-				st.strong.Render(poleWord(tp.Pole)), next+1, len(teeth)))
+				st.strong.Render(poleWord(tp.Pole)), of))
 			b.text("the compass's north end "+where, st.value.Render)
-			if len(s.Phases) > 1 && (next == 0 || teeth[next-1].Phase != tp.Phase) {
+			if len(s.Phases) > 1 && hand == next && (next == 0 || teeth[next-1].Phase != tp.Phase) {
 				b.text(fmt.Sprintf("clips on %s1 (+) and %s2 (-) now; switch the supply off before moving them", tp.Phase, tp.Phase), st.warn.Render)
 			}
 		}

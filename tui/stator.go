@@ -364,8 +364,9 @@ func stripCaption(a, b, q, w int) string {
 }
 
 // legend explains the marks in as few lines of width w as it takes (two at
-// most), the words for the signs shortened first; while a step other than
-// the current one is looked at it names the '*' mark too. The sense of the
+// most, three beside a narrow ring), the words for the signs shortened
+// first; while a step other than the current one is looked at it names the
+// '*' mark too. The sense of the
 // signs is never shown without its view: "seen from the air gap", or
 // "(from air gap)" when short; nil when not even that fits.
 func legend(w int, looking bool) []string {
@@ -379,7 +380,7 @@ func legend(w int, looking bool) []string {
 		"+U cw  -U ccw, seen from the air gap",
 		"+U cw -U ccw (from air gap)",
 	}
-	for _, lines := range []int{1, 2} {
+	for _, lines := range []int{1, 2, 3} {
 		for _, sense := range senses {
 			if out := packLegend(append(append([]string{}, marks...), sense), w); out != nil && len(out) <= lines {
 				return out
