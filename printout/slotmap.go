@@ -637,6 +637,15 @@ func (b *builder) drawLeads(c *canvas, g ringGeometry) {
 }
 
 // ringCentre writes what the drawing shows inside the bore (or the yoke).
+// pathsWords says how many paths a phase has, short enough for the ring's
+// centre: "1 path", "2 paths".
+func pathsWords(n int) string {
+	if n <= 1 {
+		return "1 path"
+	}
+	return fmt.Sprintf("%d paths", n)
+}
+
 func (b *builder) ringCentre(c *canvas, g ringGeometry) {
 	l := b.p.Layout
 	o := g.centre
@@ -650,7 +659,7 @@ func (b *builder) ringCentre(c *canvas, g ringGeometry) {
 		fmt.Sprintf("%d teeth, %d poles", l.Spec.Slots, l.Spec.Poles),
 		fmt.Sprintf("%s rotor", rotorWord(b.p.Rotor)),
 		fmt.Sprintf("%d turns per coil", b.p.TurnsPerCoil),
-		fmt.Sprintf("%s, %d path(s)", b.p.Connection, l.Spec.Paths),
+		fmt.Sprintf("%s, %s", b.p.Connection, pathsWords(l.Spec.Paths)),
 	}
 	y := o.Y - lh*float64(len(lines)-1)/2
 	for i, s := range lines {
