@@ -117,7 +117,7 @@ func TestDecodeTruncatedEveryOffset(t *testing.T) {
 func TestStoreTruncatedEveryOffset(t *testing.T) {
 	data, ends := record(t, 4)
 	for off := 0; off <= len(data); off++ {
-		path := filepath.Join(t.TempDir(), "job.toml.progress") // a fresh folder: torn tails leave side files
+		path := filepath.Join(tempDir(t), "job.toml.progress") // a fresh folder: torn tails leave side files
 		if err := os.WriteFile(path, data[:off], 0o644); err != nil {
 			t.Fatal(err)
 		}
@@ -147,7 +147,7 @@ func TestStoreTruncatedEveryOffset(t *testing.T) {
 }
 
 func TestStoreLockRefusedNamesHolder(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "stator.toml.progress")
+	path := filepath.Join(tempDir(t), "stator.toml.progress")
 	a, _, _, err := journal.Open(path, "bench guide")
 	if err != nil {
 		t.Fatal(err)
@@ -183,7 +183,7 @@ func TestStoreStaleLockTakenOver(t *testing.T) {
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			path := filepath.Join(t.TempDir(), "stator.toml.progress")
+			path := filepath.Join(tempDir(t), "stator.toml.progress")
 			if err := os.WriteFile(journal.LockPathFor(path), []byte(c.lock), 0o644); err != nil {
 				t.Fatal(err)
 			}
@@ -206,7 +206,7 @@ func TestStoreReadOnlyDirectory(t *testing.T) {
 	if os.Geteuid() == 0 {
 		t.Skip("root ignores directory permissions; the failing-disk case is covered by TestStoreWriteFailureKeepsPending")
 	}
-	dir := t.TempDir()
+	dir := tempDir(t)
 	path := filepath.Join(dir, "job.toml.progress")
 	s, _, _, err := journal.Open(path, "test")
 	if err != nil {
@@ -229,7 +229,7 @@ func TestStoreReadOnlyDirectory(t *testing.T) {
 }
 
 func TestFreshRecordCreatedOnFirstAppend(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(tempDir(t), "job.toml.progress")
 	s, ev, torn, err := journal.Open(path, "test")
 	if err != nil || len(ev) != 0 || torn != nil {
 		t.Fatalf("Open(new) = %d events, %v, %v", len(ev), torn, err)
@@ -255,7 +255,7 @@ func TestFreshRecordCreatedOnFirstAppend(t *testing.T) {
 }
 
 func TestNoFinalNewlineRepaired(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(tempDir(t), "job.toml.progress")
 	os.WriteFile(path, readSeed(t, "no-final-newline.jsonl"), 0o644)
 	s, ev, _, err := journal.Open(path, "test")
 	if err != nil || len(ev) != 1 {

@@ -57,7 +57,7 @@ func TestStoreNoticesRecordChangedUnderIt(t *testing.T) {
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			path := filepath.Join(t.TempDir(), "job.toml.progress")
+			path := filepath.Join(tempDir(t), "job.toml.progress")
 			s := openT(t, path)
 			for i := 1; i <= 3; i++ {
 				if err := s.Append(journal.Event{Kind: journal.Turns, Step: 2, Tooth: 1, Turns: i}); err != nil {
@@ -99,7 +99,7 @@ func TestStoreNoticesRecordChangedUnderIt(t *testing.T) {
 // Lines appended by another program are cut from the record before the next
 // write, but only after they were copied to a side file.
 func TestStoreKeepsForeignBytesAside(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(tempDir(t), "job.toml.progress")
 	s := openT(t, path)
 	s.Append(journal.Event{Kind: journal.Done, Step: 1})
 	f, _ := os.OpenFile(path, os.O_APPEND|os.O_WRONLY, 0)
@@ -125,7 +125,7 @@ func TestStoreKeepsForeignBytesAside(t *testing.T) {
 // report before it is cut; a damaged last line that ends in a newline is
 // refused with its line number and the record left as it is.
 func TestStoreTornTailKeptAside(t *testing.T) {
-	dir := t.TempDir()
+	dir := tempDir(t)
 	path := filepath.Join(dir, "job.toml.progress")
 	good := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}` + "\n"
 	if err := os.WriteFile(path, []byte(good+`{"seq":2,"kind":"tu`), 0o644); err != nil {
@@ -194,7 +194,7 @@ func TestDecodeBoundsValues(t *testing.T) {
 
 // Control characters never get into a record nor out of one.
 func TestNotesCleanedInAndOut(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(tempDir(t), "job.toml.progress")
 	s := openT(t, path)
 	evil := "sleeved\x1b]0;owned\x07\x1b[2J at slot\u009b12"
 	if err := s.Append(journal.Event{Kind: journal.Note, Step: 2, Note: evil}); err != nil {
@@ -214,7 +214,7 @@ func TestNotesCleanedInAndOut(t *testing.T) {
 
 // Two paths to one record (a symbolic link) share its lock.
 func TestStoreLockFollowsSymlink(t *testing.T) {
-	dir := t.TempDir()
+	dir := tempDir(t)
 	path := filepath.Join(dir, "job.toml.progress")
 	os.WriteFile(path, nil, 0o644)
 	link := filepath.Join(dir, "elsewhere.progress")
@@ -236,7 +236,7 @@ func TestStoreLockFollowsSymlink(t *testing.T) {
 // Starters racing for a stale lock: never more than one holder at a time,
 // and a closing holder never deletes the lock of the next.
 func TestStoreLockNoTakeOverRace(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(tempDir(t), "job.toml.progress")
 	var holders, most atomic.Int32
 	for round := 0; round < 100; round++ {
 		os.WriteFile(journal.LockPathFor(path), []byte(`{"holder":"bench","pid":2147483000,"host":"x"}`), 0o644)
@@ -265,7 +265,7 @@ func TestStoreLockNoTakeOverRace(t *testing.T) {
 
 // Taking a lock nobody held says whose it was.
 func TestStaleLockTakenIsSaid(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(tempDir(t), "job.toml.progress")
 	os.WriteFile(journal.LockPathFor(path), []byte(`{"holder":"bench","pid":1,"host":"bench-pc","since":"2025-03-08T09:00:00Z"}`), 0o644)
 	s := openT(t, path)
 	n := s.Notices()
@@ -279,7 +279,7 @@ func TestStaleLockTakenIsSaid(t *testing.T) {
 // systems reuse it at once): the store holds the record open from Open on.
 func TestStoreNoticesRecordRecreatedBeforeFirstWrite(t *testing.T) {
 	for round := 0; round < 20; round++ {
-		path := filepath.Join(t.TempDir(), "job.toml.progress")
+		path := filepath.Join(tempDir(t), "job.toml.progress")
 		ours := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}` + "\n"
 		if err := os.WriteFile(path, []byte(ours), 0o644); err != nil {
 			t.Fatal(err)
@@ -317,7 +317,7 @@ func TestStoreNoticesRecordRecreatedBeforeFirstWrite(t *testing.T) {
 // The guide may close the store while its last write still runs: the calls
 // take turns, and every event is written once.
 func TestStoreConcurrentAppendAndClose(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(tempDir(t), "job.toml.progress")
 	s, _, _, err := journal.Open(path, "test")
 	if err != nil {
 		t.Fatal(err)
@@ -370,7 +370,7 @@ func TestOpenDamagedSaysHowToGoOn(t *testing.T) {
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			path := filepath.Join(t.TempDir(), "job.toml.progress")
+			path := filepath.Join(tempDir(t), "job.toml.progress")
 			if err := os.WriteFile(path, []byte(c.data), 0o644); err != nil {
 				t.Fatal(err)
 			}
@@ -394,4 +394,12 @@ func TestOpenDamagedSaysHowToGoOn(t *testing.T) {
 			}
 		})
 	}
+}
+
+// tempDir is a test's temporary folder named as the store names its files,
+// with symbolic links resolved (on some systems the temporary folder lies
+// behind one, e.g. /var -> /private/var), so paths in notices compare equal.
+func tempDir(t *testing.T) string {
+	t.Helper()
+	return journal.Resolve(t.TempDir())
 }

@@ -21,7 +21,7 @@ func (f failingFile) Write(p []byte) (int, error) {
 }
 
 func TestStoreWriteFailureKeepsPending(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(resolvedTempDir(t), "job.toml.progress")
 	s, _, _, err := Open(path, "test")
 	if err != nil {
 		t.Fatal(err)
@@ -76,7 +76,7 @@ func (f syncCounter) Sync() error { *f.n++; return f.File.Sync() }
 
 // A batch of events is written together and synced once.
 func TestStoreOneSyncPerBatch(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(resolvedTempDir(t), "job.toml.progress")
 	s, _, _, err := Open(path, "test")
 	if err != nil {
 		t.Fatal(err)
@@ -116,7 +116,7 @@ func (f fullTemp) Write(p []byte) (int, error) {
 // On a full disk the file at the path stays whole, and no temporary file is
 // left behind.
 func TestWriteFileAtomicFullDisk(t *testing.T) {
-	dir := t.TempDir()
+	dir := resolvedTempDir(t)
 	path := filepath.Join(dir, "pack.pdf")
 	os.WriteFile(path, []byte("the good old pack"), 0o644)
 	err := writeFileAtomic(path, []byte("a new pack, much longer than the old one"), 0o644, func(d, p string) (fullTemp, error) {
@@ -143,7 +143,7 @@ func TestWriteFileAtomicFullDisk(t *testing.T) {
 // A failed write names its cause first, so a status line cut to the
 // terminal's width still shows it, and the record's path once.
 func TestWriteErrorCauseFirst(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "job.toml.progress")
+	path := filepath.Join(resolvedTempDir(t), "job.toml.progress")
 	cases := []struct {
 		err  error
 		want string
@@ -158,4 +158,11 @@ func TestWriteErrorCauseFirst(t *testing.T) {
 			t.Errorf("WriteError(%v) = %q; want it to start %q and name the path once", c.err, msg, c.want)
 		}
 	}
+}
+
+// resolvedTempDir is t.TempDir with symbolic links resolved, as Store names
+// its files.
+func resolvedTempDir(t *testing.T) string {
+	t.Helper()
+	return Resolve(t.TempDir())
 }
