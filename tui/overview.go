@@ -141,9 +141,15 @@ func stepLine(c *shared, s plan.Step, i int) string {
 		// Columns line up down the list: the order and the tooth padded to
 		// the widest, the coil as its signed token, its slots, its turns.
 		ow, tw := len(strconv.Itoa(cs.Of)), len(strconv.Itoa(len(c.teeth)))
-		sw := len(plan.SlotWords(len(c.teeth), len(c.teeth)))
+		slots := plan.SlotWords
+		if q := len(c.teeth); 10+10+1+6+tw+1+3+1+len(slots(q, q))+2+9 > c.width {
+			// A narrow terminal: the slots without the word, so the
+			// turns stay on the line.
+			slots = func(d, u int) string { return fmt.Sprintf("down %d, up %d", d, u) }
+		}
+		sw := len(slots(len(c.teeth), len(c.teeth)))
 		t = fmt.Sprintf("%-10s tooth %*d %-3s %-*s  %d turns", fmt.Sprintf("coil %*d/%d", ow, cs.Order, cs.Of), tw, cs.Tooth,
-			progress.Sense(cs)+cs.Phase, sw, plan.SlotWords(cs.DownSlot, cs.UpSlot), cs.Turns)
+			progress.Sense(cs)+cs.Phase, sw, slots(cs.DownSlot, cs.UpSlot), cs.Turns)
 		if c.prog.Steps[i].Done && c.prog.Steps[i].Turns != cs.Turns {
 			t += fmt.Sprintf(" (wound %d)", c.prog.Steps[i].Turns)
 		} else if !c.prog.Steps[i].Done && c.prog.Steps[i].Turns > 0 {
