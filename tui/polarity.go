@@ -296,11 +296,11 @@ func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 	pp.add(partUseful, func(b *lines) {
 		b.text(s.Title, st.strong.Render)
 		if t.Current > 0 {
-			into, out := "each phase's start lead", "its finish lead, one phase at a time,"
+			how := "into each phase's start lead (+), out of its finish lead (-), one phase at a time"
 			if len(s.Phases) == 1 {
-				into, out = s.Phases[0]+"1", s.Phases[0]+"2"
+				how = fmt.Sprintf("into %s1 (+), out of %s2 (-)", s.Phases[0], s.Phases[0])
 			}
-			b.kv("DC", fmt.Sprintf("%s A into %s (+), out of %s (-) (%s of heat in the phase)", fmtNum(t.Current), into, out, fmtWatts(t.HeatW)))
+			b.kv("DC", fmt.Sprintf("%s A %s; %s of heat in the phase", fmtNum(t.Current), how, fmtWatts(t.HeatW)))
 		}
 	})
 	pp.add(partProse, func(b *lines) {
@@ -327,7 +327,14 @@ func polaritySummary(teeth []plan.ToothPole, v []float64) string {
 			other++
 		}
 	}
-	return fmt.Sprintf("read: %d teeth, %d as planned, %d the other pole, %d unsure", len(teeth), right, other, unsure)
+	out := fmt.Sprintf("read: %d teeth, %d as planned", len(teeth), right)
+	if other > 0 {
+		out += fmt.Sprintf(", %d the other pole", other)
+	}
+	if unsure > 0 {
+		out += fmt.Sprintf(", %d unsure", unsure)
+	}
+	return out
 }
 
 // polarityRow shows every tooth of the step: tooth, planned pole, and what
