@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -34,10 +35,15 @@ func writeOutput(flag, path string, data []byte, keep ...protected) error {
 	return nil
 }
 
-// refuseProtected is the check of writeOutput alone.
+// refuseProtected is the check of writeOutput alone. Besides the files
+// named, any existing file that reads as a progress record (of this job or
+// another) is refused: it holds work that cannot be made again.
 func refuseProtected(flag, path string, keep ...protected) error {
 	at := journal.Resolve(path)
 	out, outErr := os.Stat(path)
+	if n := recordEntries(path, out); n > 0 {
+		return badInputf("%s %s is a progress record (%d entries of recorded work): writing there would destroy it; give another file", flag, path, n)
+	}
 	for _, k := range keep {
 		if k.path == "" {
 			continue
@@ -51,4 +57,22 @@ func refuseProtected(flag, path string, keep ...protected) error {
 		}
 	}
 	return nil
+}
+
+// recordEntries is the number of entries in the file at path when it reads
+// as a progress record, else 0. Only a regular file of at most 64 MiB is read.
+func recordEntries(path string, fi os.FileInfo) int {
+	if fi == nil || !fi.Mode().IsRegular() || fi.Size() == 0 || fi.Size() > 64<<20 {
+		return 0
+	}
+	data, err := os.ReadFile(path)
+	if err != nil {
+		return 0
+	}
+	events, _, err := journal.Decode(data)
+	var de *journal.DecodeError
+	if errors.As(err, &de) && len(events) == 0 {
+		return 0 // not a record at all (a PDF, a job file)
+	}
+	return len(events)
 }

@@ -101,3 +101,37 @@ func TestCheckRecordSaysWhatItFiled(t *testing.T) {
 		t.Errorf("the held record was changed")
 	}
 }
+
+// No command writes its output over a progress record, of its own job or of
+// another, even with --force: the work in it cannot be made again.
+func TestOutputNeverOverARecord(t *testing.T) {
+	dir := t.TempDir()
+	jobPath := filepath.Join(dir, "leat.toml")
+	if err := os.WriteFile(jobPath, job.DemoTOML(), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	other := filepath.Join(dir, "another-stator.progress")
+	data := `{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}` + "\n" + `{"seq":2,"time":"2025-03-08T09:01:00Z","kind":"done","step":2}` + "\n"
+	if err := os.WriteFile(other, []byte(data), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	for _, args := range [][]string{
+		{"new", "--demo", "--force", "-o", other},
+		{"new", "--force", "-o", other},
+		{"sheet", jobPath, "-o", other},
+	} {
+		code, _, errs := runCLI(t, args...)
+		if code != 2 || !strings.Contains(errs, "progress record (2 entries") || strings.Count(strings.TrimSpace(errs), "\n") != 0 {
+			t.Errorf("%v = exit %d, %q; want 2 and one line naming the record", args, code, errs)
+		}
+		if b, _ := os.ReadFile(other); string(b) != data {
+			t.Fatalf("%v changed the record", args)
+		}
+	}
+	// A file that is not a record is overwritten with --force as before.
+	pdf := filepath.Join(dir, "old.toml")
+	os.WriteFile(pdf, []byte("%PDF-1.4 not a record\n"), 0o644)
+	if code, _, errs := runCLI(t, "new", "--demo", "--force", "-o", pdf); code != 0 {
+		t.Errorf("new --force over a non-record = exit %d, %q; want 0", code, errs)
+	}
+}
