@@ -446,10 +446,7 @@ func (g guideModel) testView(pp *panelParts, s plan.Step) {
 	})
 	if known {
 		pp.add(partUseful, func(b *lines) {
-			b.kv("limit", limitText(t))
-			if t.Voltage > 0 {
-				b.kv("volts", fmt.Sprintf("%s V", fmtNum(t.Voltage)))
-			}
+			b.kv("limit", limitText(t)) // with the test voltage, where there is one
 		})
 	}
 	switch g.mode {
