@@ -114,6 +114,9 @@ func Run(p *plan.Plan, o RunOptions) error {
 		flushErr = rec.Append(q...)
 	}
 	closeErr := store.Close()
+	for _, n := range store.Notices() { // a record gone since the last write, written again
+		fmt.Fprintln(os.Stderr, "bench: "+n)
+	}
 	return runResult(runErr, closeErr, flushErr, fm.stopped, store.Path())
 }
 

@@ -403,3 +403,50 @@ func tempDir(t *testing.T) string {
 	t.Helper()
 	return journal.Resolve(t.TempDir())
 }
+
+// A record removed or replaced after the last write and before Close is
+// written again by Close: quitting never loses what the store holds.
+func TestStoreCloseWritesAgainARecordGone(t *testing.T) {
+	cases := []struct {
+		name   string
+		change func(path string) error
+	}{
+		{"removed", os.Remove},
+		{"replaced by rename", func(path string) error {
+			if err := os.WriteFile(path+".new", []byte("someone else's\n"), 0o644); err != nil {
+				return err
+			}
+			return os.Rename(path+".new", path)
+		}},
+		{"cut short", func(path string) error { return os.Truncate(path, 5) }},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			path := filepath.Join(tempDir(t), "job.toml.progress")
+			s, _, _, err := journal.Open(path, "test")
+			if err != nil {
+				t.Fatal(err)
+			}
+			for i := 1; i <= 3; i++ {
+				if err := s.Append(journal.Event{Kind: journal.Turns, Step: 5, Tooth: 1, Turns: i}); err != nil {
+					t.Fatal(err)
+				}
+			}
+			if err := c.change(path); err != nil {
+				t.Fatal(err)
+			}
+			if err := s.Close(); err != nil {
+				t.Fatalf("Close after the record was %s err = %v; want it written again", c.name, err)
+			}
+			if n := s.Notices(); len(n) != 1 || !strings.Contains(n[0], "written again") {
+				t.Errorf("Notices() after Close = %q; want one saying it was written again", n)
+			}
+			if got := decodeFile(t, path); len(got) != 3 || got[2].Turns != 3 {
+				t.Errorf("record after Close = %d events; want the 3 held in memory", len(got))
+			}
+			if _, err := os.Stat(journal.LockPathFor(path)); !errors.Is(err, os.ErrNotExist) {
+				t.Errorf("lock left after Close")
+			}
+		})
+	}
+}

@@ -243,13 +243,24 @@ func (s *Store) Notices() []string {
 	return n
 }
 
-// Close writes what is pending, closes the record and releases the lock. The
-// lock is released even when pending events could not be written; the error
-// then says how many were lost.
+// Close writes what is pending, closes the record and releases the lock. A
+// record removed, replaced or cut by another program since the last write is
+// written again from memory first, with a notice (Notices may be called after
+// Close). The lock is released even when events could not be written; the
+// error then says how many were lost.
 func (s *Store) Close() error {
 	s.mu.Lock()
 	defer s.mu.Unlock()
 	err := s.flush()
+	if err == nil && s.lock != nil && len(s.events) > 0 {
+		// A record removed, replaced or cut since the last write would
+		// otherwise be lost with this store's memory.
+		if how, cerr := s.changedUnderUs(); cerr == nil && how != "" {
+			if rerr := s.rewrite(how); rerr != nil {
+				err = &WriteError{Path: s.path, Pending: len(s.events), Err: rerr}
+			}
+		}
+	}
 	s.drop()
 	if s.lock != nil {
 		s.lock.release()
