@@ -29,7 +29,9 @@
 // one's number. It holds an exclusive lock: a lock file beside the record,
 // whose kernel lock (flock) decides who holds it, on the record's path with
 // symbolic links resolved (Resolve), so two names for one record share one
-// lock; a lock file nobody holds is stale whatever process it names. Before
+// lock; a lock file nobody holds is stale whatever process it names. The
+// record file itself is flocked too while it is open, so a second name made
+// by a hard link (which no path can resolve) is refused as well. Before
 // each write Store checks that the file at the path is still the one it
 // holds; a record removed, replaced or cut by another program is written
 // again from the events in memory, with a notice (Notices), and whatever

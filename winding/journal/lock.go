@@ -21,9 +21,14 @@ type LockInfo struct {
 type LockedError struct {
 	Path string   // the lock file
 	Info LockInfo // its holder; empty when the lock file could not be read
+	// other: the record file itself is held, under another name.
+	other bool
 }
 
 func (e *LockedError) Error() string {
+	if e.other {
+		return "journal: " + ErrOtherName.Error()
+	}
 	i := e.Info
 	if i.Holder == "" && i.PID == 0 {
 		return fmt.Sprintf("journal: the record is in use by another program (it holds %s); close that program first", e.Path)
@@ -146,4 +151,23 @@ func (l *lockFile) release() {
 	funlock(l.f)
 	l.f.Close()
 	l.f = nil
+}
+
+// ErrOtherName refuses a record that another store holds open under another
+// name (a hard link): the lock beside each name cannot see the other.
+var ErrOtherName = errors.New("the record is open in another program under another name (a hard link to the same file); close that program first")
+
+// lockRecordFile takes the kernel lock on the record file itself, so two
+// names for one file (hard links, which Resolve cannot tell apart) are never
+// written by two stores at once. Files without a descriptor (test doubles)
+// and systems without flock pass.
+func lockRecordFile(f file) error {
+	fd, ok := f.(interface{ Fd() uintptr })
+	if !haveFlock || !ok {
+		return nil
+	}
+	if err := flockFd(fd.Fd()); err != nil {
+		return &LockedError{Path: "", Info: LockInfo{}, other: true}
+	}
+	return nil
 }

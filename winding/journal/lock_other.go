@@ -11,3 +11,5 @@ const haveFlock = false
 func flock(*os.File) error { return nil }
 
 func funlock(*os.File) {}
+
+func flockFd(uintptr) error { return nil }

@@ -16,3 +16,8 @@ func flock(f *os.File) error {
 }
 
 func funlock(f *os.File) { syscall.Flock(int(f.Fd()), syscall.LOCK_UN) }
+
+// flockFd takes an exclusive, non-blocking flock on an open descriptor.
+func flockFd(fd uintptr) error {
+	return syscall.Flock(int(fd), syscall.LOCK_EX|syscall.LOCK_NB)
+}

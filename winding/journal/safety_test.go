@@ -450,3 +450,38 @@ func TestStoreCloseWritesAgainARecordGone(t *testing.T) {
 		})
 	}
 }
+
+// Two names for one record by a hard link: the second store is refused,
+// though each name has a lock file of its own.
+func TestStoreLockFollowsHardLink(t *testing.T) {
+	dir := tempDir(t)
+	path := filepath.Join(dir, "job.toml.progress")
+	if err := os.WriteFile(path, []byte(`{"seq":1,"time":"2025-03-08T09:00:00Z","kind":"done","step":1}`+"\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	link := filepath.Join(dir, "copy.progress")
+	if err := os.Link(path, link); err != nil {
+		t.Skip("no hard links here:", err)
+	}
+	a := openT(t, path)
+	_, _, _, err := journal.Open(link, "bench")
+	if !errors.Is(err, journal.ErrLocked) || !strings.Contains(err.Error(), "another name") {
+		t.Fatalf("Open through a hard link while held err = %v; want ErrLocked naming another name", err)
+	}
+	if _, err := os.Stat(journal.LockPathFor(link)); !errors.Is(err, os.ErrNotExist) {
+		t.Errorf("the refused Open left its lock file")
+	}
+	// Records written and rewritten by the holder stay held.
+	if err := a.Append(journal.Event{Kind: journal.Done, Step: 2}); err != nil {
+		t.Fatal(err)
+	}
+	if _, _, _, err := journal.Open(link, "bench"); !errors.Is(err, journal.ErrLocked) {
+		t.Fatalf("Open through a hard link after a write err = %v; want ErrLocked", err)
+	}
+	a.Close()
+	b, _, _, err := journal.Open(link, "bench")
+	if err != nil {
+		t.Fatalf("Open through the link after Close err = %v", err)
+	}
+	b.Close()
+}

@@ -152,6 +152,13 @@ func Open(path, holder string) (*Store, []Event, *TornTail, error) {
 		lk.release()
 		return nil, nil, nil, fmt.Errorf("journal: read %s: %w", path, err)
 	}
+	if f != nil {
+		if err := lockRecordFile(f); err != nil {
+			f.Close()
+			lk.release()
+			return nil, nil, nil, err
+		}
+	}
 	events, torn, err := Decode(data)
 	if err != nil {
 		if f != nil {
@@ -373,6 +380,7 @@ func (s *Store) rewrite(how string) error {
 	if err != nil {
 		return fmt.Errorf("the record %s; it was written again but cannot be opened: %w", how, err)
 	}
+	lockRecordFile(f) // a file just made has no other name to be held under
 	fi, err := f.Stat()
 	if err != nil {
 		f.Close()
@@ -396,6 +404,10 @@ func (s *Store) reopen() error {
 	if s.f == nil {
 		f, err := s.open(s.path)
 		if err != nil {
+			return err
+		}
+		if err := lockRecordFile(f); err != nil {
+			f.Close()
 			return err
 		}
 		s.f = f
