@@ -150,7 +150,7 @@ func (b *builder) tests() error {
 		Source: fmt.Sprintf("IEC 60034-1 clause 9.2 (table number from memory): %s, rated %.1f V line, about %.0f W",
 			hvRule(p.RatedPowerW, p.RatedVoltageV), p.RatedVoltageV, p.RatedPowerW),
 		Caution: cautionHV,
-		Note:    "a repeated test (after rework, or at acceptance) is at 80 % of this voltage; rewound windings: EASA AR100-2020 tables 4-4 and 4-5; a DC test is about 1.7 × the AC value"})
+		Note:    "a repeated test (after rework, or at acceptance) is at 80 % of this voltage (IEC 60034-1 clause 9.2, from memory); rewound windings: EASA AR100-2020 tables 4-4 and 4-5 (table numbers from memory); a DC test is about 1.7 × the AC value (IEC 60034-1, from memory)"})
 	bt := Test{Name: TestBackEMF, Title: "Back-EMF balance (optional, rotor fitted)",
 		What:  fmt.Sprintf("Optional, with the rotor fitted: spin the rotor at a steady known speed with the leads open and read the line voltages %s; they should agree.", ReadingLabels(emfReadings(names)[:len(names)])),
 		Limit: BackEMFBalancePercent, Unit: UnitPercent, Compare: AtMost, Readings: emfReadings(names),

@@ -50,7 +50,14 @@ func sig(v float64, n int) string {
 	dec = max(dec, 0)
 	s := strconv.FormatFloat(v, 'f', dec, 64)
 	if strings.Contains(s, ".") {
-		s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
+		// Trailing zeros go only where the value is that round number
+		// (a limit of 5 MΩ, a reading typed as 0.279 Ω); a computed
+		// 145.98 mΩ keeps its "146.0", so it does not look less
+		// certain than its neighbour's 145.6.
+		t := strings.TrimRight(strings.TrimRight(s, "0"), ".")
+		if r, err := strconv.ParseFloat(t, 64); err == nil && math.Abs(r-v) <= 1e-9*math.Abs(v) {
+			s = t
+		}
 	}
 	return s
 }

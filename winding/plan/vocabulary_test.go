@@ -19,6 +19,9 @@ func TestFormatValue(t *testing.T) {
 		want string
 	}{
 		{0.1392, UnitOhm, "139.2 mΩ"},
+		{0.14597538, UnitOhm, "146.0 mΩ"}, // computed: four figures, the zero kept
+		{0.279, UnitOhm, "279 mΩ"},        // typed as 0.279: that round number
+		{1.5997, UnitPercent, "1.60 %"},
 		{1.152198, UnitOhm, "1.152 Ω"},
 		{24, UnitOhm, "24 Ω"},
 		{12346, UnitOhm, "12.35 kΩ"},
