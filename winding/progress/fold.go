@@ -132,19 +132,29 @@ func (s *State) Summary() []string {
 		out = append(out, fmt.Sprintf("%d %s matched to their steps by what they are (coil by tooth, phase and sense), now under other step numbers.",
 			s.Moved, plural(s.Moved, "entry was", "entries were")))
 	}
-	var coil, other []Dropped
+	// One line per kind of entry and reason, in the order first met.
+	type group struct {
+		coil   bool
+		reason string
+	}
+	var order []group
+	by := map[group][]Dropped{}
 	for _, d := range s.Dropped {
-		if d.Tooth > 0 {
-			coil = append(coil, d)
-		} else {
-			other = append(other, d)
+		g := group{d.Tooth > 0, d.Reason}
+		if by[g] == nil {
+			order = append(order, g)
 		}
+		by[g] = append(by[g], d)
 	}
-	if len(coil) > 0 {
-		out = append(out, fmt.Sprintf("%d coil %s left out (%s): %s.", len(coil), plural(len(coil), "entry", "entries"), lines(coil), coil[0].Reason))
+	for _, g := range order {
+		ds, kind := by[g], "other"
+		if g.coil {
+			kind = "coil"
+		}
+		out = append(out, fmt.Sprintf("%d %s %s left out (%s): %s.", len(ds), kind, plural(len(ds), "entry", "entries"), lines(ds), g.reason))
 	}
-	if len(other) > 0 {
-		out = append(out, fmt.Sprintf("%d other %s left out (%s): %s.", len(other), plural(len(other), "entry", "entries"), lines(other), other[0].Reason))
+	if len(s.Dropped) > 0 {
+		out = append(out, "What was left out stays in the record file as it is (nothing is deleted); those steps show as still to do.")
 	}
 	return out
 }

@@ -252,3 +252,25 @@ func TestCheckEventsPolarity(t *testing.T) {
 		t.Errorf("Fold(polarity event) dropped %+v; want it on its step", s.Dropped)
 	}
 }
+
+// Entries left out for different reasons are said one reason at a time, and
+// the summary says the record keeps them as they are.
+func TestSummaryLeftOutByReason(t *testing.T) {
+	p := demoPlan(t, nil)
+	coil := firstOf(p, plan.StepCoil)
+	most := progress.New(p).MaxTurns(coil - 1)
+	tooBig := progress.Stamp(p, journal.Event{Kind: journal.Done, Step: coil, Turns: most + 1})
+	flipped := progress.Stamp(p, journal.Event{Kind: journal.Done, Step: coil, Turns: 3})
+	flipped.Key = strings.NewReplacer("+", "-", "-", "+").Replace(flipped.Key)
+	ev := session(p)
+	ev = append(ev, tooBig, flipped)
+	for i := range ev {
+		ev[i].Seq, ev[i].Line = i+1, i+1
+	}
+	sum := strings.Join(progress.Fold(p, ev).Summary(), " ")
+	for _, want := range []string{"left out (line 2): more turns", "left out (line 3): it was recorded for", "stays in the record file as it is"} {
+		if !strings.Contains(sum, want) {
+			t.Errorf("Summary() = %q\nlacks %q (each reason said on its own)", sum, want)
+		}
+	}
+}
