@@ -113,8 +113,11 @@ const (
 // SpecificIronLoss scales the specific loss p15 of a lamination at 1.5 T,
 // 50 Hz to a peak flux density b (T) at f (Hz) by the two-term model: the
 // hysteresis loss per cycle grows as B², the eddy-current loss as (f·B)²:
-// p = p15·[h·(f/50)·(B/1.5)² + (1−h)·(f/50)²·(B/1.5)²] (Steinmetz with
-// exponent 2 for the hysteresis term; Pyrhönen et al., ch. 3, from memory).
+// p = p15·[h·(f/50)·(B/1.5)² + (1−h)·(f/50)²·(B/1.5)²] (the two-term loss
+// separation of hysteresis and classical eddy-current loss; Steinmetz's
+// hysteresis exponent, 1.6 in his law and nearer 2 at the flux densities of
+// machine teeth, is taken as 2, as Pyrhönen et al., ch. 3, scale the loss
+// figure with B²; from memory).
 func SpecificIronLoss(p15, h, b, f float64) float64 {
 	x, y := f/50, (b/1.5)*(b/1.5)
 	return p15 * (h*x*y + (1-h)*x*x*y)
