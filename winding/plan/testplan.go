@@ -110,7 +110,7 @@ func (b *builder) tests() error {
 	pairs := pairReadings(names)
 	ts = append(ts, Test{Name: TestPhaseInsulation, Title: "Insulation between phases",
 		What:  fmt.Sprintf("Insulation between phases, before the %s made: %s, at %s DC for 1 min.", beforeJoin, ReadingLabels(pairs), FormatValue(InsulationTestVolts, UnitVolt)),
-		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, Readings: pairs,
+		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, VoltageKind: "DC", Readings: pairs,
 		Source:  "IEEE 43-2013 minimum for random-wound windings, borrowed here for phase to phase (the standard tests winding to ground)",
 		Caution: cautionIR,
 		Note:    "a low reading between two phases points to a damaged separator or enamel where their coils share a slot"})
@@ -141,12 +141,12 @@ func (b *builder) tests() error {
 	}
 	ts = append(ts, Test{Name: TestInsulation, Title: "Insulation resistance to the core",
 		What:  fmt.Sprintf("Insulation resistance of the whole winding (all leads joined) to the stator core at %s DC, read after 1 min (and after 10 min for the polarization index); check corrects the reading to 40 °C.", FormatValue(InsulationTestVolts, UnitVolt)),
-		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, Readings: insulationReadings(p),
+		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, VoltageKind: "DC", Readings: insulationReadings(p),
 		Source: "IEEE 43-2013: 500 V DC below 1 kV rating; minimum 5 MΩ at 40 °C for random-wound windings", Caution: cautionIR, Note: irNote})
 	ts = append(ts, Test{Name: TestHighVoltage, Title: "High-voltage withstand",
 		What: fmt.Sprintf("High-voltage withstand: %s AC 50/60 Hz for 1 min between the winding (all leads joined) and the core, after the insulation resistance has passed. No breakdown.",
 			FormatValue(hv, UnitVolt)),
-		Limit: 60, Unit: UnitSecond, Compare: AtLeast, Voltage: hv, Readings: withstandReadings(hv),
+		Limit: 60, Unit: UnitSecond, Compare: AtLeast, Voltage: hv, VoltageKind: "AC", Readings: withstandReadings(hv),
 		Source: fmt.Sprintf("IEC 60034-1 clause 9.2 (table number from memory): %s, rated %.1f V line, about %.0f W",
 			hvRule(p.RatedPowerW, p.RatedVoltageV), p.RatedVoltageV, p.RatedPowerW),
 		Caution: cautionHV,

@@ -251,6 +251,10 @@ type Test struct {
 	LowPercent  float64 `json:"low_percent,omitempty"`
 	HighPercent float64 `json:"high_percent,omitempty"`
 	Voltage     float64 `json:"test_voltage_v,omitempty"`
+	// VoltageKind says whether Voltage is "AC" (rms, the withstand test) or
+	// "DC" (the insulation tests): a tester set to the other kind tests at
+	// the wrong stress.
+	VoltageKind string  `json:"test_voltage_kind,omitempty"`
 	Current     float64 `json:"test_current_a,omitempty"` // DC driven through the winding (polarity test)
 	HeatW       float64 `json:"heat_w,omitempty"`         // heat the test current makes in one phase
 	// Readings are what the person reads for this test, in order, with the

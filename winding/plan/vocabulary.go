@@ -120,6 +120,9 @@ func LimitText(t Test) string {
 	at := ""
 	if t.Voltage > 0 {
 		at = " at " + FormatValue(t.Voltage, UnitVolt)
+		if t.VoltageKind != "" {
+			at += " " + t.VoltageKind
+		}
 	}
 	switch t.Compare {
 	case AtLeast:
