@@ -166,7 +166,7 @@ func runCheck(cmd *cobra.Command, args []string, f *checkFlags) error {
 		}
 		var filed []journal.Event
 		if filed, recErr = recordCheck(cmd, path, p, r, rep); recErr == nil {
-			fmt.Fprintf(cmd.ErrOrStderr(), "recorded in %s: %s; the bench guide and the sheet show them\n", path, filedText(filed))
+			fmt.Fprintf(cmd.ErrOrStderr(), "recorded in %s: %s; the bench guide and the sheet show them\n", path, filedText(p, filed))
 		} else if le := (*journal.LockedError)(nil); errors.As(recErr, &le) {
 			who := "another program"
 			if le.Info.Holder != "" {
@@ -412,15 +412,23 @@ func recordCheck(cmd *cobra.Command, path string, p *plan.Plan, r verify.Reading
 	return filed, s.Close()
 }
 
-// filedText says which tests a check filed, on which steps, with their
-// verdicts: "resistance (step 75) PASS, balance (step 76) PASS".
-func filedText(evs []journal.Event) string {
+// filedText says which tests a check filed, on which steps (named as the
+// guide names them), with their verdicts: "step 75, resistance of each phase:
+// PASS; step 76, resistance balance: PASS".
+func filedText(p *plan.Plan, evs []journal.Event) string {
 	parts := make([]string, 0, len(evs))
 	for _, e := range evs {
-		parts = append(parts, fmt.Sprintf("%s (step %d) %s", e.Test, e.Step, strings.ToUpper(e.Verdict)))
+		name := e.Test
+		if e.Step >= 1 && e.Step <= len(p.Steps) {
+			name = p.Steps[e.Step-1].Title // "Test: ..." or "Test (optional): ..."
+			if _, rest, ok := strings.Cut(name, ": "); ok && strings.HasPrefix(name, "Test") {
+				name = rest
+			}
+		}
+		parts = append(parts, fmt.Sprintf("step %d, %s: %s", e.Step, name, strings.ToUpper(e.Verdict)))
 	}
 	if len(parts) == 0 {
 		return "no test of the plan"
 	}
-	return strings.Join(parts, ", ")
+	return strings.Join(parts, "; ")
 }

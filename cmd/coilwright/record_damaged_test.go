@@ -77,7 +77,7 @@ func TestCheckRecordSaysWhatItFiled(t *testing.T) {
 	if code != 0 || !strings.Contains(out, "Verdict: PASS") {
 		t.Fatalf("check --record = exit %d, %q", code, errs)
 	}
-	for _, want := range []string{"recorded in " + rec, "resistance (step ", ") PASS", "balance (step "} {
+	for _, want := range []string{"recorded in " + rec, ", resistance of each phase: PASS", ", resistance balance: PASS"} {
 		if !strings.Contains(errs, want) {
 			t.Errorf("check --record says %q; want %q in it", errs, want)
 		}
