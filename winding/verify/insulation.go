@@ -76,7 +76,7 @@ func (c *checker) insulation() {
 		c.add(Finding{Severity: sev, Test: plan.TestInsulation, Message: msg})
 	}
 	if res.IR1At40C < MinIRMOhm {
-		add(Fail, fmt.Sprintf("insulation resistance %s at %.0f V after 1 min is %s at 40 °C, below the %g MΩ minimum (IEEE 43-2013): damaged enamel or liner, moisture, or a coil touching the core; dry the winding and find the fault before any high-voltage test%s",
+		add(Fail, fmt.Sprintf("insulation resistance %s at %.0f V DC after 1 min is %s at 40 °C, below the %g MΩ minimum (IEEE 43-2013): damaged enamel or liner, moisture, or a coil touching the core; dry the winding and find the fault before any high-voltage test%s",
 			mohm(in.IR1MOhm), in.Volts, mohm(res.IR1At40C), MinIRMOhm, scope))
 	} else {
 		add(Pass, fmt.Sprintf("insulation resistance %s after 1 min is %s at 40 °C, above the %g MΩ minimum (IEEE 43-2013)%s",
@@ -146,13 +146,13 @@ func (c *checker) withstand() {
 		res.Verdict = Worst(res.Verdict, sev)
 		c.add(Finding{Severity: sev, Test: plan.TestHighVoltage, Message: msg})
 	}
-	v := plan.FormatValue(w.Volts, plan.UnitVolt)
+	v := plan.FormatValue(w.Volts, plan.UnitVolt) + " AC"
 	if !w.Passed {
 		add(Fail, fmt.Sprintf("the withstand test at %s failed: the insulation broke down or leaked past the trip current; find the fault (slot exits, lead end, separators) before the winding is used", v))
 		return
 	}
 	r := res.Recommended
-	rv := plan.FormatValue(r, plan.UnitVolt)
+	rv := plan.FormatValue(r, plan.UnitVolt) + " AC"
 	rated := fmt.Sprintf("the plan's %s (IEC 60034-1 clause 9.2 for %s rated line voltage)", rv, plan.FormatValue(c.p.RatedVoltageV, plan.UnitVolt))
 	switch {
 	case r == 0:

@@ -70,9 +70,9 @@ func (r *Report) Text() string {
 		if !hv.Passed {
 			res = "BROKE DOWN"
 		}
-		w("\nWithstand   %s at %s", res, plan.FormatValue(hv.Volts, plan.UnitVolt))
+		w("\nWithstand   %s at %s AC", res, plan.FormatValue(hv.Volts, plan.UnitVolt))
 		if hv.Recommended > 0 {
-			w("; the plan's test voltage %s (IEC 60034-1 clause 9.2), a repeat test at 80 %%", plan.FormatValue(hv.Recommended, plan.UnitVolt))
+			w("; the plan's test voltage %s AC (IEC 60034-1 clause 9.2), a repeat test at 80 %%", plan.FormatValue(hv.Recommended, plan.UnitVolt))
 		}
 		w(": %s", strings.ToUpper(string(hv.Verdict)))
 		b.WriteString("\n")
