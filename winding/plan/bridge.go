@@ -28,9 +28,9 @@ type Bridge struct {
 // each phase is e − R·i − L·di/dt; a phase whose current is positive is held
 // at the + rail, negative at the − rail, and a phase without current floats
 // until its terminal passes a rail. The neutral floats so the conducting
-// phases' currents sum to zero. Each step solves the phase currents exactly
-// for the forcing held over the step (an exponential integrator), so the
-// step is stable at any L/R. Diode drops are constant; the diodes have no
+// phases' currents sum to zero. Each step, split where a diode turns on or
+// off, solves the phase currents exactly for the EMF at the middle of the
+// piece (an exponential integrator), so the step is stable at any L/R. Diode drops are constant; the diodes have no
 // reverse recovery. Current flows only while the peak line EMF √2·√3·E
 // exceeds BusV + DiodesV, the peak-conduction cut-in.
 func (br Bridge) MeanDCCurrent() float64 {
@@ -54,9 +54,9 @@ func (br Bridge) run(st *bridgeState) float64 {
 	const steps = bridgeSteps
 	T := 1 / br.Hz
 	dt := T / steps
-	a := 0.0
+	aStep := 0.0 // e^(−R·dt/L), 0 without inductance
 	if br.L > 0 {
-		a = math.Exp(-br.R * dt / br.L)
+		aStep = math.Exp(-br.R * dt / br.L)
 	}
 	amp := math.Sqrt2 * br.PhaseEMF
 	i, rail := &st.i, &st.rail
@@ -66,30 +66,73 @@ func (br Bridge) run(st *bridgeState) float64 {
 	for per := 0; per < 100; per++ {
 		var q float64 // charge into the + rail over this period
 		for s := range steps {
-			e := [3]float64{amp * bridgeSin[s], amp * bridgeSin[(s+2*steps/3)%steps], amp * bridgeSin[(s+steps/3)%steps]}
-			turnOn(rail, e, vdc)
-			vn, n := 0.0, 0
-			for k := range 3 {
-				if rail[k] != 0 {
-					vn += rail[k]*vdc/2 - e[k]
-					n++
-				}
+			// The EMF runs linearly across the step between its samples. A
+			// diode turns on where its terminal passes its rail and off
+			// where its current reaches zero, each found by linear
+			// interpolation, and the step is split there: at a zero
+			// crossing the phase floats and may go straight on to the other
+			// rail. Each piece is forced by the EMF at its middle. So no
+			// event is late by a step: with each event at the next step,
+			// steps of 2° left the curve 2 % low at 1.5 times the rated
+			// speed of the demo.
+			s1 := (s + 1) % steps
+			var e0, de [3]float64
+			for k, off := range [3]int{0, 2 * steps / 3, steps / 3} {
+				e0[k] = amp * bridgeSin[(s+off)%steps]
+				de[k] = amp*bridgeSin[(s1+off)%steps] - e0[k]
 			}
-			if n < 2 {
-				continue
+			at := func(x float64) [3]float64 {
+				return [3]float64{e0[0] + de[0]*x, e0[1] + de[1]*x, e0[2] + de[2]*x}
 			}
-			vn /= float64(n)
-			for k := range 3 {
-				if rail[k] != 0 {
-					drive := (e[k] + vn - rail[k]*vdc/2) / br.R // the current it tends to
-					i[k] = i[k]*a + (1-a)*drive
+			x := 0.0
+			for piece := 0; piece < 8 && x < 1; piece++ {
+				if rail[0] == 0 || rail[1] == 0 || rail[2] == 0 {
+					turnOn(rail, at(math.Min(1, x+1e-9)), vdc)
 				}
-			}
-			turnOff(rail, i)
-			for k := range 3 {
-				if rail[k] > 0 {
-					q += i[k] * dt
+				g := 1.0
+				if rail[0] == 0 || rail[1] == 0 || rail[2] == 0 {
+					if m0, m1 := onMargin(rail, at(x), vdc), onMargin(rail, at(1), vdc); m0 <= 0 && m1 > 0 {
+						g = x + (1-x)*m0/(m0-m1)
+					}
 				}
+				a := aStep
+				if g-x < 1 && br.L > 0 {
+					a = math.Exp(-br.R * (g - x) * dt / br.L)
+				}
+				old := *i
+				dq := advance(br, rail, i, at((x+g)/2), at(g), (g-x)*dt, a, vdc)
+				// A diode just turned on whose current would flow
+				// backwards does not conduct: the piece again without it.
+				for k := range 3 {
+					if rail[k] != 0 && old[k] == 0 && i[k]*rail[k] < 0 {
+						rail[k] = 0
+						*i = old
+						dq = advance(br, rail, i, at((x+g)/2), at(g), (g-x)*dt, a, vdc)
+						break
+					}
+				}
+				f, off := 1.0, -1
+				for k := range 3 {
+					if rail[k] != 0 && i[k]*rail[k] < 0 && old[k]*rail[k] > 0 {
+						if y := old[k] / (old[k] - i[k]); y < f {
+							f, off = y, k
+						}
+					}
+				}
+				if off >= 0 {
+					*i = old
+					h := f * (g - x) * dt
+					af := 0.0
+					if br.L > 0 {
+						af = math.Exp(-br.R * h / br.L)
+					}
+					dq = advance(br, rail, i, at(x+(g-x)*f/2), at(x+(g-x)*f), h, af, vdc)
+					i[off], rail[off] = 0, 0
+					g = x + (g-x)*f
+				}
+				turnOff(rail, i)
+				q += dq
+				x = g
 			}
 		}
 		prev := mean
@@ -101,9 +144,76 @@ func (br Bridge) run(st *bridgeState) float64 {
 	return mean
 }
 
-// bridgeSteps is the number of time steps per electrical period (2°; a
-// multiple of 3 so the phases fall on the same samples).
-const bridgeSteps = 180
+// neutral is the star point's voltage while at least two phases conduct
+// (their currents sum to zero, so R and L drop out), and how many conduct.
+func neutral(rail *[3]float64, e [3]float64, vdc float64) (float64, int) {
+	vn, n := 0.0, 0
+	for k := range 3 {
+		if rail[k] != 0 {
+			vn += rail[k]*vdc/2 - e[k]
+			n++
+		}
+	}
+	if n == 0 {
+		return 0, 0
+	}
+	return vn / float64(n), n
+}
+
+// advance moves the conducting currents on by h under the EMF e, with
+// a = e^(−R·h/L), each exactly for that forcing (an exponential
+// integrator), and returns the charge into the + rail, the exact integral
+// of the same solution: drive·h + (i0 − drive)·(1 − a)·L/R.
+// Without inductance the current follows the EMF with no memory: it ends
+// the piece at the drive of the EMF at its end, eEnd.
+func advance(br Bridge, rail, i *[3]float64, e, eEnd [3]float64, h, a, vdc float64) float64 {
+	vn, n := neutral(rail, e, vdc)
+	if n < 2 {
+		return 0
+	}
+	vnEnd, _ := neutral(rail, eEnd, vdc)
+	tau := br.L / br.R
+	var q float64
+	for k := range 3 {
+		if rail[k] != 0 {
+			drive := (e[k] + vn - rail[k]*vdc/2) / br.R // the current it tends to
+			i0 := i[k]
+			if br.L > 0 {
+				i[k] = i0*a + (1-a)*drive
+			} else {
+				i[k] = (eEnd[k] + vnEnd - rail[k]*vdc/2) / br.R
+			}
+			if rail[k] > 0 {
+				q += math.Max(0, drive*h+(i0-drive)*(1-a)*tau)
+			}
+		}
+	}
+	return q
+}
+
+// onMargin is how far the next diode is from turning on: a floating phase's
+// terminal past its rail, or with nothing conducting the largest line EMF
+// past the bus and diodes; positive once it would conduct, −Inf with all
+// three conducting.
+func onMargin(rail *[3]float64, e [3]float64, vdc float64) float64 {
+	vn, n := neutral(rail, e, vdc)
+	if n == 0 {
+		return max(e[0], e[1], e[2]) - min(e[0], e[1], e[2]) - vdc
+	}
+	m := math.Inf(-1)
+	for k := range 3 {
+		if rail[k] == 0 {
+			m = max(m, math.Abs(e[k]+vn)-vdc/2)
+		}
+	}
+	return m
+}
+
+// bridgeSteps is the number of time steps per electrical period (4°; a
+// multiple of 3 so the phases fall on the same samples). With the diode
+// events placed within the step it gives the mean current within about
+// 0.5 % of a run at a hundred times the steps (tested).
+const bridgeSteps = 90
 
 // bridgeSin is sin(2π·s/bridgeSteps); phase k reads it 1/3 period later.
 var bridgeSin = func() (t [bridgeSteps]float64) {

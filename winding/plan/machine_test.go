@@ -421,6 +421,106 @@ func TestBridgeResistive(t *testing.T) {
 	}
 }
 
+// fineBridge is an independent simulation of the same circuit for
+// TestBridgeAgainstFineSteps, written plainly: explicit Euler steps of a
+// thousandth of a degree's worth (n per period), a diode on while its current
+// flows and its phase's terminal clamped to the rail, a floating phase joining
+// when its terminal passes a rail (its EMF plus the star point, the star point
+// set by the conducting phases' currents summing to zero), n periods' worth of
+// settling, and the mean + rail current of the last period.
+func fineBridge(e, hz, r, l, vdc float64, n, periods int) float64 {
+	dt := 1 / hz / float64(n)
+	amp := math.Sqrt2 * e
+	var i [3]float64
+	var s [3]int
+	var q float64
+	for p := 0; p < periods; p++ {
+		q = 0
+		for k := 0; k < n; k++ {
+			th := 2 * math.Pi * float64(k) / float64(n)
+			var em [3]float64
+			for j := range 3 {
+				em[j] = amp * math.Sin(th-2*math.Pi*float64(j)/3)
+			}
+			star := func() (float64, int) {
+				v, c := 0.0, 0
+				for j := range 3 {
+					if s[j] != 0 {
+						v -= em[j] - r*i[j] - float64(s[j])*vdc/2
+						c++
+					}
+				}
+				if c == 0 {
+					return -(em[0] + em[1] + em[2]) / 3, 0
+				}
+				return v / float64(c), c
+			}
+			vn, _ := star()
+			for j := range 3 {
+				if s[j] == 0 {
+					switch t := em[j] + vn; {
+					case t > vdc/2:
+						s[j] = 1
+					case t < -vdc/2:
+						s[j] = -1
+					}
+				}
+			}
+			vn, c := star()
+			if c < 2 {
+				s, i = [3]int{}, [3]float64{}
+				continue
+			}
+			for j := range 3 {
+				if s[j] != 0 {
+					i[j] += dt * (em[j] + vn - r*i[j] - float64(s[j])*vdc/2) / l
+				}
+			}
+			for j := range 3 {
+				if s[j] != 0 && float64(s[j])*i[j] < 0 {
+					s[j], i[j] = 0, 0
+				}
+			}
+			var on []int
+			for j := range 3 {
+				if s[j] != 0 {
+					on = append(on, j)
+				}
+			}
+			switch len(on) {
+			case 1:
+				s, i = [3]int{}, [3]float64{}
+			case 2:
+				d := (i[on[0]] - i[on[1]]) / 2
+				i[on[0]], i[on[1]] = d, -d
+			}
+			for j := range 3 {
+				if s[j] > 0 {
+					q += i[j] * dt
+				}
+			}
+		}
+	}
+	return q * hz
+}
+
+// TestBridgeAgainstFineSteps: the plan's bridge, at its coarse steps with the
+// diode events placed within them, agrees within 1 % with the plain
+// simulation above at 9000 steps a period, over the demo's curve from near
+// the cut-in (discontinuous pulses) to 1.5 times the rated speed (three
+// phases conducting all the time). Before the events were placed, 2° steps
+// were 2 % low at 750 rpm.
+func TestBridgeAgainstFineSteps(t *testing.T) {
+	for _, rpm := range []float64{349.02, 429, 500, 630, 750} {
+		br := Bridge{PhaseEMF: 0.0394098 * rpm, Hz: 14 * rpm / 60, R: 0.18867, L: 1.094e-3, BusV: 26, DiodesV: 1.6}
+		got := br.MeanDCCurrent()
+		want := fineBridge(br.PhaseEMF, br.Hz, br.R, br.L, br.BusV+br.DiodesV, 9000, 12)
+		if math.Abs(got-want) > 0.01*want {
+			t.Errorf("at %g rpm: Bridge.MeanDCCurrent() = %.3f A; fine-step simulation %.3f A (±1 %%)", rpm, got, want)
+		}
+	}
+}
+
 // TestMachineNotes: a job without the magnetic-circuit inputs or a flux
 // source gets its figures left out with a note naming what is missing,
 // never a guess.
