@@ -143,12 +143,13 @@ func LimitText(t Test) string {
 	return strings.TrimSpace(at)
 }
 
-// signed writes a percentage with its sign, the minus as a true minus sign.
+// signed writes a band edge in per cent with its sign, the minus as a true
+// minus sign, to 0.1 % as the band is given (−6.8 % .. +7.0 %, not +7 %).
 func signed(v float64) string {
 	if v < 0 {
-		return "−" + sig(-v, 3)
+		return "−" + strconv.FormatFloat(-v, 'f', 1, 64)
 	}
-	return "+" + sig(v, 3)
+	return "+" + strconv.FormatFloat(v, 'f', 1, 64)
 }
 
 // FormatReadings writes recorded values of a test by the names and units of

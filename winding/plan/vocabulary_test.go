@@ -55,6 +55,7 @@ func TestLimitText(t *testing.T) {
 		{Test{Compare: AtLeast, Limit: 5, Unit: UnitMegaohm, Voltage: 500}, "at least 5 MΩ at 500 V"},
 		{Test{Compare: AtMost, Limit: 0.179, Unit: UnitOhm}, "at most 179 mΩ"},
 		{Test{Compare: InBand, Limit: 7.1, Unit: UnitPercent, LowPercent: -6.9, HighPercent: 7.1}, "within −6.9 % .. +7.1 % of expected"},
+		{Test{Compare: InBand, Limit: 7, Unit: UnitPercent, LowPercent: -6.8, HighPercent: 7}, "within −6.8 % .. +7.0 % of expected"},
 		{Test{Compare: InBand, Limit: 2, Unit: UnitPercent}, "within ±2 % of expected"},
 		{Test{Compare: AtLeast, Limit: 60, Unit: UnitSecond, Voltage: 1500}, "at least 60 s at 1500 V"},
 		{Test{Compare: AtLeast, Limit: 60, Unit: UnitSecond, Voltage: 570, VoltageKind: "AC"}, "at least 60 s at 570 V AC"},
