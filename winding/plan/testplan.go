@@ -111,7 +111,7 @@ func (b *builder) tests() error {
 	ts = append(ts, Test{Name: TestPhaseInsulation, Title: "Insulation between phases",
 		What:  fmt.Sprintf("Insulation between phases, before the %s made: %s, at %s DC for 1 min.", beforeJoin, ReadingLabels(pairs), FormatValue(InsulationTestVolts, UnitVolt)),
 		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, VoltageKind: "DC", Readings: pairs,
-		Source:  "IEEE 43-2013 minimum for random-wound windings, borrowed here for phase to phase (the standard tests winding to ground)",
+		Source:  "IEEE 43-2013 minimum for random-wound windings (Table 3, from memory), borrowed here for phase to phase (the standard tests winding to ground)",
 		Caution: cautionIR,
 		Note:    "a low reading between two phases points to a damaged separator or enamel where their coils share a slot"})
 	ts = append(ts, b.polarityTest())
@@ -133,7 +133,7 @@ func (b *builder) tests() error {
 	ts = append(ts, Test{Name: TestBalance, Title: "Resistance balance",
 		What:  "Balance of the phase resistances, worked out from the readings of the resistance test (not read again): the phase values from the line readings, then the largest deviation of a phase from the mean of the phases, over that mean.",
 		Limit: BalanceLimitPercent, Unit: UnitPercent, Compare: AtMost, ReadingsFrom: TestResistance, Readings: []Reading{},
-		Source: "EASA AR100-2020: random-wound windings within 2 % (1 % for form-wound), as the largest deviation from the average",
+		Source: "EASA AR100-2020: random-wound windings within 2 % (1 % for form-wound), as the largest deviation from the average (from memory)",
 		Note:   "a phase high by about one coil's share has a coil with too many turns or a poor joint; low, a coil shorted or left out"})
 	irNote := "the 10-minute reading gives the polarization index (IR10/IR1), a guide to moisture and contamination"
 	if p.RatedPowerW < IEEE43MinPowerW {
@@ -142,7 +142,7 @@ func (b *builder) tests() error {
 	ts = append(ts, Test{Name: TestInsulation, Title: "Insulation resistance to the core",
 		What:  fmt.Sprintf("Insulation resistance of the whole winding (all leads joined) to the stator core at %s DC, read after 1 min (and after 10 min for the polarization index); check corrects the reading to 40 °C.", FormatValue(InsulationTestVolts, UnitVolt)),
 		Limit: MinInsulationMOhm, Unit: UnitMegaohm, Compare: AtLeast, Voltage: InsulationTestVolts, VoltageKind: "DC", Readings: insulationReadings(p),
-		Source: "IEEE 43-2013: 500 V DC below 1 kV rating; minimum 5 MΩ at 40 °C for random-wound windings", Caution: cautionIR, Note: irNote})
+		Source: "IEEE 43-2013: 500 V DC below 1 kV rating (Table 1); minimum 5 MΩ at 40 °C for random-wound windings (Table 3); from memory", Caution: cautionIR, Note: irNote})
 	ts = append(ts, Test{Name: TestHighVoltage, Title: "High-voltage withstand",
 		What: fmt.Sprintf("High-voltage withstand: %s AC 50/60 Hz for 1 min between the winding (all leads joined) and the core, after the insulation resistance has passed. No breakdown.",
 			FormatValue(hv, UnitVolt)),
