@@ -93,10 +93,10 @@ func (b *builder) copperLoss() {
 		p.CopperLossTemperatureBasis = "rating.copper_temperature_c"
 	case r.ThermalClass != 0:
 		p.CopperLossTemperatureC = job.ReferenceTemperatureC[r.ThermalClass]
-		p.CopperLossTemperatureBasis = fmt.Sprintf("IEC 60034-1 reference temperature of thermal class %s", thermalClassName(r.ThermalClass))
+		p.CopperLossTemperatureBasis = fmt.Sprintf("IEC 60034-1 reference temperature of thermal class %s, from memory", thermalClassName(r.ThermalClass))
 	default:
 		p.CopperLossTemperatureC = job.ReferenceTemperatureC[job.DefaultThermalClass]
-		p.CopperLossTemperatureBasis = fmt.Sprintf("IEC 60034-1 reference temperature of thermal class %s, taken as the class is not given (rating.thermal_class)", thermalClassName(job.DefaultThermalClass))
+		p.CopperLossTemperatureBasis = fmt.Sprintf("IEC 60034-1 reference temperature of thermal class %s, from memory, taken as the class is not given (rating.thermal_class)", thermalClassName(job.DefaultThermalClass))
 	}
 	p.PhaseResistanceHot = wire.ResistanceAt(p.PhaseResistance20C, p.CopperLossTemperatureC)
 	i2 := b.phaseCurr * b.phaseCurr
