@@ -115,7 +115,7 @@ local codes and licensed practice.`,
 	fl.Var(&f.irVolts, "ir-volts", "insulation test voltage, V DC")
 	fl.BoolVar(&f.hvPass, "hv-pass", false, "the withstand test held without breakdown")
 	fl.BoolVar(&f.hvFail, "hv-fail", false, "the withstand test broke down or tripped")
-	fl.Var(&f.hvVolts, "hv-volts", "withstand test voltage applied, V")
+	fl.Var(&f.hvVolts, "hv-volts", "withstand test voltage applied, V AC rms")
 	fl.Var(&f.emfUV, "emf-uv", "back-EMF between lines U and V, V rms")
 	fl.Var(&f.emfVW, "emf-vw", "back-EMF between lines V and W, V rms")
 	fl.Var(&f.emfWU, "emf-wu", "back-EMF between lines W and U, V rms")
