@@ -103,7 +103,7 @@ func (r *gatedRecorder) Append(es ...Entry) error {
 func TestBurstOfTurnsBatched(t *testing.T) {
 	p := handPlan(t, 12, 10, 2) // no slot fill given: no bound below 60 turns
 	rec := &gatedRecorder{gate: make(chan struct{})}
-	m := New(Options{Plan: p, Recorder: rec, Now: fixedNow})
+	m := New(Options{Plan: p, Recorder: rec, Now: fixedNow, WriteGap: BurstGap})
 	tm := teatest.NewTestModel(t, m, teatest.WithInitialTermSize(100, 30))
 	waitFor(t, tm, "step 1 of")
 	// The confirmations before the first coil go out in the first write,

@@ -12,7 +12,10 @@
 // against the plan, the same rule for what fits on resume and live) and
 // queued for the record; the queue is written by a tea.Cmd, everything
 // waiting in one batch with one sync, so events reach the record in order and
-// a write error keeps them in memory and retries. On resume a banner says
+// a write error keeps them in memory and retries. A write starts at once when
+// the last one started BurstGap (150 ms) ago or more; keys that come faster (a
+// held space bar, a burst) gather and go in the next write, so a burst of 60
+// turns costs a handful of syncs on any disk. On resume a banner says
 // what the model found (a job edited since, entries left out, a torn last
 // line kept aside) and, while open, what the store had to do about the file
 // (the record removed or replaced under it and written again).

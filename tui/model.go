@@ -48,6 +48,9 @@ type Options struct {
 	// Bell is where the terminal bell is rung when a count reaches the plan
 	// (the terminal's output); nil rings no bell.
 	Bell io.Writer
+	// WriteGap is the shortest time between the starts of two writes to the
+	// record (BurstGap in the bench command); 0 writes each key at once.
+	WriteGap time.Duration
 }
 
 // Model is the bench guide, a tea.Model.
@@ -76,7 +79,7 @@ func New(o Options) *Model {
 		judge: o.Judge,
 		now:   o.Now,
 		bell:  o.Bell,
-		out:   &writer{rec: o.Recorder},
+		out:   &writer{rec: o.Recorder, gap: max(0, o.WriteGap), clock: time.Now},
 		rings: map[ringKey]*ringGeometry{},
 		tests: map[string]plan.Test{},
 	}
@@ -139,6 +142,8 @@ func (m *Model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		}
 	case retryMsg:
 		cmd = m.c.out.retry()
+	case gatherMsg:
+		cmd = m.c.out.gather()
 	case stopMsg:
 		m.quitting, m.stopped = true, true
 		if m.c.out.settled() || m.c.out.err != nil {

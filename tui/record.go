@@ -58,6 +58,22 @@ const retryAfter = 2 * time.Second
 // hand.
 var retryTick = tea.Tick
 
+// BurstGap is the shortest time between the starts of two writes in the
+// bench guide. A key pressed when the last write started longer ago than
+// this is written at once; keys that come faster (a held space bar, keys
+// sent in a burst) are gathered and written together when the gap is up,
+// with one fsync. At a turn a second nothing waits; a burst of 60 turns costs
+// a handful of fsyncs whatever the disk, and at most 150 ms of counting is
+// ever not yet on the disk.
+const BurstGap = 150 * time.Millisecond
+
+// gatherMsg says the gap after the last write is up: write what gathered.
+type gatherMsg struct{}
+
+// gatherTick starts the gathering timer; tests replace it to fire it by
+// hand.
+var gatherTick = tea.Tick
+
 // heldCounter is implemented by errors that say how many entries wait.
 type heldCounter interface{ HeldEntries() int }
 
@@ -71,6 +87,11 @@ type writer struct {
 	held     int   // entries the recorder keeps unwritten
 	failures int
 	sent     int // writes started (Append or Retry calls handed to commands)
+
+	gap       time.Duration    // shortest time between starts of writes; 0 writes every key at once
+	clock     func() time.Time // for the gap
+	lastStart time.Time        // when the last write started
+	gathering bool             // a gather timer is running
 }
 
 // push queues an entry.
@@ -85,11 +106,19 @@ func (w *writer) settled() bool { return w.pending() == 0 && !w.inflight }
 // kick hands the queued entries over unless a write runs, a retry is
 // waiting, or there is nothing to write.
 func (w *writer) kick() tea.Cmd {
-	if w.rec == nil || w.inflight || w.waiting || len(w.queue) == 0 {
+	if w.rec == nil || w.inflight || w.waiting || w.gathering || len(w.queue) == 0 {
 		if w.rec == nil {
 			w.queue = nil
 		}
 		return nil
+	}
+	if w.gap > 0 {
+		now := w.clock()
+		if wait := w.gap - now.Sub(w.lastStart); !w.lastStart.IsZero() && wait > 0 {
+			w.gathering = true
+			return gatherTick(wait, func(time.Time) tea.Msg { return gatherMsg{} })
+		}
+		w.lastStart = now
 	}
 	w.inflight = true
 	w.sent++
@@ -134,6 +163,12 @@ func (w *writer) saved(msg savedMsg) tea.Cmd {
 		return retryTick(retryAfter, func(time.Time) tea.Msg { return retryMsg{} })
 	}
 	w.err, w.held, w.failures = nil, 0, 0
+	return w.kick()
+}
+
+// gather writes what gathered while the gap after the last write ran.
+func (w *writer) gather() tea.Cmd {
+	w.gathering = false
 	return w.kick()
 }
 

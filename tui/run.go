@@ -73,6 +73,7 @@ func Run(p *plan.Plan, o RunOptions) error {
 		History:  events,
 		Notice:   strings.TrimSpace(strings.Join(append(store.Notices(), TornNotice(torn)), " ")),
 		Where:    o.RecordPath,
+		WriteGap: BurstGap,
 	})
 	popts := []tea.ProgramOption{tea.WithoutSignalHandler()}
 	if o.In != nil {
