@@ -127,8 +127,8 @@ func (b *builder) tests() error {
 			p.Connection, FormatValue(p.AmbientC, UnitCelsius), strings.Join(expect, ", "), FormatValue(p.PhaseResistance20C, UnitOhm)),
 		Limit: round1(math.Max(-lowPct, highPct)), Unit: UnitPercent, Compare: InBand, LowPercent: round1(lowPct), HighPercent: round1(highPct),
 		Readings: lines,
-		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band %+.1f %% .. %+.1f %%: about ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm (R goes as 1/d²), times ±%.0f %% for the length estimate (common practice)",
-			lowPct, highPct, tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
+		Source: fmt.Sprintf("IEC 60028 resistivity 1/58 Ω·mm²/m and R_T = R_20·(234.5+T)/254.5; band %s: about ±%.1f %% from the IEC 60317-0-1 diameter tolerance ±%.3f mm (R goes as 1/d²), times ±%.0f %% for the length estimate (common practice)",
+			BandText(lowPct, highPct), tolPct, p.Wire.DiameterTolMM, LengthUncertaintyPercent),
 		Note: lineNote(p.Connection)})
 	ts = append(ts, Test{Name: TestBalance, Title: "Resistance balance",
 		What:  "Balance of the phase resistances, worked out from the readings of the resistance test (not read again): the phase values from the line readings, then the largest deviation of a phase from the mean of the phases, over that mean.",

@@ -131,7 +131,7 @@ func LimitText(t Test) string {
 		return "at most " + FormatValue(t.Limit, t.Unit) + at
 	case InBand:
 		if t.LowPercent != 0 || t.HighPercent != 0 {
-			return "within " + signed(t.LowPercent) + " % .. " + signed(t.HighPercent) + " % of expected" + at
+			return "within " + BandText(t.LowPercent, t.HighPercent) + " of expected" + at
 		}
 		return "within ±" + FormatValue(t.Limit, UnitPercent) + " of expected" + at
 	case Matches:
@@ -143,14 +143,22 @@ func LimitText(t Test) string {
 	return strings.TrimSpace(at)
 }
 
-// signed writes a band edge in per cent with its sign, the minus as a true
-// minus sign, to 0.1 % as the band is given (−6.8 % .. +7.0 %, not +7 %).
-func signed(v float64) string {
-	if v < 0 {
-		return "−" + strconv.FormatFloat(-v, 'f', 1, 64)
+// SignedPercent writes a deviation or a band edge in per cent with its
+// sign, the minus as a true minus sign, to 0.1 % (−6.8 %, +7.0 %, not +7 %;
+// 0.0 % without a sign).
+// The plan's limits, the check's findings and the bench all write them so.
+func SignedPercent(v float64) string {
+	if math.Round(v*10) == 0 {
+		return "0.0 %" // no sign on what rounds to nothing (not −0.0 %)
 	}
-	return "+" + strconv.FormatFloat(v, 'f', 1, 64)
+	if v < 0 {
+		return "−" + strconv.FormatFloat(-v, 'f', 1, 64) + " %"
+	}
+	return "+" + strconv.FormatFloat(v, 'f', 1, 64) + " %"
 }
+
+// BandText writes a resistance band as its two edges: "−6.9 % .. +7.1 %".
+func BandText(low, high float64) string { return SignedPercent(low) + " .. " + SignedPercent(high) }
 
 // FormatReadings writes recorded values of a test by the names and units of
 // its reading schema, in the schema's order: "U–V 278.4 mΩ, V–W 278.6 mΩ,

@@ -185,3 +185,28 @@ func TestReadingSchemaPaths(t *testing.T) {
 		t.Errorf("phase U = %g Ω; want paths 1 and 2 in parallel", got)
 	}
 }
+
+// TestSignedPercent: deviations and band edges to 0.1 % with a true minus
+// sign, a plus on the positive side and no sign on what rounds to zero.
+func TestSignedPercent(t *testing.T) {
+	cases := []struct {
+		in   float64
+		want string
+	}{
+		{-6.87, "−6.9 %"},
+		{7.13, "+7.1 %"},
+		{7, "+7.0 %"},
+		{-0.04, "0.0 %"},
+		{0.04, "0.0 %"},
+		{0, "0.0 %"},
+		{-0.05, "−0.1 %"}, // math.Round rounds half away from zero
+	}
+	for _, c := range cases {
+		if got := SignedPercent(c.in); got != c.want {
+			t.Errorf("SignedPercent(%g) = %q; want %q", c.in, got, c.want)
+		}
+	}
+	if got, want := BandText(-6.87, 7.13), "−6.9 % .. +7.1 %"; got != want {
+		t.Errorf("BandText(-6.87, 7.13) = %q; want %q", got, want)
+	}
+}

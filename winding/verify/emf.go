@@ -163,14 +163,14 @@ func (c *checker) backEMF() {
 			add(Fail, fmt.Sprintf("back-EMF %.3g V is about %s the predicted %.3g V line to line at %.0f rpm: star and delta confused, a phase voltage read as line voltage, or the magnet flux per pole that far from the plan's estimate; the line resistances (--uv --vw --wu) tell the connection",
 				mean, map[bool]string{true: "√3×", false: "1/√3 of"}[ratio > 1], res.ExpectedLineV, e.RPM), nil)
 		case dev <= EMFLevelWarnPercent:
-			add(Pass, fmt.Sprintf("back-EMF %.3g V line to line at %.0f rpm, %+.1f %% from the predicted %.3g V", mean, e.RPM, res.DeviationPercent, res.ExpectedLineV), nil)
+			add(Pass, fmt.Sprintf("back-EMF %.3g V line to line at %.0f rpm, %s from the predicted %.3g V", mean, e.RPM, plan.SignedPercent(res.DeviationPercent), res.ExpectedLineV), nil)
 		default:
 			sev := Warn
 			if dev > EMFLevelFailPercent {
 				sev = Fail
 			}
-			add(sev, fmt.Sprintf("back-EMF %.3g V line to line at %.0f rpm is %+.1f %% from the predicted %.3g V: the magnet flux differs from the plan's estimate, the turns differ (about %.0f per coil fits), or the speed reading is off",
-				mean, e.RPM, res.DeviationPercent, res.ExpectedLineV, ratio*float64(c.p.TurnsPerCoil)), nil)
+			add(sev, fmt.Sprintf("back-EMF %.3g V line to line at %.0f rpm is %s from the predicted %.3g V: the magnet flux differs from the plan's estimate, the turns differ (about %.0f per coil fits), or the speed reading is off",
+				mean, e.RPM, plan.SignedPercent(res.DeviationPercent), res.ExpectedLineV, ratio*float64(c.p.TurnsPerCoil)), nil)
 		}
 	}
 	if res.ImbalancePercent <= EMFImbalanceWarnPercent {

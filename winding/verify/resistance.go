@@ -211,7 +211,7 @@ func (c *checker) level(level float64, good []int) {
 	}
 	if dev >= b.LowPercent && dev <= b.HighPercent {
 		c.add(Finding{Severity: Pass, Test: plan.TestResistance, Message: fmt.Sprintf(
-			"%s within the band %+.1f %% .. %+.1f %% of the plan's %s at 20 °C (%+.1f %%)", who, b.LowPercent, b.HighPercent, ohm(c.p.PhaseResistance20C), dev)})
+			"%s within the band %s of the plan's %s at 20 °C (%s)", who, plan.BandText(b.LowPercent, b.HighPercent), ohm(c.p.PhaseResistance20C), plan.SignedPercent(dev))})
 		return
 	}
 	for _, rc := range c.ratioCauses() {
@@ -235,8 +235,8 @@ func (c *checker) level(level float64, good []int) {
 	}
 	causes = append(causes, fmt.Sprintf("a winding at %.0f °C rather than the %.1f °C given", level*(wire.InferredZeroC+t)-wire.InferredZeroC, t))
 	c.add(Finding{Severity: sev, Test: plan.TestResistance, Message: fmt.Sprintf(
-		"%s read %.1f %% %s the plan, outside the band %+.1f %% .. %+.1f %%, and equally, so the cause is common to all: %s",
-		who, math.Abs(dev), map[bool]string{true: "below", false: "above"}[dev < 0], b.LowPercent, b.HighPercent, strings.Join(causes, "; or "))})
+		"%s read %.1f %% %s the plan, outside the band %s, and equally, so the cause is common to all: %s",
+		who, math.Abs(dev), map[bool]string{true: "below", false: "above"}[dev < 0], plan.BandText(b.LowPercent, b.HighPercent), strings.Join(causes, "; or "))})
 }
 
 func factorText(f float64) string {

@@ -26,10 +26,10 @@ func (r *Report) Text() string {
 		w("Resistance  %s winding, read %s (%s), winding at %.1f °C\n", r.Connection, r.Method, wiring, r.TemperatureC)
 		w("  expected per phase  %s at 20 °C, %s at %.1f °C\n", ohm(r.Expected.At20C), ohm(r.Expected.AtTemp), r.TemperatureC)
 		bd := r.Band
-		w("  band                %+.1f %% .. %+.1f %%  (%s .. %s at 20 °C)\n", bd.LowPercent, bd.HighPercent, ohm(bd.Low20C), ohm(bd.High20C))
+		w("  band                %s  (%s .. %s at 20 °C)\n", plan.BandText(bd.LowPercent, bd.HighPercent), ohm(bd.Low20C), ohm(bd.High20C))
 		if bd.DiameterTolMM > 0 {
-			w("                      wire %.3f ± %.3f mm (IEC 60317): %+.1f %% .. %+.1f %%; length estimate ± %.0f %%\n",
-				bd.DiameterMM, bd.DiameterTolMM, bd.DiameterPercent[0], bd.DiameterPercent[1], bd.LengthPercent)
+			w("                      wire %.3f ± %.3f mm (IEC 60317): %s; length estimate ± %.0f %%\n",
+				bd.DiameterMM, bd.DiameterTolMM, plan.BandText(bd.DiameterPercent[0], bd.DiameterPercent[1]), bd.LengthPercent)
 		} else {
 			w("                      length estimate ± %.0f %% (no diameter tolerance in the plan)\n", bd.LengthPercent)
 		}
@@ -80,7 +80,7 @@ func (r *Report) Text() string {
 	if e := r.EMF; e != nil {
 		w("\nBack-EMF    at %.0f rpm: UV %.3g V, VW %.3g V, WU %.3g V; imbalance %.1f %%", e.RPM, e.Lines[0], e.Lines[1], e.Lines[2], e.ImbalancePercent)
 		if e.ExpectedLineV > 0 {
-			w("; predicted %.3g V (%+.1f %%)", e.ExpectedLineV, e.DeviationPercent)
+			w("; predicted %.3g V (%s)", e.ExpectedLineV, plan.SignedPercent(e.DeviationPercent))
 		}
 		b.WriteString("\n")
 	}
