@@ -40,7 +40,7 @@ func (r *Report) Text() string {
 				if l.Open {
 					v = "open"
 				}
-				w("  %s %s", l.Lines, v)
+				w("  %s %s", lineText(l.Lines), v)
 			}
 			b.WriteString("\n")
 		}
@@ -54,7 +54,7 @@ func (r *Report) Text() string {
 			if p.InBand {
 				in = "inside"
 			}
-			w("  %-5s  %12s  %12s  %+8.2f%%  %s\n", p.Phase, ohm(p.OhmAtTemp), ohm(p.Ohm20C), p.DeviationPercent, in)
+			w("  %-5s  %12s  %12s  %9s  %s\n", p.Phase, ohm(p.OhmAtTemp), ohm(p.Ohm20C), plan.SignedPercent(p.DeviationPercent), in)
 		}
 		w("  imbalance %.2f %% (limit %.0f %%, EASA AR100)\n", r.ImbalancePercent, r.ImbalanceLimit)
 	}
@@ -154,4 +154,14 @@ func unitWords(text string) []string {
 		out = append(out, w)
 	}
 	return out
+}
+
+// lineText writes a pair of line leads as the plan's readings name them,
+// "U–V" for the report's "UV".
+func lineText(lines string) string {
+	r := []rune(lines)
+	if len(r) != 2 {
+		return lines
+	}
+	return string(r[0]) + "–" + string(r[1])
 }
