@@ -5,8 +5,6 @@ import (
 	"math"
 	"sort"
 	"strings"
-	"unicode"
-	"unicode/utf8"
 
 	"coilwright/winding"
 	"coilwright/winding/plan"
@@ -559,11 +557,15 @@ func (b *builder) testBlock(f *flow, n int, t plan.Test) {
 	f.y = end + 2
 }
 
-// sentence starts s with a capital letter.
+// sentence starts s with a capital letter, unless s starts with a job-file
+// key (width_top_mm), written as the job file spells it, or with a symbol
+// whose case carries meaning (ω is not Ω, µ not M).
 func sentence(s string) string {
-	r, n := utf8.DecodeRuneInString(s)
-	if r == utf8.RuneError {
+	if first, _, _ := strings.Cut(s, " "); strings.Contains(first, "_") {
 		return s
 	}
-	return string(unicode.ToUpper(r)) + s[n:]
+	if s == "" || s[0] < 'a' || s[0] > 'z' {
+		return s
+	}
+	return strings.ToUpper(s[:1]) + s[1:]
 }

@@ -48,7 +48,7 @@ func warningsFor(l *Layout) []Warning {
 	}
 	if l.WindingFactor > 0 && worst > SubHarmonicLimit*l.WindingFactor {
 		msg := fmt.Sprintf(
-			"MMF sub-harmonic of order %d (below the working order %d) has winding factor %.3f, %.0f%% of the working one: it turns at another speed than the rotor and drives eddy currents in magnets and back iron, which grow with the square of the electrical frequency; segment the magnets if the machine runs fast",
+			"MMF sub-harmonic of order %d (below the working order %d) has winding factor %.3f, %.0f %% of the working one: it turns at another speed than the rotor and drives eddy currents in magnets and back iron, which grow with the square of the electrical frequency; segment the magnets if the machine runs fast",
 			worstOrder, p, worst, 100*worst/l.WindingFactor)
 		if worstOrder == l.Spec.Slots-p {
 			msg += fmt.Sprintf(" (order Q - p = %d: usual when 2p > Q)", worstOrder)
