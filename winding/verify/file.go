@@ -2,7 +2,6 @@ package verify
 
 import (
 	"bytes"
-	"errors"
 	"fmt"
 	"math"
 	"sort"
@@ -65,16 +64,7 @@ func ParseReadings(data []byte) (Readings, bool, error) {
 	data = bytes.TrimPrefix(data, []byte("\xef\xbb\xbf")) // a UTF-8 byte-order mark is not part of the TOML
 	dec := toml.NewDecoder(bytes.NewReader(data)).DisallowUnknownFields()
 	if err := dec.Decode(&f); err != nil {
-		var de *toml.DecodeError
-		if errors.As(err, &de) {
-			line, _ := de.Position()
-			return Readings{}, false, &FileError{Line: line, Reason: de.Error()}
-		}
-		var sm *toml.StrictMissingError
-		if errors.As(err, &sm) {
-			return Readings{}, false, &FileError{Reason: "unknown key: " + sm.String()}
-		}
-		return Readings{}, false, &FileError{Reason: err.Error()}
+		return Readings{}, false, fileDecodeError(data, err)
 	}
 	r := Readings{LeadOhm: f.LeadOhm, FourWire: f.FourWire}
 	for _, x := range []struct {

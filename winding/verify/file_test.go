@@ -100,3 +100,42 @@ func TestFileKey(t *testing.T) {
 		}
 	}
 }
+
+// TestParseReadingsErrorsNameFileKeys: a measurements file's errors name the
+// key as the file writes it, its table and line, and what it takes; never
+// the program's own field names or Go types.
+func TestParseReadingsErrorsNameFileKeys(t *testing.T) {
+	cases := []struct {
+		name, file string
+		line       int
+		want       []string
+	}{
+		{"unknown at top", "temp = 20\nuvx = 0.3\n", 2, []string{`unknown key "uvx" at the top of the file`, "uv, vw, wu"}},
+		{"unknown in table", "[insulation]\nir1 = 100\nir_10 = 300\n", 3, []string{`unknown key "ir_10" in [insulation]`, "ir1, ir10, volts"}},
+		{"text for a number", "temp = \"warm\"\n", 1, []string{"temp takes the winding temperature in °C as a number"}},
+		{"text in a table", "[emf]\nuv = 30\nrpm = \"fast\"\n", 3, []string{"[emf] rpm takes the speed in rpm as a number"}},
+		{"number for true or false", "four_wire = 1\n", 1, []string{"four_wire takes true or false"}},
+	}
+	for _, c := range cases {
+		_, _, err := verify.ParseReadings([]byte(c.file))
+		var fe *verify.FileError
+		if !errors.As(err, &fe) {
+			t.Errorf("%s: err = %v; want a FileError", c.name, err)
+			continue
+		}
+		if fe.Line != c.line {
+			t.Errorf("%s: line %d; want %d", c.name, fe.Line, c.line)
+		}
+		msg := fe.Error()
+		for _, w := range c.want {
+			if !strings.Contains(msg, w) {
+				t.Errorf("%s: %q; want it to say %q", c.name, msg, w)
+			}
+		}
+		for _, bad := range []string{"struct field", "readingsFile", "float64", "unknown field"} {
+			if strings.Contains(msg, bad) {
+				t.Errorf("%s: %q speaks of the program's insides (%q)", c.name, msg, bad)
+			}
+		}
+	}
+}
