@@ -192,7 +192,8 @@ func writeCheckReport(cmd *cobra.Command, p *plan.Plan, rep *verify.Report, asJS
 	}
 	w := cmd.OutOrStdout()
 	fmt.Fprintf(w, "Check of %s\n\n", planTitle(p))
-	_, err := fmt.Fprint(w, rep.Text())
+	// a report without resistance readings starts with a section's blank line
+	_, err := fmt.Fprint(w, strings.TrimLeft(rep.Text(), "\n"))
 	return err
 }
 

@@ -276,3 +276,16 @@ func TestCheckReadingsFileKeys(t *testing.T) {
 		t.Errorf("check --readings with uv and vw OL: exit %d, %q %q; want a check that finds an open phase", code, out, errs)
 	}
 }
+
+// A check with no resistance readings starts its first section one blank
+// line under the title, as one with them does.
+func TestCheckWithoutResistanceOneBlankLine(t *testing.T) {
+	code, out, errs := runCLI(t, "check", "--demo", "--hv-pass", "--hv-volts", "570")
+	if code != 0 {
+		t.Fatalf("status %d, stderr %q", code, errs)
+	}
+	lines := strings.Split(out, "\n")
+	if len(lines) < 3 || !strings.HasPrefix(lines[0], "Check of ") || lines[1] != "" || !strings.HasPrefix(lines[2], "Withstand") {
+		t.Errorf("report starts %q; want the title, one blank line, then the withstand line", lines[:min(4, len(lines))])
+	}
+}
