@@ -313,10 +313,19 @@ func (g guideModel) coilWords(cs *plan.CoilStep, w, n, k int) []string {
 	}
 	of, state := g.countWords(n, cs.Turns, g.shown())
 	if k > 0 {
+		// "of 18 turns, as planned: press enter" on the row under the
+		// figures when it fits the column; otherwise "of 18 turns" takes
+		// the blank row above them, so the words are never cut and the
+		// rows stay as many as fitLevel counts.
+		tail := of + ", " + state
+		if ansi.StringWidth(tail) > w {
+			out[len(out)-1] = cut(of)
+			tail = state
+		}
 		for _, f := range scaledNumber(n, k) {
 			out = append(out, cut(style.Render(f)))
 		}
-		return append(out, cut(of+", "+state))
+		return append(out, cut(tail))
 	}
 	b := bigNumber(n)
 	for i, f := range b {
