@@ -92,7 +92,9 @@ func (e Event) Validate() error {
 		return &EventError{"step", fmt.Sprintf("%d is outside 1..%d; steps count from 1", e.Step, MaxStep)}
 	case e.Tooth < 0 || e.Tooth > MaxTooth:
 		return &EventError{"tooth", fmt.Sprintf("%d is outside 1..%d; teeth count from 1", e.Tooth, MaxTooth)}
-	case e.Turns < 0 || e.Turns > MaxTurns:
+	case e.Turns < 0:
+		return &EventError{"turns", fmt.Sprintf("%d is below 0; a count of turns is 0..%d", e.Turns, MaxTurns)}
+	case e.Turns > MaxTurns:
 		return &EventError{"turns", fmt.Sprintf("%d is outside 0..%d, more than any coil holds", e.Turns, MaxTurns)}
 	case len([]rune(e.Note)) > MaxNoteRune:
 		return &EventError{"note", fmt.Sprintf("%d characters; at most %d", len([]rune(e.Note)), MaxNoteRune)}

@@ -173,12 +173,13 @@ func TestStoreTornTailKeptAside(t *testing.T) {
 
 // Values beyond any coil or meter are refused with their line number.
 func TestDecodeBoundsValues(t *testing.T) {
-	cases := []struct{ name, line string }{
-		{"absurd turns", `{"seq":2,"kind":"done","step":2,"tooth":1,"turns":9e18}`},
-		{"turns past the bound", `{"seq":2,"kind":"turns","step":2,"tooth":1,"turns":100000}`},
-		{"huge step", `{"seq":2,"kind":"done","step":2000000}`},
-		{"huge seq", `{"seq":9000000000000000000,"kind":"done","step":2}`},
-		{"huge reading", `{"seq":2,"kind":"reading","test":"resistance","readings":{"uv":1e300}}`},
+	cases := []struct{ name, line, why string }{
+		{"absurd turns", `{"seq":2,"kind":"done","step":2,"tooth":1,"turns":9e18}`, ""},
+		{"turns past the bound", `{"seq":2,"kind":"turns","step":2,"tooth":1,"turns":100000}`, "more than any coil holds"},
+		{"negative turns", `{"seq":2,"kind":"turns","step":2,"tooth":1,"turns":-5}`, "below 0"},
+		{"huge step", `{"seq":2,"kind":"done","step":2000000}`, ""},
+		{"huge seq", `{"seq":9000000000000000000,"kind":"done","step":2}`, ""},
+		{"huge reading", `{"seq":2,"kind":"reading","test":"resistance","readings":{"uv":1e300}}`, ""},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -187,6 +188,9 @@ func TestDecodeBoundsValues(t *testing.T) {
 			var de *journal.DecodeError
 			if !errors.As(err, &de) || de.Line != 2 {
 				t.Errorf("Decode(%s) err = %v; want a DecodeError on line 2", c.name, err)
+			}
+			if err != nil && !strings.Contains(err.Error(), c.why) {
+				t.Errorf("Decode(%s) err = %v; want it to say %q", c.name, err, c.why)
 			}
 		})
 	}
