@@ -65,7 +65,7 @@ func limitJudge(_ *plan.Plan, t plan.Test, v []float64) Verdict {
 	case plan.AtMost, plan.AtLeast:
 		var bad []string
 		for i, x := range v {
-			if (t.Compare == plan.AtMost && x > t.Limit) || (t.Compare == plan.AtLeast && x < t.Limit) {
+			if (t.Compare == plan.AtMost && x > t.BoundOf(i)) || (t.Compare == plan.AtLeast && x < t.Limit) {
 				who := ""
 				if i < len(t.Readings) {
 					who = t.Readings[i].Label + " " // which path or pair

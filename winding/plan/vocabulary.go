@@ -128,6 +128,12 @@ func LimitText(t Test) string {
 	case AtLeast:
 		return "at least " + FormatValue(t.Limit, t.Unit) + at
 	case AtMost:
+		if f, ok := t.ownBoundFactor(); ok {
+			// each reading against its own expected value (the continuity of
+			// each path): one figure for all would pass a path over its own
+			// bound
+			return "each at most " + sig(100*f, 3) + " % of its expected value" + at
+		}
 		return "at most " + FormatValue(t.Limit, t.Unit) + at
 	case InBand:
 		if t.LowPercent != 0 || t.HighPercent != 0 {
@@ -210,4 +216,39 @@ func ImbalancePercent(v []float64) (pct, mean float64) {
 		dev = math.Max(dev, math.Abs(x-mean))
 	}
 	return 100 * dev / mean, mean
+}
+
+// BoundOf is the figure reading i of t is judged against: for an "at most"
+// test whose readings carry their own window (each path of the continuity
+// test against its own expected resistance) the top of that window, else
+// the test's limit. The bench, the check and the printed record judge by it.
+func (t Test) BoundOf(i int) float64 {
+	if t.Compare == AtMost && i >= 0 && i < len(t.Readings) {
+		if e := t.Readings[i].Expected; e != nil && e.High > 0 {
+			return e.High
+		}
+	}
+	return t.Limit
+}
+
+// ownBoundFactor reports whether every reading of an "at most" test has
+// its own bound at one common multiple of its expected value, and that
+// multiple.
+func (t Test) ownBoundFactor() (float64, bool) {
+	if t.Compare != AtMost || len(t.Readings) == 0 {
+		return 0, false
+	}
+	f := 0.0
+	for _, r := range t.Readings {
+		e := r.Expected
+		if e == nil || e.High <= 0 || e.Value <= 0 {
+			return 0, false
+		}
+		g := e.High / e.Value
+		if f != 0 && math.Abs(g-f) > 1e-9*f {
+			return 0, false
+		}
+		f = g
+	}
+	return f, true
 }
