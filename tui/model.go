@@ -62,7 +62,13 @@ type Model struct {
 	help     helpModel
 	keyHelp  help.Model
 	notice   string   // the status line until the next key
-	banner   []string // what the resume or the record file needs said, above the guide until a key
+	banner   []string // what the resume needs said, above the guide until a key
+	// fileBanner is what the record file needed (written again after it was
+	// removed or replaced under the guide): it stays above the guide until
+	// the step in hand changes, so a winder counting with the space bar
+	// cannot miss it; the help screen keeps it after that.
+	fileBanner     []string
+	fileBannerStep int
 	quitting bool
 	stopped  bool // a signal asked the guide to stop
 	ignored  int  // history entries that did not fit the plan
@@ -134,7 +140,10 @@ func (m *Model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 		m.overview = m.overview.open(bw, bh)
 		m.help = m.help.open(bw, bh)
 	case savedMsg:
-		m.banner = append(m.banner, msg.notices...)
+		if len(msg.notices) > 0 {
+			m.fileBanner = append(m.fileBanner, msg.notices...)
+			m.fileBannerStep = m.c.prog.Current()
+		}
 		m.c.said = append(m.c.said, msg.notices...)
 		cmd = m.c.out.saved(msg)
 		if m.quitting && m.c.out.settled() {
@@ -152,6 +161,9 @@ func (m *Model) Update(msg tea.Msg) (tea.Model, tea.Cmd) {
 	case tea.KeyMsg:
 		n, step, ok := m.c.countNow()
 		cmd = tea.Batch(m.key(msg), m.c.bellAfter(n, step, ok))
+		if len(m.fileBanner) > 0 && m.c.prog.Current() != m.fileBannerStep {
+			m.fileBanner = nil
+		}
 		if m.quitting && m.c.out.settled() {
 			return m, tea.Quit
 		}
@@ -247,15 +259,15 @@ func (m *Model) View() string {
 	return fit(m.header()+"\n"+body+"\n"+m.status()+"\n"+m.helpLine(), c.width, c.height)
 }
 
-// bannerLines is what the resume or the record file needs said, wrapped
-// to the width and cut to at most h lines (the last says so), until the next
-// key.
+// bannerLines is what the record file and the resume need said, wrapped
+// to the width and cut to at most h lines (the last says so): the resume's
+// until the next key, the record file's until the step in hand changes.
 func (m *Model) bannerLines(w, h int) []string {
-	if len(m.banner) == 0 || h < 1 {
+	if len(m.banner)+len(m.fileBanner) == 0 || h < 1 {
 		return nil
 	}
 	var out []string
-	for _, b := range m.banner {
+	for _, b := range append(append([]string(nil), m.fileBanner...), m.banner...) {
 		out = append(out, wrapPlain(b, w)...)
 	}
 	if len(out) > h {
