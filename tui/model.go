@@ -69,9 +69,9 @@ type Model struct {
 	// cannot miss it; the help screen keeps it after that.
 	fileBanner     []string
 	fileBannerStep int
-	quitting bool
-	stopped  bool // a signal asked the guide to stop
-	ignored  int  // history entries that did not fit the plan
+	quitting       bool
+	stopped        bool // a signal asked the guide to stop
+	ignored        int  // history entries that did not fit the plan
 }
 
 // New builds the guide and replays the history so it resumes where the work
