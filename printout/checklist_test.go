@@ -7,7 +7,6 @@ import (
 	"strings"
 	"testing"
 
-	"coilwright/printout/pdftext"
 	"coilwright/winding"
 	"coilwright/winding/job/jobtest"
 	"coilwright/winding/plan"
@@ -20,21 +19,7 @@ import (
 // inner one), and every jumper row names the slots it leaves and enters.
 func TestChecklistCoilRowsSayDownAndUp(t *testing.T) {
 	p := demoPlan(t)
-	pk, err := Build(p, Options{})
-	if err != nil {
-		t.Fatal(err)
-	}
-	pages, err := pdftext.Pages(render(t, pk))
-	if err != nil {
-		t.Fatal(err)
-	}
-	var runs []string
-	for k, pg := range pk.Pages {
-		if pg.Kind == ChecklistPage {
-			runs = append(runs, pages[k]...)
-		}
-	}
-	all := strings.Join(runs, "\n")
+	all := strings.Join(sheetTexts(t, p, Options{}, ChecklistPage), "\n")
 	q := p.Layout.Spec.Slots
 	slot := func(k int) int { return (k-1+q)%q + 1 }
 	coils, jumpers := 0, 0

@@ -8,7 +8,6 @@ import (
 	"strings"
 	"testing"
 
-	"coilwright/printout/pdftext"
 	"coilwright/winding"
 	"coilwright/winding/job"
 	"coilwright/winding/job/jobtest"
@@ -19,20 +18,7 @@ import (
 // read back from the PDF.
 func TestFiguresCaptions(t *testing.T) {
 	p := demoPlan(t)
-	pk, err := Build(p, Options{})
-	if err != nil {
-		t.Fatal(err)
-	}
-	pages, err := pdftext.Pages(render(t, pk))
-	if err != nil {
-		t.Fatal(err)
-	}
-	var texts []string
-	for k, pg := range pk.Pages {
-		if pg.Kind == FiguresPage {
-			texts = append(texts, pages[k]...)
-		}
-	}
+	texts := sheetTexts(t, p, Options{}, FiguresPage)
 	for _, want := range []string{"Figure 1. Star of slots.", "Figure 2. Harmonic spectrum.", "Figure 3. Slot cross-section.", "Figure 4. Lead-end view.", "sub-harmonics",
 		fmt.Sprintf("working order p = %d", p.Layout.Spec.PolePairs())} {
 		if !slices.Contains(texts, want) {

@@ -12,6 +12,7 @@ import (
 	"testing"
 	"time"
 
+	"coilwright/printout/pdftext"
 	"coilwright/winding"
 	"coilwright/winding/plan"
 )
@@ -348,6 +349,27 @@ func render(t testing.TB, pk *Pack) []byte {
 		t.Fatalf("Render = %v", err)
 	}
 	return buf.Bytes()
+}
+
+// sheetTexts builds the pack of p, renders it and reads back the text runs
+// of the sheets of the given kinds, in page order; no kinds reads every sheet.
+func sheetTexts(t testing.TB, p *plan.Plan, o Options, kinds ...PageKind) []string {
+	t.Helper()
+	pk, err := Build(p, o)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pages, err := pdftext.Pages(render(t, pk))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out []string
+	for k, pg := range pk.Pages {
+		if len(kinds) == 0 || slices.Contains(kinds, pg.Kind) {
+			out = append(out, pages[k]...)
+		}
+	}
+	return out
 }
 
 func TestRenderTextReadsBack(t *testing.T) {

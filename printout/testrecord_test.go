@@ -6,7 +6,6 @@ import (
 	"testing"
 	"time"
 
-	"coilwright/printout/pdftext"
 	"coilwright/winding/job/jobtest"
 	"coilwright/winding/plan"
 )
@@ -14,21 +13,7 @@ import (
 // recordTexts reads back the text runs of the test record sheets.
 func recordTexts(t *testing.T, p *plan.Plan, o Options) []string {
 	t.Helper()
-	pk, err := Build(p, o)
-	if err != nil {
-		t.Fatal(err)
-	}
-	pages, err := pdftext.Pages(render(t, pk))
-	if err != nil {
-		t.Fatal(err)
-	}
-	var out []string
-	for k, pg := range pk.Pages {
-		if pg.Kind == TestRecordPage {
-			out = append(out, pages[k]...)
-		}
-	}
-	return out
+	return sheetTexts(t, p, o, TestRecordPage)
 }
 
 // The test record has one cell per reading of the plan's schema, with the
@@ -126,18 +111,7 @@ func TestFivePhasePackNeverSaysThree(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	pk, err := Build(p, Options{})
-	if err != nil {
-		t.Fatal(err)
-	}
-	pages, err := pdftext.Pages(render(t, pk))
-	if err != nil {
-		t.Fatal(err)
-	}
-	var all []string
-	for _, pg := range pages {
-		all = append(all, pg...)
-	}
+	all := sheetTexts(t, p, Options{})
 	for _, s := range all {
 		if strings.Contains(strings.ToLower(s), "three") {
 			t.Errorf("five-phase pack says %q", s)
