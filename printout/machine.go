@@ -138,17 +138,11 @@ func axes(c *canvas, x, y, w, h, xMax, yMax float64, xLabel, yLabel string) (fun
 func (b *builder) chargingPlot(c *canvas, x, y, w, h float64) float64 {
 	mc, e := b.p.Machine, b.p.EMF
 	cv := mc.LoadCurve
-	var iMax float64
+	var speeds, amps []float64
 	for _, pt := range cv {
-		iMax = math.Max(iMax, pt.DCCurrentA)
+		speeds, amps = append(speeds, pt.SpeedRPM), append(amps, pt.DCCurrentA)
 	}
-	px, py, _, _ := axes(c, x+10, y+4, w-14, h-16, cv[len(cv)-1].SpeedRPM, math.Max(iMax, 1), "speed, rpm", "DC current into the bus, A")
-	var pts []Point
-	for _, pt := range cv {
-		pts = append(pts, Point{px(pt.SpeedRPM), py(pt.DCCurrentA)})
-		c.circle(px(pt.SpeedRPM), py(pt.DCCurrentA), 0.55, Pen{}, &Fill{Black})
-	}
-	c.poly(pts, false, Pen{Width: 0.45, Colour: Black}, nil)
+	px, py := curve(c, x, y, w, h, speeds, amps, "speed, rpm", "DC current into the bus, A")
 	mark := func(n float64, label string, dy float64) {
 		c.line(px(n), y+4, px(n), py(0), Pen{Width: 0.25, Colour: Ink, Dash: Dash{1, 0.8}})
 		c.text(px(n)+1, y+4+dy, sizeMin, Bold, Ink, left, label)
@@ -166,33 +160,46 @@ func (b *builder) chargingPlot(c *canvas, x, y, w, h float64) float64 {
 		mark(mc.RatedSpeedRPM, fmt.Sprintf("rated %g rpm: %.1f A, %.0f W", mc.RatedSpeedRPM, at.DCCurrentA, at.PowerW), 7)
 	}
 	bus := b.p.EMF.TargetV
-	capY := y + h + 2
 	text := fmt.Sprintf("Mean DC current into a %g V bus against speed, the power into the bus being %g V times it. A diode bridge with the machine's own resistance (hot) and inductance, stepped through time: "+
 		"no current until the peak line voltage reaches the bus plus the diodes (the cut-in), then limited by R and ωL with commutation overlap (Mohan, Undeland, Robbins, Power Electronics, ch. 5). "+
 		"The turbine and any charge controller decide where on the curve the machine runs.", bus, bus)
-	caption(c, x, capY, w, 5, "Charging curve", text)
-	return capY + lineStep(sizeSmall+0.5) + paraHeight(w, sizeSmall, Regular, text) + 2
+	return plotCaption(c, x, y+h+2, w, "Charging curve", text)
 }
 
 // voltagePlot draws the line voltage at the rated speed against the load
 // current, and returns the y below its caption.
 func (b *builder) voltagePlot(c *canvas, x, y, w, h float64) float64 {
 	mc := b.p.Machine
-	cv := mc.VoltageCurve
-	var vMax float64
-	for _, pt := range cv {
-		vMax = math.Max(vMax, pt.LineV)
+	var amps, volts []float64
+	for _, pt := range mc.VoltageCurve {
+		amps, volts = append(amps, pt.CurrentA), append(volts, pt.LineV)
 	}
-	px, py, _, _ := axes(c, x+10, y+4, w-14, h-16, cv[len(cv)-1].CurrentA, math.Max(vMax, 1), "load current, A rms", "line voltage, V rms")
-	var pts []Point
-	for _, pt := range cv {
-		pts = append(pts, Point{px(pt.CurrentA), py(pt.LineV)})
-		c.circle(px(pt.CurrentA), py(pt.LineV), 0.55, Pen{}, &Fill{Black})
+	curve(c, x, y, w, h, amps, volts, "load current, A rms", "line voltage, V rms")
+	text := fmt.Sprintf("Line voltage at %g rpm against the load current, from the EMF behind the hot resistance and the synchronous reactance (%s).", mc.RatedSpeedRPM, loadForm(mc.Operation))
+	return plotCaption(c, x, y+h+2, w, "Terminal voltage under load", text)
+}
+
+// curve draws, in the plot box at x, y of w by h, axes reaching the last x
+// value and the largest y value (at least 1), and the points (xs[i], ys[i])
+// as dots joined by a line; it returns the maps from values to the page.
+func curve(c *canvas, x, y, w, h float64, xs, ys []float64, xLabel, yLabel string) (px, py func(v float64) float64) {
+	var yMax float64
+	for _, v := range ys {
+		yMax = math.Max(yMax, v)
+	}
+	px, py, _, _ = axes(c, x+10, y+4, w-14, h-16, xs[len(xs)-1], math.Max(yMax, 1), xLabel, yLabel)
+	pts := make([]Point, len(xs))
+	for i := range xs {
+		pts[i] = Point{px(xs[i]), py(ys[i])}
+		c.circle(pts[i].X, pts[i].Y, 0.55, Pen{}, &Fill{Black})
 	}
 	c.poly(pts, false, Pen{Width: 0.45, Colour: Black}, nil)
-	capY := y + h + 2
-	text := fmt.Sprintf("Line voltage at %g rpm against the load current, from the EMF behind the hot resistance and the synchronous reactance (%s).", mc.RatedSpeedRPM, loadForm(mc.Operation))
-	caption(c, x, capY, w, 5, "Terminal voltage under load", text)
+	return px, py
+}
+
+// plotCaption sets the caption of a plot at capY and returns the y below it.
+func plotCaption(c *canvas, x, capY, w float64, title, text string) float64 {
+	caption(c, x, capY, w, 5, title, text)
 	return capY + lineStep(sizeSmall+0.5) + paraHeight(w, sizeSmall, Regular, text) + 2
 }
 
