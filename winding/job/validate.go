@@ -52,43 +52,28 @@ var ReferenceTemperatureC = map[int]float64{105: 75, 130: 95, 155: 115, 180: 135
 // Normalize fills the defaults of keys left out. Parse calls it; call it on a
 // Job built in code before Validate.
 func (j *Job) Normalize() {
-	w := &j.Winding
-	if w.Phases == 0 {
-		w.Phases = DefaultPhases
-	}
-	if w.Layers == 0 {
-		w.Layers = DefaultLayers
-	}
-	if w.Paths == 0 {
-		w.Paths = DefaultPaths
-	}
-	if w.Connection == "" {
-		w.Connection = DefaultConnection
-	}
-	if j.Wire.StrandsInHand == 0 {
-		j.Wire.StrandsInHand = DefaultStrands
-	}
-	if j.Build.SpoolMargin == 0 {
-		j.Build.SpoolMargin = DefaultSpoolMargin
-	}
-	if j.Build.PracticalFill == 0 {
-		j.Build.PracticalFill = DefaultPracticalFill
-	}
-	m := &j.Machine
-	if m.MagnetRecoilPermeability == 0 {
-		m.MagnetRecoilPermeability = DefaultRecoilPermeability
-	}
-	if m.StackingFactor == 0 {
-		m.StackingFactor = DefaultStackingFactor
-	}
+	w, m := &j.Winding, &j.Machine
+	orDefault(&w.Phases, DefaultPhases)
+	orDefault(&w.Layers, DefaultLayers)
+	orDefault(&w.Paths, DefaultPaths)
+	orDefault(&w.Connection, DefaultConnection)
+	orDefault(&j.Wire.StrandsInHand, DefaultStrands)
+	orDefault(&j.Build.SpoolMargin, DefaultSpoolMargin)
+	orDefault(&j.Build.PracticalFill, DefaultPracticalFill)
+	orDefault(&m.MagnetRecoilPermeability, DefaultRecoilPermeability)
+	orDefault(&m.StackingFactor, DefaultStackingFactor)
 	if m.LaminationLossWPerKg == 0 {
 		m.LaminationLossWPerKg = DefaultLaminationLoss
-		if m.LaminationGrade == "" {
-			m.LaminationGrade = DefaultLaminationGrade
-		}
+		orDefault(&m.LaminationGrade, DefaultLaminationGrade)
 	}
-	if m.Operation == "" {
-		m.Operation = OperationGenerator
+	orDefault(&m.Operation, OperationGenerator)
+}
+
+// orDefault sets *v to d when *v is left at its zero value.
+func orDefault[T comparable](v *T, d T) {
+	var zero T
+	if *v == zero {
+		*v = d
 	}
 }
 
