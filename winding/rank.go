@@ -84,7 +84,13 @@ func rankTolerant(rows []PairRow, layers []int) {
 		}
 		return cmp.Compare(sa.Poles, sb.Poles)
 	})
-	slices.SortStableFunc(rows, func(a, b PairRow) int {
+	sortStableBy(rows, better)
+}
+
+// sortStableBy sorts s stably, a before b where better(a, b); elements
+// neither of which is better than the other keep their order.
+func sortStableBy[T any](s []T, better func(a, b T) bool) {
+	slices.SortStableFunc(s, func(a, b T) int {
 		switch {
 		case better(a, b):
 			return -1

@@ -34,15 +34,7 @@ func straightPairs(t *testing.T, sw Sweep) []Summary {
 			}
 		}
 	}
-	slices.SortStableFunc(out, func(a, b Summary) int {
-		switch {
-		case straightBetter(a, b):
-			return -1
-		case straightBetter(b, a):
-			return 1
-		}
-		return 0
-	})
+	sortStableBy(out, straightBetter)
 	return out
 }
 
@@ -122,15 +114,7 @@ func TestRankRowsAsStableSortByBetter(t *testing.T) {
 				}
 			}
 			want := slices.Clone(rows)
-			slices.SortStableFunc(want, func(a, b PairRow) int {
-				switch {
-				case better(a, b):
-					return -1
-				case better(b, a):
-					return 1
-				}
-				return 0
-			})
+			sortStableBy(want, better)
 			rankRows(rows, []int{2})
 			if !slices.Equal(rows, want) {
 				t.Errorf("rankRows differs from a stable sort by better:\n got %v\nwant %v", rows, want)
