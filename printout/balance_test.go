@@ -2,14 +2,11 @@ package printout
 
 import (
 	"math"
-	"path/filepath"
 	"slices"
 	"strings"
 	"testing"
 	"time"
 
-	"coilwright/winding/job"
-	"coilwright/winding/job/jobtest"
 	"coilwright/winding/journal"
 	"coilwright/winding/plan"
 	"coilwright/winding/progress"
@@ -144,14 +141,7 @@ func TestBackEMFCellsPerThousandRPM(t *testing.T) {
 // and gives the losses as a lower bound, never "iron 0.0"; each note reads
 // once ("… not estimated: give …"), not prefixed a second time.
 func TestMachineSheetIronNotEstimated(t *testing.T) {
-	j, err := job.Load(filepath.Join(jobtest.Dir(t), "delta_paths_airgap.toml"))
-	if err != nil {
-		t.Fatal(err)
-	}
-	p, err := plan.Build(j)
-	if err != nil {
-		t.Fatal(err)
-	}
+	p := testJobPlan(t, "delta_paths_airgap.toml")
 	if p.Machine == nil || p.Machine.Iron != nil {
 		t.Skip("this job now gives the iron loss")
 	}

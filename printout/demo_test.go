@@ -3,11 +3,13 @@ package printout
 import (
 	"bytes"
 	"fmt"
+	"path/filepath"
 	"slices"
 	"testing"
 	"time"
 
 	"coilwright/winding/job"
+	"coilwright/winding/job/jobtest"
 	"coilwright/winding/plan"
 	"coilwright/winding/progress"
 )
@@ -17,6 +19,20 @@ func demoPlan(t testing.TB) *plan.Plan {
 	p, err := plan.Build(job.Demo())
 	if err != nil {
 		t.Fatalf("plan.Build(job.Demo()) = %v", err)
+	}
+	return p
+}
+
+// testJobPlan builds the plan of the named job among the test jobs.
+func testJobPlan(t testing.TB, file string) *plan.Plan {
+	t.Helper()
+	j, err := job.Load(filepath.Join(jobtest.Dir(t), file))
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := plan.Build(j)
+	if err != nil {
+		t.Fatal(err)
 	}
 	return p
 }

@@ -3,15 +3,11 @@ package printout
 import (
 	"fmt"
 	"math"
-	"path/filepath"
 	"slices"
 	"strings"
 	"testing"
 
 	"coilwright/winding"
-	"coilwright/winding/job"
-	"coilwright/winding/job/jobtest"
-	"coilwright/winding/plan"
 )
 
 // The design figures sheet carries the four figures with their captions,
@@ -105,14 +101,7 @@ func TestLeadEndViewJumpers(t *testing.T) {
 // never across the stator (no point of a lead comes nearer the centre than
 // the tooth it leaves).
 func TestLeadEndViewBranchesRoundTheOutside(t *testing.T) {
-	j, err := job.Load(filepath.Join(jobtest.Dir(t), "delta_paths_airgap.toml"))
-	if err != nil {
-		t.Fatal(err)
-	}
-	p, err := plan.Build(j)
-	if err != nil {
-		t.Fatal(err)
-	}
+	p := testJobPlan(t, "delta_paths_airgap.toml")
 	pk, err := Build(p, Options{})
 	if err != nil {
 		t.Fatal(err)
