@@ -300,7 +300,7 @@ func (g guideModel) polarityView(pp *panelParts, s plan.Step) {
 			if len(s.Phases) == 1 {
 				how = fmt.Sprintf("into %s1 (+), out of %s2 (-)", s.Phases[0], s.Phases[0])
 			}
-			b.kv("DC", fmt.Sprintf("%s A %s; %s of heat in the phase", fmtNum(t.Current), how, fmtWatts(t.HeatW)))
+			b.kv("DC", fmt.Sprintf("%s A %s; %s of heat in the phase", fmtNum(t.Current), how, plan.FormatWatts(t.HeatW)))
 		}
 	})
 	pp.add(partProse, func(b *lines) {
@@ -373,13 +373,6 @@ func poleWord(p plan.Pole) string {
 		return "N (north)"
 	}
 	return "S (south)"
-}
-
-func fmtWatts(w float64) string {
-	if w < 1 {
-		return fmt.Sprintf("%.0f mW", w*1000)
-	}
-	return fmt.Sprintf("%.2g W", w)
 }
 
 // polarityShortHelp is the help line of a polarity step.

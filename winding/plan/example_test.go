@@ -102,3 +102,9 @@ func ExampleImbalancePercent() {
 	// Output:
 	// 1.65 %
 }
+
+// FormatWatts writes the heat a test current makes: in mW below 1 W.
+func ExampleFormatWatts() {
+	fmt.Println(plan.FormatWatts(0.0512), plan.FormatWatts(2.46))
+	// Output: 51 mW 2.5 W
+}

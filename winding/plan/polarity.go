@@ -231,7 +231,7 @@ func (b *builder) polarityTest() Test {
 		Source: "common practice (the DC polarity test of rewinders); poles by the right-hand rule: a coil wound clockwise seen from the air gap, current entering at its start, makes its tooth face a south pole (a compass's north end points at it), counter-clockwise a north pole",
 		Note: fmt.Sprintf("%g A is %s of the rated phase current of %s (at most %g A); it needs about %s across the phase and makes %s of heat in it (I²R at %s), "+
 			"so the winding stays cool; a reversed coil shows the opposite pole of the plan, swapped start and finish leads reverse every tooth of the phase (or of the path)",
-			amps, fractionWords(amps, p.PhaseCurrentA), strconv.FormatFloat(p.PhaseCurrentA, 'g', 3, 64)+" A", PolarityCurrentMaxA, formatVolts(volts), formatWatts(watts), FormatValue(p.PhaseResistanceAmbient, UnitOhm)),
+			amps, fractionWords(amps, p.PhaseCurrentA), strconv.FormatFloat(p.PhaseCurrentA, 'g', 3, 64)+" A", PolarityCurrentMaxA, formatVolts(volts), FormatWatts(watts), FormatValue(p.PhaseResistanceAmbient, UnitOhm)),
 		Caution: PolarityCaution}
 }
 
@@ -257,7 +257,10 @@ func formatVolts(v float64) string {
 	return fmt.Sprintf("%.2g V", v)
 }
 
-func formatWatts(w float64) string {
+// FormatWatts writes a small power, such as the heat a test current makes
+// in a phase, to two figures, in mW below 1 W: the one way the plan text and
+// the bench guide say it.
+func FormatWatts(w float64) string {
 	if w < 1 {
 		return fmt.Sprintf("%.0f mW", w*1000)
 	}
