@@ -469,6 +469,18 @@ func (g *guideModel) focusField(i int) tea.Cmd {
 	return g.fields[g.focus].Focus()
 }
 
+// showVerdict judges the readings vals of the test step s and shows the
+// verdict, the fields left unfocused.
+func (g guideModel) showVerdict(s plan.Step, vals []float64) guideModel {
+	v := g.c.judge(g.c.plan, g.c.tests[s.Test], vals)
+	g.verdict, g.values, g.inErr = &v, vals, ""
+	g.mode = modeVerdict
+	for i := range g.fields {
+		g.fields[i].Blur()
+	}
+	return g
+}
+
 // updateReadings handles keys while readings are typed.
 func (g guideModel) updateReadings(msg tea.KeyMsg, s plan.Step, ok bool) (guideModel, tea.Cmd) {
 	k := g.c.keys
@@ -500,14 +512,7 @@ func (g guideModel) updateReadings(msg tea.KeyMsg, s plan.Step, ok bool) (guideM
 			g.mode = modeWork
 			return g, nil
 		}
-		t := g.c.tests[s.Test]
-		v := g.c.judge(g.c.plan, t, vals)
-		g.verdict, g.values, g.inErr = &v, vals, ""
-		g.mode = modeVerdict
-		for i := range g.fields {
-			g.fields[i].Blur()
-		}
-		return g, nil
+		return g.showVerdict(s, vals), nil
 	}
 	if len(g.fields) == 0 {
 		return g, nil

@@ -146,15 +146,8 @@ func (g guideModel) balanceFromResistance(s plan.Step) (guideModel, tea.Cmd) {
 		}
 		g.fields[i].SetValue(strconv.FormatFloat(vals[i], 'g', -1, 64))
 	}
-	t := g.c.tests[s.Test]
-	v := g.c.judge(g.c.plan, t, vals)
-	g.verdict, g.values, g.inErr = &v, vals, ""
-	g.mode = modeVerdict
-	for i := range g.fields {
-		g.fields[i].Blur()
-	}
 	_ = cmd
-	return g, nil
+	return g.showVerdict(s, vals), nil
 }
 
 // fieldWidth is the width of a reading field's box: room for the reading
