@@ -28,12 +28,7 @@ func (b *builder) polarity() {
 	if len(poles) == 0 {
 		poles = plan.Poles(p.Layout)
 	}
-	var test plan.Test
-	for _, t := range p.Tests {
-		if t.Name == plan.TestPolarity {
-			test = t
-		}
-	}
+	test, _ := p.TestNamed(plan.TestPolarity)
 	seen := b.polaritySeen()
 	f := b.startFlow(PolarityPage, "Polarity test: the pole of every tooth")
 	c := f.c

@@ -73,12 +73,7 @@ func TestTestRecordLineToLineCells(t *testing.T) {
 // deviation, the imbalance and the verdict.
 func TestTestRecordFilledFromRecord(t *testing.T) {
 	p := demoPlan(t)
-	var res plan.Test
-	for _, tt := range p.Tests {
-		if tt.Name == plan.TestResistance {
-			res = tt
-		}
-	}
+	res, _ := p.TestNamed(plan.TestResistance)
 	if len(res.Readings) < 4 {
 		t.Fatalf("demo resistance test has readings %v; want U–V, V–W, W–U and temperature", res.Readings)
 	}

@@ -13,12 +13,7 @@ import (
 // under the bound of a longer path.
 func TestContinuityJudgedPerPath(t *testing.T) {
 	p := demoPlan(t)
-	var ct plan.Test
-	for _, x := range p.Tests {
-		if x.Name == plan.TestContinuity {
-			ct = x
-		}
-	}
+	ct, _ := p.TestNamed(plan.TestContinuity)
 	if len(ct.Readings) != 3 {
 		t.Fatalf("demo continuity has %d readings; want 3", len(ct.Readings))
 	}

@@ -38,12 +38,7 @@ func TestResistanceFieldsShowWhatTheMeterShows(t *testing.T) {
 	m, _, p := demoAt(t, func(s plan.Step) bool { return s.Test == plan.TestResistance }, nil)
 	keys(t, m, "enter")
 	v := plain(m)
-	var res plan.Test
-	for _, ts := range p.Tests {
-		if ts.Name == plan.TestResistance {
-			res = ts
-		}
-	}
+	res, _ := p.TestNamed(plan.TestResistance)
 	for i, r := range res.Readings {
 		if r.Expected == nil {
 			continue

@@ -157,12 +157,8 @@ func TestWorkedExample(t *testing.T) {
 }
 
 func testNamed(p *Plan, name string) Test {
-	for _, t := range p.Tests {
-		if t.Name == name {
-			return t
-		}
-	}
-	return Test{}
+	t, _ := p.TestNamed(name)
+	return t
 }
 
 // withFlux replaces the [turns] table of the demo geometry with given turns

@@ -300,12 +300,7 @@ func FuzzParsePolarity(f *testing.F) {
 // ValuesOf and ReadingsOf carry the poles through the record's keys and back.
 func TestPolarityValuesRoundTrip(t *testing.T) {
 	p := planWithPaths(t, 1)
-	var pt plan.Test
-	for _, x := range p.Tests {
-		if x.Name == plan.TestPolarity {
-			pt = x
-		}
-	}
+	pt, _ := p.TestNamed(plan.TestPolarity)
 	obs := observed(p, 7)
 	v := verify.ValuesOf(p, pt, verify.Readings{Polarity: obs})
 	if len(v) != 24 || v["tooth_1"] != -1 || v["tooth_7"] != -1 {

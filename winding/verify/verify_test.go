@@ -395,12 +395,8 @@ func TestWithstandAgainstPlanVoltage(t *testing.T) {
 		if err != nil {
 			t.Fatalf("%s: %v", c.name, err)
 		}
-		var tv float64
-		for _, tt := range p.Tests {
-			if tt.Name == plan.TestHighVoltage {
-				tv = tt.Voltage
-			}
-		}
+		hv, _ := p.TestNamed(plan.TestHighVoltage)
+		tv := hv.Voltage
 		if tv != c.want {
 			t.Fatalf("%s: plan test voltage %g V; want %g V (IEC 60034-1 clause 9.2)", c.name, tv, c.want)
 		}
