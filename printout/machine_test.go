@@ -45,38 +45,14 @@ func TestMachinePage(t *testing.T) {
 		t.Errorf("machine sheet plots %d points; the curve has %d", dots, len(p.Machine.LoadCurve))
 	}
 
-	five := strings.Replace(string(job.DemoTOML()), "volts_rms = 1.70", "volts_rms = 5.0", 1)
-	j, err := job.Parse([]byte(five), "five.toml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	p5, err := plan.Build(j)
-	if err != nil {
-		t.Fatal(err)
-	}
-	pk5, err := Build(p5, Options{})
-	if err != nil {
-		t.Fatal(err)
-	}
+	pk5 := demoEditPack(t, "five.toml", "volts_rms = 1.70", "volts_rms = 5.0")
 	if text := strings.Join(textsOf(pagesOf(pk5, MachinePage)), " "); !strings.Contains(text, "ABOVE 1.8 T") {
 		t.Errorf("machine sheet of the 5.0 V variant lacks the saturation mark:\n%s", text)
 	}
 
 	// The sheet keeps to its margins for the charging curve, the saturated
 	// variant and the voltage curve of an EMF target.
-	emf := strings.Replace(string(job.DemoTOML()), "target = \"dc_bus\"\nvolts = 26\nspeed_rpm = 300\nbridge_drop_v = 1.6", "target = \"line_emf\"\nvolts = 34\nspeed_rpm = 500", 1)
-	je, err := job.Parse([]byte(emf), "emf.toml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	pe, err := plan.Build(je)
-	if err != nil {
-		t.Fatal(err)
-	}
-	pkE, err := Build(pe, Options{})
-	if err != nil {
-		t.Fatal(err)
-	}
+	pkE := demoEditPack(t, "emf.toml", "target = \"dc_bus\"\nvolts = 26\nspeed_rpm = 300\nbridge_drop_v = 1.6", "target = \"line_emf\"\nvolts = 34\nspeed_rpm = 500")
 	if text := strings.Join(textsOf(pagesOf(pkE, MachinePage)), " "); !strings.Contains(text, "Terminal voltage under load") {
 		t.Errorf("machine sheet of a line-EMF job lacks the voltage curve:\n%s", text)
 	}
@@ -96,4 +72,23 @@ func TestMachinePage(t *testing.T) {
 			t.Errorf("Build(%s): %d machine sheets; want none (no machine figures in the plan)", fx.name, n)
 		}
 	}
+}
+
+// demoEditPack builds the pack of the demo job with the text old of its
+// TOML replaced by with, read under the file name name.
+func demoEditPack(t *testing.T, name, old, with string) *Pack {
+	t.Helper()
+	j, err := job.Parse([]byte(strings.Replace(string(job.DemoTOML()), old, with, 1)), name)
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := plan.Build(j)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pk, err := Build(p, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return pk
 }
