@@ -33,7 +33,8 @@
 // same string in the plan's JSON, the check's findings, the progress record
 // and the print), a typed Unit (SI symbols: Ω, MΩ, V, °C, %, s, rpm) and
 // Compare (AtMost, AtLeast, InBand). LimitText writes a limit and
-// FormatValue a value the one way every screen and page shows them;
+// FormatValue a value (FormatWatts the heat of a test current) the one way
+// every screen and page shows them;
 // ImbalancePercent is the one balance rule (largest deviation from the mean,
 // EASA AR100); ResistanceBand the one band of a correct winding.
 //
