@@ -24,13 +24,20 @@ const (
 // jumperLabels are the two lines written on a jumper between coil boxes,
 // from the engine's slot-to-slot values (plan.JumperStep): above the wire
 // the slot it leaves and the slot it enters at the lead end, "s2→s6"; under
-// it the slot pitches and the way round seen from the lead end, "4 ccw"
-// ("0" when it goes straight back down the same slot).
+// it the slot pitches and the way round the lead end as the slot numbers
+// go, "4 up" (counter-clockwise seen from the lead end) or "4 down" ("0"
+// when it goes straight back down the same slot). The way is said by the
+// numbers, not as cw/ccw, so it never reads as a coil's sense, which the
+// coil boxes beside it give seen from the air gap.
 func jumperLabels(j plan.JumperStep) (slots, pitches string) {
 	slots = "s" + strconv.Itoa(j.LeavesSlot) + "→s" + strconv.Itoa(j.EntersSlot)
 	pitches = strconv.Itoa(j.SlotPitches)
 	if j.SlotPitches > 0 {
-		pitches += " " + j.Way
+		if j.Way == plan.WayCW {
+			pitches += " down"
+		} else {
+			pitches += " up"
+		}
 	}
 	return slots, pitches
 }
@@ -95,8 +102,8 @@ func (b *builder) connectionSheets(jointsFirst bool) bool {
 		"Each path is one continuous wire, wound coil by coil from its start terminal to its finish terminal; "+
 			"the sense in a coil box (cw, ccw) is seen from the air gap facing the tooth. "+
 			"A jumper is counted slot to slot: above its wire the slot it leaves at the lead end and the slot it enters "+
-			"(“s2→s6”: up out of slot 2, down into slot 6), under the wire the slot pitches it runs round the lead end and which way, "+
-			"seen from the lead end (“4 ccw”: four slot pitches counter-clockwise, up the slot numbers), as the checklist's jumper rows say in words. "+
+			"(“s2→s6”: up out of slot 2, down into slot 6), under the wire the slot pitches it runs round the lead end and which way the slot numbers go "+
+			"(“4 up”: four slot pitches up the slot numbers, counter-clockwise seen from the lead end; “down” the other way), as the checklist's jumper rows say in words. "+
 			"“reverse” under a jumper marks the next coil wound the other way round.")
 	y += 2
 	if jointsFirst {

@@ -100,7 +100,7 @@ func TestJumpersLabelledSlotToSlot(t *testing.T) {
 	for _, pg := range pagesOf(pk, ConnectionPage) {
 		texts = append(texts, pg.Texts()...)
 	}
-	for _, want := range []string{"s24→s1", "s2→s6", "4 ccw", "1 ccw"} {
+	for _, want := range []string{"s24→s1", "s2→s6", "4 up", "1 up"} {
 		if !slices.Contains(texts, want) {
 			t.Errorf("connection sheets lack the jumper label %q", want)
 		}
@@ -122,6 +122,11 @@ func TestJumpersLabelledSlotToSlot(t *testing.T) {
 	for _, s := range texts {
 		if regexp.MustCompile(`^\+\d+$`).MatchString(s) {
 			t.Errorf("connection sheets still print a tooth-pitch count %q", s)
+		}
+		// the way round the lead end is said by the slot numbers, never as
+		// cw/ccw beside coil boxes whose cw/ccw is seen from the air gap
+		if regexp.MustCompile(`^\d+ c?cw$`).MatchString(s) {
+			t.Errorf("connection sheets print a jumper's way as %q, which reads as a coil sense", s)
 		}
 	}
 }
